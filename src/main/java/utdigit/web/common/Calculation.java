@@ -1,0 +1,25 @@
+package utdigit.web.common;
+
+/**
+ * One calculation of the API: how a validated request of type {@code Q} becomes an answer. The
+ * same object serves the single endpoint, its batch form, sheets and stamp verification, so each
+ * calculation has exactly one path from request to answer.
+ *
+ * @param <Q> the request record (Bean Validation annotated)
+ */
+public interface Calculation<Q> {
+
+    /** The endpoint's path name, e.g. {@code sampling-assessments}; also the stamp's calculation. */
+    String name();
+
+    Class<Q> requestType();
+
+    /**
+     * The answer record for a request that passed Bean Validation: the flat result fields plus
+     * inputs, velocity_source (where a velocity is used), warnings and references.
+     *
+     * @throws InputProblem for fields wrong together (400)
+     * @throws utdigit.core.common.CalculationException from the core (400 or 422)
+     */
+    Object answer(Q request);
+}

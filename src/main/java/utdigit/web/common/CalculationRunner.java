@@ -1,0 +1,143 @@
+package utdigit.web.common;
+
+import jakarta.validation.ConstraintViolation;
+import jakarta.validation.Validator;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.springframework.stereotype.Component;
+import tools.jackson.core.JacksonException;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ArrayNode;
+import tools.jackson.databind.node.ObjectNode;
+import utdigit.web.stamp.Stamper;
+
+/**
+ * The one path from a request to a stamped answer, shared by the single endpoints, the batch
+ * endpoints, technique sheets and stamp verification: Bean Validation (pointers to the caller's
+ * fields), the calculation, a check that every number in the answer is finite, and the stamp.
+ */
+@Component
+public class CalculationRunner {
+    private final Map<String, Calculation<?>> byName = new LinkedHashMap<>();
+    private final Validator validator;
+    private final JsonMapper mapper;
+    private final Stamper stamper;
+
+    CalculationRunner(List<Calculation<?>> calculations, Validator validator, JsonMapper mapper, Stamper stamper) {
+        for (Calculation<?> c : calculations) {
+            if (byName.put(c.name(), c) != null) {
+                throw new IllegalStateException("two calculations named " + c.name());
+            }
+        }
+        this.validator = validator;
+        this.mapper = mapper;
+        this.stamper = stamper;
+    }
+
+    /** The names of every calculation, e.g. for the batch endpoints. */
+    public Set<String> names() {
+        return byName.keySet();
+    }
+
+    public Calculation<?> calculation(String name) {
+        Calculation<?> c = byName.get(name);
+        if (c == null) {
+            throw new NotFoundProblem("no calculation named '" + name + "'");
+        }
+        return c;
+    }
+
+    /** Answers a request already read by the HTTP layer. */
+    public <Q> ObjectNode run(String name, Q request) {
+        @SuppressWarnings("unchecked")
+        Calculation<Q> c = (Calculation<Q>) calculation(name);
+        if (request == null) {
+            throw new InputProblem(ProblemType.MALFORMED_BODY, "the request body is empty", List.of(new FieldError("", "a JSON object is required")));
+        }
+        return answer(c, request);
+    }
+
+    /** Answers a request given as a JSON tree (batch rows, stamp verification), strictly read. */
+    public ObjectNode runTree(String name, JsonNode body) {
+        return readAndAnswer(calculation(name), body);
+    }
+
+    private <Q> ObjectNode readAndAnswer(Calculation<Q> c, JsonNode body) {
+        return answer(c, read(c, body));
+    }
+
+    /** Reads a JSON tree into the calculation's request record with the strict mapper. */
+    public <Q> Q read(Calculation<Q> c, JsonNode body) {
+        if (body == null || !body.isObject()) {
+            throw InputProblem.invalid("", InputMessages.OBJECT);
+        }
+        try {
+            return mapper.treeToValue(body, c.requestType());
+        } catch (JacksonException e) {
+            throw JacksonProblems.toInputProblem(e);
+        }
+    }
+
+    private <Q> ObjectNode answer(Calculation<Q> c, Q request) {
+        validate(request);
+        Object answer = c.answer(request);
+        ObjectNode tree = mapper.valueToTree(answer);
+        List<String> nonFinite = new ArrayList<>();
+        replaceNonFinite(tree, "", nonFinite);
+        if (!nonFinite.isEmpty()) {
+            ArrayNode warnings = tree.has("warnings") ? (ArrayNode) tree.get("warnings") : tree.putArray("warnings");
+            warnings.addObject()
+                    .put("code", "RESULT_NOT_REPRESENTABLE")
+                    .put("message", "no finite value exists for " + String.join(", ", nonFinite)
+                            + " with these inputs; returned as null");
+        }
+        return stamper.stamp(c.name(), tree);
+    }
+
+    /** Bean Validation of a request record; every violation becomes a field error. */
+    public void validate(Object request) {
+        Set<ConstraintViolation<Object>> violations = validator.validate(request);
+        if (!violations.isEmpty()) {
+            List<FieldError> errors = new ArrayList<>();
+            for (ConstraintViolation<Object> v : violations) {
+                errors.add(new FieldError(PropertyPointers.of(v), v.getMessage()));
+            }
+            errors.sort(Comparator.comparing(FieldError::pointer).thenComparing(FieldError::detail));
+            throw InputProblem.invalid(errors);
+        }
+    }
+
+    private static void replaceNonFinite(JsonNode node, String pointer, List<String> found) {
+        if (node instanceof ObjectNode object) {
+            for (Map.Entry<String, JsonNode> e : new ArrayList<>(object.properties())) {
+                JsonNode v = e.getValue();
+                String p = JsonPointers.child(pointer, e.getKey());
+                if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
+                    object.putNull(e.getKey());
+                    found.add(p);
+                } else {
+                    replaceNonFinite(v, p, found);
+                }
+            }
+        } else if (node instanceof ArrayNode array) {
+            for (int i = 0; i < array.size(); i++) {
+                JsonNode v = array.get(i);
+                if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
+                    array.set(i, array.nullNode());
+                    found.add(pointer + "/" + i);
+                } else {
+                    replaceNonFinite(v, pointer + "/" + i, found);
+                }
+            }
+        } else if (node != null && node.isString() && ("NaN".equals(node.stringValue())
+                || "Infinity".equals(node.stringValue()) || "-Infinity".equals(node.stringValue()))) {
+            // Jackson may write non-finite doubles as strings; such values are never valid results.
+            found.add(pointer);
+        }
+    }
+}

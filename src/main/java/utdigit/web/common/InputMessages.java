@@ -1,0 +1,15 @@
+package utdigit.web.common;
+
+/** The fixed wording of input problems, in the caller's terms. */
+final class InputMessages {
+    private InputMessages() {}
+
+    static final String FINITE_NUMBER = "must be a finite JSON number (not quoted, not NaN or Infinity)";
+    static final String WHOLE_NUMBER = "must be a whole number (an integral value such as 2 or 2.0)";
+    static final String TEXT = "must be a JSON string";
+    static final String OBJECT = "must be a JSON object";
+    static final String ARRAY = "must be a JSON array";
+    static final String UNKNOWN_PROPERTY = "is not a property of this request";
+    static final String DUPLICATE_KEY = "appears more than once in the same object";
+    static final String MALFORMED = "the body is not well-formed JSON";
+}

@@ -1,0 +1,60 @@
+package utdigit.web.common;
+
+import com.fasterxml.jackson.annotation.JsonInclude;
+import org.springframework.beans.factory.annotation.Value;
+import org.springframework.context.annotation.Bean;
+import org.springframework.context.annotation.Configuration;
+import org.springframework.http.ProblemDetail;
+import org.springframework.http.converter.json.ProblemDetailJacksonMixin;
+import tools.jackson.core.StreamReadConstraints;
+import tools.jackson.core.StreamReadFeature;
+import tools.jackson.core.json.JsonFactory;
+import tools.jackson.databind.DeserializationFeature;
+import tools.jackson.databind.cfg.EnumFeature;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * The one JSON mapper of the service: snake_case properties, nulls omitted (an empty
+ * {@link java.util.Optional} is written as null: "does not exist"), and strict reading (unknown
+ * properties, duplicate keys, trailing tokens, numbers for enums, quoted numbers, non-finite numbers
+ * and fractions into integers are all rejected). Read limits are explicit, not library defaults.
+ */
+@Configuration(proxyBeanMethods = false)
+class JsonConfiguration {
+
+    @Bean
+    JsonMapper jsonMapper(
+            @Value("${utdigit.json.max-nesting-depth:32}") int maxNestingDepth,
+            @Value("${utdigit.json.max-number-length:64}") int maxNumberLength,
+            @Value("${utdigit.json.max-string-length:10000}") int maxStringLength,
+            @Value("${utdigit.json.max-name-length:200}") int maxNameLength) {
+        StreamReadConstraints limits = StreamReadConstraints.builder()
+                .maxNestingDepth(maxNestingDepth)
+                .maxNumberLength(maxNumberLength)
+                .maxStringLength(maxStringLength)
+                .maxNameLength(maxNameLength)
+                .build();
+        JsonFactory factory = JsonFactory.builder().streamReadConstraints(limits).build();
+        return StrictJson.configure(JsonMapper.builder(factory)).build();
+    }
+
+    /** The strict settings, shared with tests and tools that need the same mapper without Spring. */
+    static final class StrictJson {
+        private StrictJson() {}
+
+        static JsonMapper.Builder configure(JsonMapper.Builder builder) {
+            return builder
+                    .propertyNamingStrategy(new ContractNaming.Jackson3())
+                    .changeDefaultPropertyInclusion(incl -> JsonInclude.Value.construct(
+                            JsonInclude.Include.NON_NULL, JsonInclude.Include.NON_NULL))
+                    .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES,
+                            DeserializationFeature.FAIL_ON_TRAILING_TOKENS,
+                            DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
+                    .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
+                    .enable(EnumFeature.FAIL_ON_NUMBERS_FOR_ENUMS)
+                    .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                    .addMixIn(ProblemDetail.class, ProblemDetailJacksonMixin.class)
+                    .addModule(StrictScalars.module());
+        }
+    }
+}

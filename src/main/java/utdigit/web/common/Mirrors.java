@@ -1,0 +1,124 @@
+package utdigit.web.common;
+
+import java.util.ArrayList;
+import java.util.List;
+import utdigit.core.common.CalculationException;
+import utdigit.core.common.Units;
+import utdigit.core.materials.Material;
+import utdigit.core.materials.MaterialCatalog;
+import utdigit.core.materials.VelocitySource;
+import utdigit.core.materials.WaveMode;
+
+/**
+ * Resolution of the inputs that may be given in more than one form: a length as {@code x_mm} or
+ * {@code x_in}, a velocity as {@code velocity_m_per_s}, {@code velocity_in_per_us} or
+ * {@code material}. Exactly one form; two, or none where one is required, is a 400 naming the
+ * fields. Values in inches are converted with 25.4 mm/in exactly and range-checked after conversion.
+ */
+public final class Mirrors {
+    private Mirrors() {}
+
+    /** Lowest velocity accepted, m/s (DESIGN ranges). */
+    public static final double MIN_VELOCITY_M_PER_S = 100.0;
+    /** Highest velocity accepted, m/s. */
+    public static final double MAX_VELOCITY_M_PER_S = 20_000.0;
+    /** Longest length accepted, mm (100 m). */
+    public static final double MAX_LENGTH_MM = 100_000.0;
+
+    /**
+     * The length in mm of the input {@code base} given as {@code base_mm} or {@code base_in}, or null
+     * when neither is given and it is optional.
+     */
+    public static Double lengthMm(FieldErrors errors, String base, Double mm, Double in, boolean required) {
+        String mmName = base + "_mm";
+        String inName = base + "_in";
+        if (mm != null && in != null) {
+            String detail = "give " + base + " once: " + mmName + " or " + inName + ", not both";
+            errors.add(mmName, detail).add(inName, detail);
+            return null;
+        }
+        if (mm == null && in == null) {
+            if (required) {
+                errors.add(mmName, base + " is required: give " + mmName + " or " + inName);
+            }
+            return null;
+        }
+        if (mm != null) {
+            return mm;
+        }
+        double converted = Units.inToMm(in);
+        if (!(converted > 0 && converted <= MAX_LENGTH_MM)) {
+            errors.add(inName, "must be above 0 and at most " + (MAX_LENGTH_MM / Units.MM_PER_IN) + " in (100 m)");
+            return null;
+        }
+        return converted;
+    }
+
+    /**
+     * The velocity of {@code f}: the caller's (m/s or in/us) or a built-in material's; null when
+     * none is given and it is optional.
+     *
+     * @throws CalculationException IMPOSSIBLE for a shear wave in water (422)
+     */
+    public static VelocitySource velocity(FieldErrors errors, VelocityFields f, boolean required) {
+        List<String> given = new ArrayList<>();
+        if (f.velocityMPerS() != null) {
+            given.add("velocity_m_per_s");
+        }
+        if (f.velocityInPerUs() != null) {
+            given.add("velocity_in_per_us");
+        }
+        if (f.material() != null) {
+            given.add("material");
+        }
+        if (f.material() == null) {
+            if (f.waveMode() != null) {
+                errors.add("wave_mode", "applies only with material; a velocity given as a number is already the wave mode's");
+            }
+            if (f.temperatureC() != null) {
+                errors.add("temperature_c", "applies only with material water");
+            }
+        }
+        if (given.size() > 1) {
+            String detail = "give one velocity source, not " + String.join(" and ", given)
+                    + " (velocity_m_per_s, velocity_in_per_us or material)";
+            for (String name : given) {
+                errors.add(name, detail);
+            }
+            return null;
+        }
+        if (given.isEmpty()) {
+            if (required) {
+                errors.add("velocity_m_per_s",
+                        "a velocity is required: give velocity_m_per_s, velocity_in_per_us or material");
+            }
+            return null;
+        }
+        if (f.velocityMPerS() != null) {
+            return VelocitySource.caller(f.velocityMPerS());
+        }
+        if (f.velocityInPerUs() != null) {
+            double mPerS = Units.inPerUsToMPerS(f.velocityInPerUs());
+            if (!(mPerS >= MIN_VELOCITY_M_PER_S && mPerS <= MAX_VELOCITY_M_PER_S)) {
+                errors.add("velocity_in_per_us", "must correspond to 100 to 20000 m/s ("
+                        + Units.mPerSToInPerUs(MIN_VELOCITY_M_PER_S) + " to "
+                        + Units.mPerSToInPerUs(MAX_VELOCITY_M_PER_S) + " in/us)");
+                return null;
+            }
+            return VelocitySource.caller(mPerS);
+        }
+        Material material = MaterialCatalog.find(f.material()).orElse(null);
+        if (material == null) {
+            errors.add("material", "unknown material '" + f.material() + "'; built-in materials: "
+                    + String.join(", ", MaterialCatalog.ids()));
+            return null;
+        }
+        if (!material.liquid() && f.temperatureC() != null) {
+            errors.add("temperature_c", "applies only with material water; solids' table values are not "
+                    + "temperature-corrected");
+            return null;
+        }
+        WaveMode mode = f.waveMode() == null ? WaveMode.LONGITUDINAL : f.waveMode();
+        return VelocitySource.ofMaterial(material, mode, f.temperatureC());
+    }
+}

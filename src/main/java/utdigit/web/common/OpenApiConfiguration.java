@@ -1,0 +1,49 @@
+package utdigit.web.common;
+
+import io.swagger.v3.core.jackson.ModelResolver;
+import io.swagger.v3.core.util.ObjectMapperFactory;
+import io.swagger.v3.oas.models.OpenAPI;
+import io.swagger.v3.oas.models.info.Info;
+import io.swagger.v3.oas.models.info.License;
+import org.springframework.beans.factory.annotation.Value;
+import org.springframework.context.annotation.Bean;
+import org.springframework.context.annotation.Configuration;
+
+/**
+ * The OpenAPI 3.1 document's header, and the model resolver that names schema properties by the
+ * same snake_case rule as the JSON mapper.
+ */
+@Configuration(proxyBeanMethods = false)
+class OpenApiConfiguration {
+
+    static final String DESCRIPTION = """
+            Calculations that show whether a digital UT instrument's digitization settings are adequate \
+            for a technique sheet: pulse and beam parameters, sampling adequacy (samples per period, \
+            aliasing, amplitude loss), quantization error in dB, time-of-flight and thickness \
+            resolution, acquisition budget (data volume, scan speed, wrap-around PRF), and validation \
+            of whole technique sheets against requirement profiles, with tamper-evident stamps.
+
+            Units are in every quantity's name (_mhz, _us, _ns, _mm, _in, _m_per_s, _db, _deg, \
+            _percent_fsh, _megabytes with MB = 10^6 bytes). Errors are RFC 9457 problems \
+            (application/problem+json) with errors[{pointer, detail}].
+
+            Caution: results support a qualified examiner; they never replace the qualification of a \
+            procedure. The governing code edition, local codes and licensed practice decide. Built-in \
+            velocities are planning defaults: measure the part's velocity for sizing.""";
+
+    @Bean
+    OpenAPI serviceOpenApi(@Value("${utdigit.service-version}") String version) {
+        return new OpenAPI().info(new Info()
+                .title("UT digitization calculation service")
+                .version(version)
+                .description(DESCRIPTION)
+                .license(new License().name("Apache-2.0").identifier("Apache-2.0")));
+    }
+
+    @Bean
+    ModelResolver contractNamingModelResolver() {
+        var mapper = ObjectMapperFactory.createJson31();
+        mapper.setPropertyNamingStrategy(new ContractNaming.Jackson2());
+        return new ModelResolver(mapper);
+    }
+}

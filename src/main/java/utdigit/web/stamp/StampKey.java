@@ -1,0 +1,73 @@
+package utdigit.web.stamp;
+
+import java.nio.charset.StandardCharsets;
+import java.security.InvalidKeyException;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.Base64;
+import java.util.HexFormat;
+import javax.crypto.Mac;
+import javax.crypto.spec.SecretKeySpec;
+
+/**
+ * Hashing and the optional HMAC-SHA256 signing key of stamps. The key is never logged or
+ * returned; {@link #toString()} hides it.
+ */
+public final class StampKey {
+    private final byte[] key;
+    private final String keyId;
+
+    private StampKey(byte[] key, String keyId) {
+        this.key = key;
+        this.keyId = keyId;
+    }
+
+    /** A key from its text (UTF-8 bytes) and id; an empty or null text means "no key". */
+    public static StampKey of(String keyText, String keyId) {
+        if (keyText == null || keyText.isEmpty()) {
+            return new StampKey(null, null);
+        }
+        String id = keyId == null || keyId.isBlank() ? "default" : keyId;
+        return new StampKey(keyText.getBytes(StandardCharsets.UTF_8), id);
+    }
+
+    public boolean configured() {
+        return key != null;
+    }
+
+    public String keyId() {
+        return keyId;
+    }
+
+    /** Lower-case hex SHA-256 of {@code bytes}. */
+    public static String sha256Hex(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
+    }
+
+    /** Unpadded base64url HMAC-SHA256 of {@code bytes}; only when {@link #configured()}. */
+    public String sign(byte[] bytes) {
+        try {
+            Mac mac = Mac.getInstance("HmacSHA256");
+            mac.init(new SecretKeySpec(key, "HmacSHA256"));
+            return Base64.getUrlEncoder().withoutPadding().encodeToString(mac.doFinal(bytes));
+        } catch (NoSuchAlgorithmException | InvalidKeyException e) {
+            throw new IllegalStateException("HmacSHA256 is required of every Java platform", e);
+        }
+    }
+
+    /** Whether {@code signature} is this key's signature of {@code bytes} (constant-time compare). */
+    public boolean verify(byte[] bytes, String signature) {
+        byte[] expected = sign(bytes).getBytes(StandardCharsets.US_ASCII);
+        byte[] given = signature.getBytes(StandardCharsets.US_ASCII);
+        return MessageDigest.isEqual(expected, given);
+    }
+
+    @Override
+    public String toString() {
+        return configured() ? "StampKey[" + keyId + "]" : "StampKey[none]";
+    }
+}
