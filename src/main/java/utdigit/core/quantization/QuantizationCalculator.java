@@ -1,0 +1,366 @@
+package utdigit.core.quantization;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import utdigit.core.common.CalculationException;
+import utdigit.core.common.Checks;
+import utdigit.core.common.Decibels;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Warning;
+
+/**
+ * Amplitude digitization: how finely an N-bit converter knows an echo's height, and whether a
+ * height (an echo, or a reference reflector at an evaluation level) is read within a dB tolerance.
+ *
+ * <p>Every height is a displayed height in %FSH, after a digital gain G applied to the data (soft
+ * gain). Soft gain scales heights and the LSB alike (LSB_displayed = LSB 10^(G/20)), so every
+ * error figure is the same as at the converter: soft gain adds no resolution. A displayed height
+ * the converter could not have recorded (h 10^(-G/20) above 100 %FSH) is impossible.
+ */
+public final class QuantizationCalculator {
+
+    /** The signal height lies below the lowest height read within the tolerance. */
+    public static final String SIGNAL_HEIGHT_BELOW_MINIMUM = "SIGNAL_HEIGHT_BELOW_MINIMUM";
+    /** The signal height is smaller than one displayed LSB. */
+    public static final String SIGNAL_HEIGHT_BELOW_ONE_LSB = "SIGNAL_HEIGHT_BELOW_ONE_LSB";
+    /** The signal height is within the quantizer's low bound: its reading can be 0, no finite dB. */
+    public static final String AMPLITUDE_ERROR_UNDER_UNDEFINED = "AMPLITUDE_ERROR_UNDER_UNDEFINED";
+    /** The evaluation height lies below the lowest height read within the tolerance. */
+    public static final String EVALUATION_HEIGHT_BELOW_MINIMUM = "EVALUATION_HEIGHT_BELOW_MINIMUM";
+    /** The evaluation height is smaller than one displayed LSB. */
+    public static final String EVALUATION_HEIGHT_BELOW_ONE_LSB = "EVALUATION_HEIGHT_BELOW_ONE_LSB";
+    /** The evaluation height is within the quantizer's low bound: no finite dB. */
+    public static final String EVALUATION_ERROR_UNDER_UNDEFINED = "EVALUATION_ERROR_UNDER_UNDEFINED";
+    /** The evaluation height is above full screen on the display, though within the converter's range. */
+    public static final String EVALUATION_HEIGHT_ABOVE_FULL_SCREEN = "EVALUATION_HEIGHT_ABOVE_FULL_SCREEN";
+    /** The minimum height for the tolerance lies above the highest height that can be displayed. */
+    public static final String MINIMUM_HEIGHT_ABOVE_FULL_SCREEN = "MINIMUM_HEIGHT_ABOVE_FULL_SCREEN";
+    /** The ideal SQNR of a full-scale sine is not defined for rectified data. */
+    public static final String IDEAL_SQNR_NOT_APPLICABLE = "IDEAL_SQNR_NOT_APPLICABLE";
+    /** What averaging improves and what it does not. */
+    public static final String AVERAGING_NOISE_ONLY = "AVERAGING_NOISE_ONLY";
+
+    /** Full screen height, %FSH. */
+    static final double FULL_SCREEN_PERCENT_FSH = 100.0;
+
+    /**
+     * Relative allowance above full scale when checking that the converter could reach a displayed
+     * height, so that h = 100 10^(G/20) computed in floating point is not rejected for one ulp.
+     */
+    static final double FULL_SCALE_RELATIVE_ALLOWANCE = 1e-12;
+
+    /** 10 log10(1.5) dB: the power ratio of a full-scale sine (A^2/2) to q^2/12 beyond 2^(2N). */
+    private static final double SINE_TO_UNIFORM_NOISE_DB = 10.0 * StrictMath.log10(1.5);
+
+    /** 20 / ln(10): dB of an amplitude ratio per unit of its natural logarithm. */
+    private static final double DB_PER_NEPER_OF_AMPLITUDE = 20.0 / StrictMath.log(10.0);
+
+    private QuantizationCalculator() {}
+
+    /**
+     * Computes the assessment, applying the contract's defaults.
+     *
+     * @throws CalculationException notApplicable (400) when only one of reference height and
+     *     evaluation level is given; impossible (422) for MAX_CODE with one bit of RF, or for a
+     *     displayed height (signal, reference or evaluation) the converter could not reach;
+     *     invalid for inputs outside a formula's domain (the web layer checks ranges first)
+     */
+    public static QuantizationResult compute(QuantizationInput in) {
+        java.util.Objects.requireNonNull(in, "input");
+        int bitDepth = in.bitDepth();
+        if (bitDepth < 1 || bitDepth > 32) {
+            throw CalculationException.invalid("bit_depth", bitDepth, "must be an integer from 1 to 32");
+        }
+        DigitizedSignal signal = in.digitizedSignal() == null ? DigitizedSignal.RF : in.digitizedSignal();
+        Quantizer quantizer = in.quantizer() == null ? Quantizer.ROUNDING : in.quantizer();
+        CodeMapping mapping = in.codeMapping() == null ? CodeMapping.FSR_OVER_2N : in.codeMapping();
+        double gainDb = in.digitalGainDb() == null ? 0.0 : Checks.finite("digital_gain_db", in.digitalGainDb());
+
+        Double signalHeight = in.signalHeightPercentFsh();
+        if (signalHeight != null) {
+            Checks.positive("signal_height_percent_fsh", signalHeight);
+        }
+        Double toleranceDb = in.amplitudeToleranceDb();
+        if (toleranceDb != null) {
+            Checks.positive("amplitude_tolerance_db", toleranceDb);
+        }
+        Double referenceHeight = in.referenceHeightPercentFsh();
+        Double evaluationLevelDb = in.evaluationLevelDb();
+        if (referenceHeight != null && evaluationLevelDb == null) {
+            throw CalculationException.notApplicable("reference_height_percent_fsh",
+                    "reference_height_percent_fsh applies only together with evaluation_level_db");
+        }
+        if (evaluationLevelDb != null && referenceHeight == null) {
+            throw CalculationException.notApplicable("evaluation_level_db",
+                    "evaluation_level_db applies only together with reference_height_percent_fsh");
+        }
+        if (referenceHeight != null) {
+            Checks.positive("reference_height_percent_fsh", referenceHeight);
+            Checks.finite("evaluation_level_db", evaluationLevelDb);
+        }
+        Integer averaging = in.averaging();
+        if (averaging != null) {
+            Checks.atLeastOne("averaging", averaging);
+        }
+
+        List<Warning> warnings = new ArrayList<>();
+        List<Reference> references = new ArrayList<>();
+
+        long levels = 1L << bitDepth;
+        double gainRatio = Decibels.toRatio(gainDb);
+        double lsb = mapping.lsbPercentFsh(signal, bitDepth) * gainRatio;
+        double dynamicRangeDb = Decibels.fromRatio(FULL_SCREEN_PERCENT_FSH / lsb);
+        double lowBoundPercentFsh = quantizer.lowBoundLsbFraction() * lsb;
+        double highBoundPercentFsh = quantizer.highBoundLsbFraction(signal) * lsb;
+        references.add(Reference.of("levels", "2^N codes of an N-bit converter (definition)"));
+        references.add(lsbReference(signal, mapping));
+        if (signal == DigitizedSignal.RF) {
+            references.add(Reference.of("rectifying RF after digitizing",
+                    "an RF record rectified after digitizing keeps 2^(N-1) levels for 0..100 %FSH, one bit"
+                            + " fewer than digitizing the rectified signal (derived from the code range)"));
+        }
+        if (gainDb != 0.0) {
+            references.add(Reference.of("digital gain",
+                    "gain G after digitizing scales heights and the LSB alike: LSB_displayed = LSB 10^(G/20);"
+                            + " every height figure uses it, the SQNR does not change: soft gain adds no resolution"
+                            + " (derived)"));
+        }
+        references.add(Reference.of("dynamic range",
+                "full screen to one displayed LSB: 20 log10(100 %FSH / LSB) dB (definition)"));
+
+        Optional<Double> idealSqnrDb = idealSqnrDb(signal, bitDepth);
+        if (idealSqnrDb.isPresent()) {
+            references.add(Reference.of("ideal SQNR",
+                    "20 log10(2^N) + 10 log10(1.5) dB for a full-scale sine and an ideal mid-rise quantizer, the exact"
+                            + " form of 6.02 N + 1.76 dB (Bennett 1948; W. Kester, Analog Devices MT-001); a numerically"
+                            + " quantized full-scale sine comes out 0.01-0.14 dB lower at 16-8 bits; independent of"
+                            + " code_mapping and digital_gain_db"));
+        } else {
+            warnings.add(Warning.of(IDEAL_SQNR_NOT_APPLICABLE,
+                    "ideal_sqnr_db is the ratio of a full-scale sine to its quantization noise and does not apply to"
+                            + " digitized_signal RECTIFIED; it is null"));
+        }
+
+        Double errorOverDb = null;
+        Optional<Double> errorUnderDb = null;
+        if (signalHeight != null) {
+            requireReachable(signalHeight, gainRatio, gainDb, "signal_height_percent_fsh");
+            references.add(errorReference(quantizer, signal));
+            errorOverDb = overErrorDb(signalHeight, highBoundPercentFsh);
+            errorUnderDb = underErrorDb(signalHeight, lowBoundPercentFsh);
+            if (signalHeight < lsb) {
+                warnings.add(Warning.of(SIGNAL_HEIGHT_BELOW_ONE_LSB, String.format(Locale.ROOT,
+                        "signal_height_percent_fsh %s is below one LSB (%s %%FSH displayed): the echo spans"
+                                + " less than one code", fmt(signalHeight), fmt(lsb))));
+            }
+            if (errorUnderDb.isEmpty()) {
+                warnings.add(Warning.of(AMPLITUDE_ERROR_UNDER_UNDEFINED, String.format(Locale.ROOT,
+                        "signal_height_percent_fsh %s is at or below the quantizer's low bound (%s %%FSH with %s):"
+                                + " it can read as 0, so amplitude_error_under_db has no finite value; it is null",
+                        fmt(signalHeight), fmt(lowBoundPercentFsh), quantizer)));
+            }
+        }
+
+        Double minimumHeight = null;
+        Double minimumHeightDb = null;
+        if (toleranceDb != null) {
+            minimumHeight = minimumHeightPercentFsh(lowBoundPercentFsh, toleranceDb);
+            minimumHeightDb = Decibels.fromRatio(minimumHeight / FULL_SCREEN_PERCENT_FSH);
+            references.add(minimumHeightReference(quantizer));
+            double highestDisplayable = FULL_SCREEN_PERCENT_FSH * StrictMath.min(1.0, gainRatio);
+            if (minimumHeight > highestDisplayable) {
+                warnings.add(Warning.of(MINIMUM_HEIGHT_ABOVE_FULL_SCREEN, String.format(Locale.ROOT,
+                        "minimum_height_percent_fsh %s is above the highest height that can be displayed and"
+                                + " recorded (%s %%FSH): no echo is read within amplitude_tolerance_db %s",
+                        fmt(minimumHeight), fmt(highestDisplayable), fmt(toleranceDb))));
+            }
+            if (signalHeight != null && signalHeight < minimumHeight) {
+                warnings.add(Warning.of(SIGNAL_HEIGHT_BELOW_MINIMUM, String.format(Locale.ROOT,
+                        "signal_height_percent_fsh %s is below minimum_height_percent_fsh %s: its reading can be"
+                                + " off by more than amplitude_tolerance_db %s",
+                        fmt(signalHeight), fmt(minimumHeight), fmt(toleranceDb))));
+            }
+        }
+
+        Double evaluationHeight = null;
+        Optional<Double> evaluationErrorUnderDb = null;
+        if (referenceHeight != null) {
+            requireReachable(referenceHeight, gainRatio, gainDb, "reference_height_percent_fsh");
+            evaluationHeight = referenceHeight * Decibels.toRatio(evaluationLevelDb);
+            requireReachableEvaluation(evaluationHeight, referenceHeight, evaluationLevelDb, gainRatio, gainDb);
+            references.add(Reference.of("evaluation height",
+                    "h = h_ref 10^(L/20) for the evaluation level L dB (definition of a dB amplitude level)"));
+            if (signalHeight == null) {
+                references.add(errorReference(quantizer, signal));
+            }
+            evaluationErrorUnderDb = underErrorDb(evaluationHeight, lowBoundPercentFsh);
+            if (evaluationHeight > FULL_SCREEN_PERCENT_FSH) {
+                warnings.add(Warning.of(EVALUATION_HEIGHT_ABOVE_FULL_SCREEN, String.format(Locale.ROOT,
+                        "evaluation_height_percent_fsh %s is above full screen on the display: digital_gain_db lifts"
+                                + " it off the screen; the recorded data hold it",
+                        fmt(evaluationHeight))));
+            }
+            if (evaluationHeight < lsb) {
+                warnings.add(Warning.of(EVALUATION_HEIGHT_BELOW_ONE_LSB, String.format(Locale.ROOT,
+                        "evaluation_height_percent_fsh %s (reference_height_percent_fsh %s at evaluation_level_db"
+                                + " %s) is below one LSB (%s %%FSH displayed)",
+                        fmt(evaluationHeight), fmt(referenceHeight), fmt(evaluationLevelDb), fmt(lsb))));
+            }
+            if (evaluationErrorUnderDb.isEmpty()) {
+                warnings.add(Warning.of(EVALUATION_ERROR_UNDER_UNDEFINED, String.format(Locale.ROOT,
+                        "evaluation_height_percent_fsh %s is at or below the quantizer's low bound (%s %%FSH with"
+                                + " %s): it can read as 0, so evaluation_error_under_db has no finite value; it is null",
+                        fmt(evaluationHeight), fmt(lowBoundPercentFsh), quantizer)));
+            }
+            if (minimumHeight != null && evaluationHeight < minimumHeight) {
+                warnings.add(Warning.of(EVALUATION_HEIGHT_BELOW_MINIMUM, String.format(Locale.ROOT,
+                        "evaluation_height_percent_fsh %s is below minimum_height_percent_fsh %s: the evaluation"
+                                + " level is not read within amplitude_tolerance_db %s",
+                        fmt(evaluationHeight), fmt(minimumHeight), fmt(toleranceDb))));
+            }
+        }
+
+        Double averagingSnrGainDb = null;
+        if (averaging != null) {
+            averagingSnrGainDb = averagingSnrGainDb(averaging);
+            references.add(Reference.of("averaging",
+                    "10 log10(M) dB for the mean of M acquisitions with uncorrelated noise (derived: the noise"
+                            + " power of the mean falls as 1/M)"));
+            warnings.add(Warning.of(AVERAGING_NOISE_ONLY, String.format(Locale.ROOT,
+                    "averaging %d improves the SNR of uncorrelated noise by averaging_snr_gain_db %s; it does not"
+                            + " shrink the quantization step of a single shot, which every other figure here holds",
+                    averaging, fmt(averagingSnrGainDb))));
+        }
+
+        return new QuantizationResult(signal, quantizer, mapping, gainDb, levels, lsb, dynamicRangeDb, idealSqnrDb,
+                errorOverDb, errorUnderDb, minimumHeight, minimumHeightDb, evaluationHeight, evaluationErrorUnderDb,
+                averagingSnrGainDb, warnings, references);
+    }
+
+    /**
+     * Ideal signal-to-quantization-noise ratio of a full-scale sine through an ideal N-bit mid-rise
+     * quantizer: 20 log10(2^N) + 10 log10(1.5) dB, the exact form of 6.02 N + 1.76 dB (signal power
+     * A^2/2 over the uniform noise q^2/12 with q = 2A/2^N); 1.76 dB at 0 bits rising 6.02 dB per bit.
+     * Does not depend on the code mapping or on a gain after digitizing. Empty for RECTIFIED data,
+     * where a full-scale sine does not exist. Reference: Bennett 1948; W. Kester, Analog Devices
+     * MT-001.
+     */
+    static Optional<Double> idealSqnrDb(DigitizedSignal signal, int bitDepth) {
+        if (signal != DigitizedSignal.RF) {
+            return Optional.empty();
+        }
+        return Optional.of(20.0 * StrictMath.log10((double) (1L << bitDepth)) + SINE_TO_UNIFORM_NOISE_DB);
+    }
+
+    /**
+     * Worst reading above a height h when a reading can lie up to b above it: 20 log10((h + b)/h)
+     * dB, >= 0 (0 when b = 0), computed as 20 log1p(b/h) / ln(10) to keep its digits when b/h is
+     * small. Heights and b in the same %FSH. Reference: (derived) from the quantizer's error bound.
+     */
+    static double overErrorDb(double heightPercentFsh, double highBoundPercentFsh) {
+        return DB_PER_NEPER_OF_AMPLITUDE * StrictMath.log1p(highBoundPercentFsh / heightPercentFsh);
+    }
+
+    /**
+     * Worst reading below a height h when a reading can lie up to b below it: 20 log10((h - b)/h)
+     * dB, negative, computed as 20 log1p(-b/h) / ln(10); exists for h > b (at h <= b the reading can
+     * be 0: empty). Heights and b in the same %FSH. Reference: (derived) from the quantizer's error
+     * bound.
+     */
+    static Optional<Double> underErrorDb(double heightPercentFsh, double lowBoundPercentFsh) {
+        if (!(heightPercentFsh > lowBoundPercentFsh)) {
+            return Optional.empty();
+        }
+        return Optional.of(DB_PER_NEPER_OF_AMPLITUDE * StrictMath.log1p(-lowBoundPercentFsh / heightPercentFsh));
+    }
+
+    /**
+     * Lowest height whose worst reading stays within X dB: h_min = b / (1 - 10^(-X/20)) %FSH for a
+     * low bound b (LSB/2 for ROUNDING, LSB for TRUNCATION), X > 0 dB. The under error decides: for
+     * every height |20 log10(1 - b/h)| exceeds 20 log10(1 + b/h). 1 - 10^(-X/20) is computed as
+     * -expm1(-X ln(10)/20) to keep its digits at small X. Reference: the inverse of the worst-case
+     * error (derived).
+     */
+    static double minimumHeightPercentFsh(double lowBoundPercentFsh, double toleranceDb) {
+        double oneMinusRatio = -StrictMath.expm1(-toleranceDb * StrictMath.log(10.0) / 20.0);
+        return lowBoundPercentFsh / oneMinusRatio;
+    }
+
+    /**
+     * Signal-to-noise gain of averaging M acquisitions with uncorrelated noise: 10 log10(M) dB,
+     * M >= 1. Reference: (derived) the noise power of a mean of M uncorrelated samples is 1/M.
+     */
+    static double averagingSnrGainDb(int averaging) {
+        return 10.0 * StrictMath.log10(averaging);
+    }
+
+    private static void requireReachable(double heightPercentFsh, double gainRatio, double gainDb, String field) {
+        double atConverterPercentFsh = heightPercentFsh / gainRatio;
+        if (atConverterPercentFsh > FULL_SCREEN_PERCENT_FSH * (1.0 + FULL_SCALE_RELATIVE_ALLOWANCE)) {
+            String message = String.format(Locale.ROOT,
+                    "%s %s displayed with digital_gain_db %s needs %s %%FSH at the converter, above its full scale"
+                            + " of 100 %%FSH: the converter could not have recorded it",
+                    field, fmt(heightPercentFsh), fmt(gainDb), fmt(atConverterPercentFsh));
+            throw gainDb == 0.0
+                    ? CalculationException.impossible(message, field)
+                    : CalculationException.impossible(message, field, "digital_gain_db");
+        }
+    }
+
+    private static void requireReachableEvaluation(double evaluationHeightPercentFsh, double referenceHeightPercentFsh,
+            double evaluationLevelDb, double gainRatio, double gainDb) {
+        double atConverterPercentFsh = evaluationHeightPercentFsh / gainRatio;
+        if (atConverterPercentFsh > FULL_SCREEN_PERCENT_FSH * (1.0 + FULL_SCALE_RELATIVE_ALLOWANCE)) {
+            String message = String.format(Locale.ROOT,
+                    "the evaluation height (reference_height_percent_fsh %s at evaluation_level_db %s) is %s %%FSH"
+                            + " displayed and needs %s %%FSH at the converter with digital_gain_db %s, above its full"
+                            + " scale of 100 %%FSH: the converter could not have recorded it",
+                    fmt(referenceHeightPercentFsh), fmt(evaluationLevelDb), fmt(evaluationHeightPercentFsh),
+                    fmt(atConverterPercentFsh), fmt(gainDb));
+            throw gainDb == 0.0
+                    ? CalculationException.impossible(message, "evaluation_level_db", "reference_height_percent_fsh")
+                    : CalculationException.impossible(message,
+                            "evaluation_level_db", "reference_height_percent_fsh", "digital_gain_db");
+        }
+    }
+
+    private static Reference lsbReference(DigitizedSignal signal, CodeMapping mapping) {
+        if (mapping == CodeMapping.FSR_OVER_2N) {
+            return Reference.of("LSB size", "LSB = FSR / 2^N with FSR = "
+                    + (signal == DigitizedSignal.RF ? "200 %FSH (RF, -100..+100 %FSH)" : "100 %FSH (RECTIFIED, 0..100 %FSH)")
+                    + " (IEEE Std 1241, from memory)");
+        }
+        return Reference.of("LSB size", "full screen at the largest code: LSB = "
+                + (signal == DigitizedSignal.RF ? "100 / (2^(N-1) - 1) %FSH (RF)" : "100 / (2^N - 1) %FSH (RECTIFIED)")
+                + " (common practice, no published source)");
+    }
+
+    private static Reference errorReference(Quantizer quantizer, DigitizedSignal signal) {
+        String bounds;
+        if (quantizer == Quantizer.ROUNDING) {
+            bounds = "ROUNDING reads within +/- LSB/2: over 20 log10((h + LSB/2)/h), under 20 log10((h - LSB/2)/h)"
+                    + " (W. Kester, Analog Devices MT-001, from memory)";
+        } else if (signal == DigitizedSignal.RF) {
+            bounds = "TRUNCATION toward minus infinity: positive peaks read up to 1 LSB low, negative half-waves read"
+                    + " as |s| up to 1 LSB high: over 20 log10((h + LSB)/h), under 20 log10((h - LSB)/h) (derived)";
+        } else {
+            bounds = "TRUNCATION toward minus infinity of RECTIFIED data reads up to 1 LSB low and never high: over 0,"
+                    + " under 20 log10((h - LSB)/h) (derived)";
+        }
+        return Reference.of("amplitude error", bounds + "; heights and LSB displayed, inside the code range"
+                + " (clipping at full scale not modelled)");
+    }
+
+    private static Reference minimumHeightReference(Quantizer quantizer) {
+        return Reference.of("minimum height", (quantizer == Quantizer.ROUNDING
+                ? "h_min = (LSB/2) / (1 - 10^(-X/20))" : "h_min = LSB / (1 - 10^(-X/20))")
+                + ", where the under error equals -X dB; as a level 20 log10(h_min / 100) dB (derived from the"
+                + " error bound)");
+    }
+
+    private static String fmt(double value) {
+        return String.format(Locale.ROOT, "%.4g", value);
+    }
+}
