@@ -1,5 +1,8 @@
 package utdigit.core.acquisition;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -147,9 +150,9 @@ public final class AcquisitionCalculator {
         double periodUs = 1e6 / prfHz;
         if (exceeds(gateUs, periodUs)) {
             throw CalculationException.impossible(String.format(Locale.ROOT,
-                    "the gate (%s, %.6g us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
-                            + " (%.6g us at %.6g Hz): the next firing would start before the gate ends",
-                    gateField, gateUs, periodUs, prfHz), gateField, "pulse_repetition_frequency_hz");
+                    "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
+                            + " (%s us at %s Hz): the next firing would start before the gate ends",
+                    gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
         }
         double effectiveMhz = clock.effectiveSamplingFrequencyMhz();
         long samples = samplesPerAScan(gateUs, effectiveMhz, gateField, countField);
@@ -166,15 +169,15 @@ public final class AcquisitionCalculator {
         // 3. Data volume.
         references.add(Reference.of("samples per A-scan",
                 "ceil(gate (us) x fs/m (MHz)), ceiling with a relative tolerance of 1e-9 so that exact "
-                        + "products (0.7 us x 100 MHz = 70) are not rounded up (" + COMMON_PRACTICE + ")"));
+                        + "products (1.1 us x 100 MHz = 110) are not rounded up (" + COMMON_PRACTICE + ")"));
         references.add(Reference.of("bytes per sample",
                 "ceil(bit_depth/8): each sample stored in whole bytes; instruments that pack samples "
                         + "(e.g. two 12-bit samples in 3 bytes) store less (" + COMMON_PRACTICE + ")"));
         if (bitDepth % 8 != 0) {
             warnings.add(Warning.of(SAMPLE_STORAGE_ASSUMED, String.format(Locale.ROOT,
                     "bit_depth %d is counted as %d whole byte(s) per sample; an instrument that packs samples "
-                            + "(e.g. two 12-bit samples in 3 bytes) stores %.4g bytes per sample: check its "
-                            + "file format", bitDepth, bytesPerSample, bitDepth / 8.0)));
+                            + "(e.g. two 12-bit samples in 3 bytes) stores %s bytes per sample: check its "
+                            + "file format", bitDepth, bytesPerSample, fmt(bitDepth / 8.0))));
         }
         double positionsPerMetre = 1000.0 / scanIncrementMm;
         double megabytesPerMetre = bytesPerPosition * positionsPerMetre / BYTES_PER_MEGABYTE;
@@ -191,9 +194,10 @@ public final class AcquisitionCalculator {
             maxScanLengthPerFileMm = fileSizeLimitMegabytes / megabytesPerMetre * 1000.0;
             if (fileSizeMegabytes != null && exceeds(fileSizeMegabytes, fileSizeLimitMegabytes)) {
                 warnings.add(Warning.of(FILE_SIZE_ABOVE_LIMIT, String.format(Locale.ROOT,
-                        "the file of scan_length_mm %.6g mm holds %.6g MB, above file_size_limit_megabytes "
-                                + "%.6g MB; one file holds at most %.6g mm of scan",
-                        scanLengthMm, fileSizeMegabytes, fileSizeLimitMegabytes, maxScanLengthPerFileMm)));
+                        "the file of scan_length_mm %s mm holds %s MB, above file_size_limit_megabytes "
+                                + "%s MB; one file holds at most %s mm of scan",
+                        fmt(scanLengthMm), fmt(fileSizeMegabytes), fmt(fileSizeLimitMegabytes),
+                        fmt(maxScanLengthPerFileMm))));
             }
         }
 
@@ -206,10 +210,11 @@ public final class AcquisitionCalculator {
         double dataRateSpeedMmPerS = plannedSpeedMmPerS == null ? maxScanSpeedMmPerS : plannedSpeedMmPerS;
         if (plannedSpeedMmPerS != null && exceeds(plannedSpeedMmPerS, maxScanSpeedMmPerS)) {
             warnings.add(Warning.of(PLANNED_SPEED_ABOVE_MAXIMUM, String.format(Locale.ROOT,
-                    "planned_scan_speed_mm_per_s %.6g mm/s is above the PRF-limited maximum %.6g mm/s "
-                            + "(pulse_repetition_frequency_hz %.6g Hz, %d firing(s) per position x averaging %d, "
-                            + "scan_increment_mm %.6g mm): positions would be missed",
-                    plannedSpeedMmPerS, maxScanSpeedMmPerS, prfHz, firings, averaging, scanIncrementMm)));
+                    "planned_scan_speed_mm_per_s %s mm/s is above the PRF-limited maximum %s mm/s "
+                            + "(pulse_repetition_frequency_hz %s Hz, %d firing(s) per position x averaging %d, "
+                            + "scan_increment_mm %s mm): positions would be missed",
+                    fmt(plannedSpeedMmPerS), fmt(maxScanSpeedMmPerS), fmt(prfHz), firings, averaging,
+                    fmt(scanIncrementMm))));
         }
         double dataRateMegabytesPerS =
                 bytesPerPosition * (dataRateSpeedMmPerS / scanIncrementMm) / BYTES_PER_MEGABYTE;
@@ -233,10 +238,10 @@ public final class AcquisitionCalculator {
             }
             if (exceeds(prfHz, maxPrfHz)) {
                 warnings.add(Warning.of(PRF_ABOVE_WRAPAROUND_LIMIT, String.format(Locale.ROOT,
-                        "pulse_repetition_frequency_hz %.6g Hz is above the wrap-around limit %.6g Hz "
-                                + "(round trip %.6g us x wraparound_decay_factor %.6g): echoes of one firing may "
+                        "pulse_repetition_frequency_hz %s Hz is above the wrap-around limit %s Hz "
+                                + "(round trip %s us x wraparound_decay_factor %s): echoes of one firing may "
                                 + "appear as ghost echoes after the next",
-                        prfHz, maxPrfHz, roundTripUs, q)));
+                        fmt(prfHz), fmt(maxPrfHz), fmt(roundTripUs), fmt(q))));
             }
         }
 
@@ -252,8 +257,9 @@ public final class AcquisitionCalculator {
      * Samples in one A-scan: the gate times the stored rate, rounded up to a whole sample.
      *
      * <p>n = ceil(t_gate fs_eff), t_gate in us, fs_eff = fs/m in MHz, n >= 1. A product within a
-     * relative 1e-9 of an integer k is taken as k, so that 0.7 us x 100 MHz (70.00000000000001 in
-     * binary floating point) gives 70, not 71. Common practice, no published source.
+     * relative 1e-9 of an integer k is taken as k, so that an exact product is not rounded up by
+     * binary floating point: 1.1 us x 100 MHz evaluates to 110.00000000000001 and gives 110, not 111
+     * (0.7 us x 100 MHz happens to evaluate to exactly 70). Common practice, no published source.
      *
      * @throws CalculationException IMPOSSIBLE_COMBINATION when n does not fit in a {@code long}
      */
@@ -313,6 +319,13 @@ public final class AcquisitionCalculator {
     private static boolean exceeds(double value, double limit) {
         return value > limit * (1.0 + RELATIVE_TOLERANCE);
     }
+
+    /** A number for a message: six significant digits, no trailing zeros, no exponent. */
+    private static String fmt(double x) {
+        return new BigDecimal(x).round(MESSAGE_DIGITS).stripTrailingZeros().toPlainString();
+    }
+
+    private static final MathContext MESSAGE_DIGITS = new MathContext(6, RoundingMode.HALF_EVEN);
 
     private static Double checkVelocity(AcquisitionInput in) {
         boolean needed = in.gateLengthMm() != null || in.maxSoundPathMm() != null;
