@@ -1,0 +1,366 @@
+package utdigit.core.acquisition;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Objects;
+import utdigit.core.common.CalculationException;
+import utdigit.core.common.Checks;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Units;
+import utdigit.core.common.Warning;
+import utdigit.core.sampling.DecimationMode;
+import utdigit.core.sampling.SampleClock;
+
+/**
+ * The acquisition budget of an encoded scan: how many bytes the chosen digitization and capture
+ * store per position, per metre and per file, how fast the scan may move before the PRF runs out of
+ * firings, and the highest PRF that keeps wrap-around ("ghost") echoes out of the next firing.
+ *
+ * <p>Data volume counts A-scans; scan speed counts firings. Counts are exact {@code long}
+ * arithmetic ({@link Math#multiplyExact}); rates and sizes are {@code double}. The relations are
+ * common practice, no published source; MB is 10^6 bytes.
+ */
+public final class AcquisitionCalculator {
+    private AcquisitionCalculator() {}
+
+    /** Relative tolerance of the sample-count ceiling and of every limit comparison. */
+    static final double RELATIVE_TOLERANCE = 1e-9;
+
+    /** Bytes in one megabyte: 10^6 (SI prefix mega). */
+    static final double BYTES_PER_MEGABYTE = 1e6;
+
+    /** Planned scan speed above the PRF-limited maximum. */
+    public static final String PLANNED_SPEED_ABOVE_MAXIMUM = "PLANNED_SPEED_ABOVE_MAXIMUM";
+    /** PRF above the wrap-around limit 1/(q t_rt). */
+    public static final String PRF_ABOVE_WRAPAROUND_LIMIT = "PRF_ABOVE_WRAPAROUND_LIMIT";
+    /** Decay factor 1: the bare physical limit, without margin for reverberation. */
+    public static final String WRAPAROUND_DECAY_FACTOR_BARE_LIMIT = "WRAPAROUND_DECAY_FACTOR_BARE_LIMIT";
+    /** File size over file_size_limit_megabytes. */
+    public static final String FILE_SIZE_ABOVE_LIMIT = "FILE_SIZE_ABOVE_LIMIT";
+    /** A bit depth that is not a whole number of bytes: the storage assumption is stated. */
+    public static final String SAMPLE_STORAGE_ASSUMED = "SAMPLE_STORAGE_ASSUMED";
+
+    private static final String COMMON_PRACTICE = "common practice, no published source";
+
+    /**
+     * Computes the acquisition budget.
+     *
+     * @throws CalculationException NOT_APPLICABLE (400) for an input that does not apply (capture
+     *     without fmc_element_count, focal_laws with fmc_element_count, a velocity no length needs,
+     *     a decay factor without a round trip, two forms of the gate or of the round trip);
+     *     INVALID_INPUT (400) for a missing or out-of-domain input; IMPOSSIBLE_COMBINATION (422) for a
+     *     gate longer than the pulse repetition period, or a position too large to count in 64 bits
+     */
+    public static AcquisitionResult compute(AcquisitionInput in) {
+        Objects.requireNonNull(in, "in");
+        List<Warning> warnings = new ArrayList<>();
+        List<Reference> references = new ArrayList<>();
+
+        // 1. Single inputs, defaults and inputs that do not apply (all 400), before any 422.
+        int decimationFactor = in.decimationFactor() == null ? 1 : in.decimationFactor();
+        // The decimation mode does not change the stored rate fs/m (SampleClock): DROP is a placeholder.
+        SampleClock clock = SampleClock.of(in.samplingFrequencyMhz(), decimationFactor, DecimationMode.DROP);
+        int bitDepth = in.bitDepth();
+        if (bitDepth < 1 || bitDepth > 32) {
+            throw CalculationException.invalid("bit_depth", bitDepth, "must be an integer from 1 to 32");
+        }
+        double scanIncrementMm = Checks.positive("scan_increment_mm", in.scanIncrementMm());
+        double prfHz = Checks.positive("pulse_repetition_frequency_hz", in.pulseRepetitionFrequencyHz());
+        Double velocityMPerS = checkVelocity(in);
+
+        String gateField;
+        double gateUs;
+        if (in.gateLengthUs() != null && in.gateLengthMm() != null) {
+            throw CalculationException.notApplicable("gate_length_mm",
+                    "give the gate as gate_length_us or as gate_length_mm, not both");
+        } else if (in.gateLengthUs() != null) {
+            gateField = "gate_length_us";
+            gateUs = Checks.positive(gateField, in.gateLengthUs());
+        } else if (in.gateLengthMm() != null) {
+            gateField = "gate_length_mm";
+            gateUs = pulseEchoTimeUs(Checks.positive(gateField, in.gateLengthMm()), velocityMPerS);
+            references.add(Reference.of("gate length from a sound path",
+                    "pulse-echo time t = 2 L / v for a sound path L in the part (definition)"));
+        } else {
+            throw CalculationException.invalid("gate_length_us", Double.NaN,
+                    "is required (or gate_length_mm with a velocity)");
+        }
+
+        Integer focalLawsUsed = null;
+        CaptureMode captureUsed = null;
+        String countField;
+        long firings;
+        long aScans;
+        if (in.fmcElementCount() != null) {
+            if (in.focalLaws() != null) {
+                throw CalculationException.notApplicable("focal_laws",
+                        "focal_laws applies to phased-array acquisition; with fmc_element_count the capture "
+                                + "(FMC or HMC) decides firings and A-scans");
+            }
+            countField = "fmc_element_count";
+            int n = Checks.atLeastOne(countField, in.fmcElementCount());
+            captureUsed = in.capture() == null ? CaptureMode.FMC : in.capture();
+            firings = captureUsed.firings(n);
+            aScans = captureUsed.aScans(n);
+            references.add(Reference.of("firings and A-scans per position, " + captureUsed,
+                    captureUsed == CaptureMode.FMC
+                            ? "FMC with n elements: n firings, n^2 A-scans (" + COMMON_PRACTICE + ")"
+                            : "HMC with n elements: n firings, n(n+1)/2 A-scans by transmit-receive "
+                                    + "reciprocity (" + COMMON_PRACTICE + ")"));
+        } else {
+            if (in.capture() != null) {
+                throw CalculationException.notApplicable("capture",
+                        "capture applies only with fmc_element_count (matrix capture)");
+            }
+            countField = "focal_laws";
+            focalLawsUsed = in.focalLaws() == null ? 1 : Checks.atLeastOne(countField, in.focalLaws());
+            firings = focalLawsUsed;
+            aScans = focalLawsUsed;
+            references.add(Reference.of("firings and A-scans per position, phased array",
+                    "one firing and one A-scan per focal law, summed over all groups (" + COMMON_PRACTICE + ")"));
+        }
+        int averaging = in.averaging() == null ? 1 : Checks.atLeastOne("averaging", in.averaging());
+
+        Double roundTripUs = roundTripUs(in, velocityMPerS);
+        Double decayFactorUsed = null;
+        if (roundTripUs == null) {
+            if (in.wraparoundDecayFactor() != null) {
+                throw CalculationException.notApplicable("wraparound_decay_factor",
+                        "wraparound_decay_factor applies only with max_round_trip_us or max_sound_path_mm");
+            }
+        } else {
+            double q = in.wraparoundDecayFactor() == null ? 1.0 : in.wraparoundDecayFactor();
+            if (!(q >= 1.0) || Double.isInfinite(q)) {
+                throw CalculationException.invalid("wraparound_decay_factor", q, "must be finite and >= 1");
+            }
+            decayFactorUsed = q;
+        }
+        Double scanLengthMm = in.scanLengthMm() == null
+                ? null : Checks.positive("scan_length_mm", in.scanLengthMm());
+        Double fileSizeLimitMegabytes = in.fileSizeLimitMegabytes() == null
+                ? null : Checks.positive("file_size_limit_megabytes", in.fileSizeLimitMegabytes());
+        Double plannedSpeedMmPerS = in.plannedScanSpeedMmPerS() == null
+                ? null : Checks.positive("planned_scan_speed_mm_per_s", in.plannedScanSpeedMmPerS());
+
+        // 2. Inputs impossible together (422).
+        double periodUs = 1e6 / prfHz;
+        if (exceeds(gateUs, periodUs)) {
+            throw CalculationException.impossible(String.format(Locale.ROOT,
+                    "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
+                            + " (%s us at %s Hz): the next firing would start before the gate ends",
+                    gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
+        }
+        double effectiveMhz = clock.effectiveSamplingFrequencyMhz();
+        long samples = samplesPerAScan(gateUs, effectiveMhz, gateField, countField);
+        int bytesPerSample = bytesPerSample(bitDepth);
+        long bytesPerAScan;
+        long bytesPerPosition;
+        try {
+            bytesPerAScan = Math.multiplyExact(samples, (long) bytesPerSample);
+            bytesPerPosition = Math.multiplyExact(bytesPerAScan, aScans);
+        } catch (ArithmeticException overflow) {
+            throw tooLarge(gateField, countField);
+        }
+
+        // 3. Data volume.
+        references.add(Reference.of("samples per A-scan",
+                "ceil(gate (us) x fs/m (MHz)), ceiling with a relative tolerance of 1e-9 so that exact "
+                        + "products (1.1 us x 100 MHz = 110) are not rounded up (" + COMMON_PRACTICE + ")"));
+        references.add(Reference.of("bytes per sample",
+                "ceil(bit_depth/8): each sample stored in whole bytes; instruments that pack samples "
+                        + "(e.g. two 12-bit samples in 3 bytes) store less (" + COMMON_PRACTICE + ")"));
+        if (bitDepth % 8 != 0) {
+            warnings.add(Warning.of(SAMPLE_STORAGE_ASSUMED, String.format(Locale.ROOT,
+                    "bit_depth %d is counted as %d whole byte(s) per sample; an instrument that packs samples "
+                            + "(e.g. two 12-bit samples in 3 bytes) stores %s bytes per sample: check its "
+                            + "file format", bitDepth, bytesPerSample, fmt(bitDepth / 8.0))));
+        }
+        double positionsPerMetre = 1000.0 / scanIncrementMm;
+        double megabytesPerMetre = bytesPerPosition * positionsPerMetre / BYTES_PER_MEGABYTE;
+        references.add(Reference.of("data volume",
+                "bytes per position = bytes per A-scan x A-scans per position; MB per metre = bytes per "
+                        + "position x 1000/scan_increment_mm / 10^6; file size = MB per metre x length; headers, "
+                        + "encoder data and compression excluded (" + COMMON_PRACTICE + ")"));
+        references.add(Reference.of("megabyte",
+                "MB = 10^6 bytes (SI prefix mega; not the binary MiB of 2^20 bytes)"));
+
+        Double fileSizeMegabytes = scanLengthMm == null ? null : megabytesPerMetre * scanLengthMm / 1000.0;
+        Double maxScanLengthPerFileMm = null;
+        if (fileSizeLimitMegabytes != null) {
+            maxScanLengthPerFileMm = fileSizeLimitMegabytes / megabytesPerMetre * 1000.0;
+            if (fileSizeMegabytes != null && exceeds(fileSizeMegabytes, fileSizeLimitMegabytes)) {
+                warnings.add(Warning.of(FILE_SIZE_ABOVE_LIMIT, String.format(Locale.ROOT,
+                        "the file of scan_length_mm %s mm holds %s MB, above file_size_limit_megabytes "
+                                + "%s MB; one file holds at most %s mm of scan",
+                        fmt(scanLengthMm), fmt(fileSizeMegabytes), fmt(fileSizeLimitMegabytes),
+                        fmt(maxScanLengthPerFileMm))));
+            }
+        }
+
+        // 4. Scan speed: the PRF is spent on firings, each averaged firing counted.
+        double firingsPerRecordedPosition = (double) firings * averaging; // up to 2^32: exact in a double
+        double maxScanSpeedMmPerS = prfHz * scanIncrementMm / firingsPerRecordedPosition;
+        references.add(Reference.of("maximum scan speed",
+                "v_max = PRF x scan_increment / (firings per position x averaging): the PRF counts "
+                        + "firings, not A-scans (" + COMMON_PRACTICE + ")"));
+        double dataRateSpeedMmPerS = plannedSpeedMmPerS == null ? maxScanSpeedMmPerS : plannedSpeedMmPerS;
+        if (plannedSpeedMmPerS != null && exceeds(plannedSpeedMmPerS, maxScanSpeedMmPerS)) {
+            warnings.add(Warning.of(PLANNED_SPEED_ABOVE_MAXIMUM, String.format(Locale.ROOT,
+                    "planned_scan_speed_mm_per_s %s mm/s is above the PRF-limited maximum %s mm/s "
+                            + "(pulse_repetition_frequency_hz %s Hz, %d firing(s) per position x averaging %d, "
+                            + "scan_increment_mm %s mm): positions would be missed",
+                    fmt(plannedSpeedMmPerS), fmt(maxScanSpeedMmPerS), fmt(prfHz), firings, averaging,
+                    fmt(scanIncrementMm))));
+        }
+        double dataRateMegabytesPerS =
+                bytesPerPosition * (dataRateSpeedMmPerS / scanIncrementMm) / BYTES_PER_MEGABYTE;
+        references.add(Reference.of("data rate",
+                "bytes per position x scan speed / scan_increment / 10^6, at the planned speed when given, "
+                        + "else at the maximum (" + COMMON_PRACTICE + ")"));
+
+        // 5. Wrap-around limit.
+        Double maxPrfHz = null;
+        if (roundTripUs != null) {
+            double q = decayFactorUsed;
+            maxPrfHz = maxPrfWithoutWraparoundHz(roundTripUs, q);
+            references.add(Reference.of("wrap-around PRF limit",
+                    "PRF_max = 1/(q t_rt): the next firing waits for the longest round trip t_rt (summed over "
+                            + "the media) times a decay factor q >= 1 for reverberation (" + COMMON_PRACTICE + ")"));
+            if (q == 1.0) {
+                warnings.add(Warning.of(WRAPAROUND_DECAY_FACTOR_BARE_LIMIT,
+                        "wraparound_decay_factor 1 gives the bare physical limit: echoes of a firing that "
+                                + "reverberate longer than one round trip reach the next, and low-attenuation parts "
+                                + "need a margin (wraparound_decay_factor > 1) (" + COMMON_PRACTICE + ")"));
+            }
+            if (exceeds(prfHz, maxPrfHz)) {
+                warnings.add(Warning.of(PRF_ABOVE_WRAPAROUND_LIMIT, String.format(Locale.ROOT,
+                        "pulse_repetition_frequency_hz %s Hz is above the wrap-around limit %s Hz "
+                                + "(round trip %s us x wraparound_decay_factor %s): echoes of one firing may "
+                                + "appear as ghost echoes after the next",
+                        fmt(prfHz), fmt(maxPrfHz), fmt(roundTripUs), fmt(q))));
+            }
+        }
+
+        AcquisitionOptions options = new AcquisitionOptions(
+                decimationFactor, focalLawsUsed, captureUsed, averaging, decayFactorUsed);
+        return new AcquisitionResult(samples, bytesPerSample, bytesPerAScan, firings, aScans, bytesPerPosition,
+                megabytesPerMetre, fileSizeMegabytes, maxScanSpeedMmPerS, dataRateMegabytesPerS, maxPrfHz,
+                maxScanLengthPerFileMm, effectiveMhz, gateUs, periodUs, dataRateSpeedMmPerS, roundTripUs,
+                options, warnings, references);
+    }
+
+    /**
+     * Samples in one A-scan: the gate times the stored rate, rounded up to a whole sample.
+     *
+     * <p>n = ceil(t_gate fs_eff), t_gate in us, fs_eff = fs/m in MHz, n >= 1. A product within a
+     * relative 1e-9 of an integer k is taken as k, so that an exact product is not rounded up by
+     * binary floating point: 1.1 us x 100 MHz evaluates to 110.00000000000001 and gives 110, not 111
+     * (0.7 us x 100 MHz happens to evaluate to exactly 70). Common practice, no published source.
+     *
+     * @throws CalculationException IMPOSSIBLE_COMBINATION when n does not fit in a {@code long}
+     */
+    static long samplesPerAScan(double gateUs, double effectiveSamplingFrequencyMhz) {
+        return samplesPerAScan(gateUs, effectiveSamplingFrequencyMhz, "gate_length_us", "focal_laws");
+    }
+
+    private static long samplesPerAScan(
+            double gateUs, double effectiveSamplingFrequencyMhz, String gateField, String countField) {
+        double exact = gateUs * effectiveSamplingFrequencyMhz;
+        if (!(exact < 0x1p62)) {
+            throw tooLarge(gateField, countField);
+        }
+        return ceilWithTolerance(exact);
+    }
+
+    /**
+     * Ceiling with a relative tolerance: k when |x - k| <= 1e-9 x for the nearest integer k, else
+     * ceil(x). For x > 0 the result is >= 1. (derived)
+     */
+    static long ceilWithTolerance(double x) {
+        double nearest = Math.rint(x);
+        if (nearest >= 1.0 && Math.abs(x - nearest) <= RELATIVE_TOLERANCE * x) {
+            return (long) nearest;
+        }
+        return (long) Math.ceil(x);
+    }
+
+    /**
+     * Bytes stored per sample: a sample is kept in whole bytes, ceil(bits/8), 1 to 4 for 1 to 32
+     * bits. Instruments that pack samples (e.g. two 12-bit samples in 3 bytes) store less. Common
+     * practice, no published source.
+     */
+    static int bytesPerSample(int bitDepth) {
+        return (bitDepth + 7) / 8;
+    }
+
+    /**
+     * Pulse-echo time of a sound path in the part: the wave travels the path there and back.
+     * t = 2 L / v, L in mm, v in m/s (1 m/s = 1e-3 mm/us), t in us. (definition)
+     */
+    static double pulseEchoTimeUs(double soundPathMm, double velocityMPerS) {
+        return 2.0 * soundPathMm / Units.mPerSToMmPerUs(velocityMPerS);
+    }
+
+    /**
+     * Highest PRF that keeps the echoes of one firing out of the next: the next firing waits for the
+     * longest round trip times a decay factor for reverberation. PRF_max = 1/(q t_rt) = 10^6/(q t_rt)
+     * Hz with t_rt in us and q >= 1 (q = 1 is the bare physical limit). Common practice, no published
+     * source.
+     */
+    static double maxPrfWithoutWraparoundHz(double roundTripUs, double decayFactor) {
+        return 1e6 / (decayFactor * roundTripUs);
+    }
+
+    /** {@code value} above {@code limit} by more than the relative tolerance (rounding is not a breach). */
+    private static boolean exceeds(double value, double limit) {
+        return value > limit * (1.0 + RELATIVE_TOLERANCE);
+    }
+
+    /** A number for a message: six significant digits, no trailing zeros, no exponent. */
+    private static String fmt(double x) {
+        return new BigDecimal(x).round(MESSAGE_DIGITS).stripTrailingZeros().toPlainString();
+    }
+
+    private static final MathContext MESSAGE_DIGITS = new MathContext(6, RoundingMode.HALF_EVEN);
+
+    private static Double checkVelocity(AcquisitionInput in) {
+        boolean needed = in.gateLengthMm() != null || in.maxSoundPathMm() != null;
+        if (in.velocityMPerS() == null) {
+            if (needed) {
+                throw CalculationException.invalid("velocity_m_per_s", Double.NaN,
+                        "is required with gate_length_mm or max_sound_path_mm");
+            }
+            return null;
+        }
+        if (!needed) {
+            throw CalculationException.notApplicable("velocity_m_per_s",
+                    "a velocity applies only with gate_length_mm or max_sound_path_mm");
+        }
+        return Checks.positive("velocity_m_per_s", in.velocityMPerS());
+    }
+
+    private static Double roundTripUs(AcquisitionInput in, Double velocityMPerS) {
+        if (in.maxRoundTripUs() != null && in.maxSoundPathMm() != null) {
+            throw CalculationException.notApplicable("max_sound_path_mm",
+                    "give the round trip as max_round_trip_us or as max_sound_path_mm, not both");
+        }
+        if (in.maxRoundTripUs() != null) {
+            return Checks.positive("max_round_trip_us", in.maxRoundTripUs());
+        }
+        if (in.maxSoundPathMm() != null) {
+            return pulseEchoTimeUs(Checks.positive("max_sound_path_mm", in.maxSoundPathMm()), velocityMPerS);
+        }
+        return null;
+    }
+
+    private static CalculationException tooLarge(String gateField, String countField) {
+        return CalculationException.impossible(
+                "one scan position would hold more than 2^63 - 1 bytes (9.2e18): no instrument records that; "
+                        + "reduce " + gateField + ", sampling_frequency_mhz or " + countField,
+                gateField, "sampling_frequency_mhz", countField);
+    }
+}
