@@ -1,0 +1,32 @@
+package utdigit.web.common;
+
+import io.swagger.v3.oas.annotations.media.Schema;
+import java.util.List;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Warning;
+
+/** The warnings and references of an answer, as the API shows them. */
+public final class ResultNotes {
+    private ResultNotes() {}
+
+    /** A warning of an answer. */
+    @Schema(name = "Warning", description = "Something the caller should know; the result is still valid")
+    public record WarningView(
+            @Schema(description = "Stable UPPER_SNAKE_CASE code", example = "NEAR_FIELD") String code,
+            @Schema(description = "Explanation in the caller's terms") String message) {}
+
+    /** A reference of an answer. */
+    @Schema(name = "Reference", description = "Where a formula or value of the answer comes from")
+    public record ReferenceView(
+            @Schema(description = "What the reference is for", example = "near field length") String topic,
+            @Schema(description = "Published source, or 'common practice, no published source', or "
+                    + "'(derived)' for a model of ours") String source) {}
+
+    public static List<WarningView> warnings(List<Warning> warnings) {
+        return warnings.stream().map(w -> new WarningView(w.code(), w.message())).toList();
+    }
+
+    public static List<ReferenceView> references(List<Reference> references) {
+        return references.stream().map(r -> new ReferenceView(r.topic(), r.source())).toList();
+    }
+}

@@ -1,0 +1,92 @@
+package utdigit.web.pulse;
+
+import io.swagger.v3.oas.annotations.media.Schema;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.NotNull;
+import utdigit.core.materials.WaveMode;
+import utdigit.core.pulse.CentreFrequencyConvention;
+import utdigit.web.common.VelocityFields;
+
+/** POST /api/pulse-parameters. */
+@Schema(name = "PulseParametersRequest", description = "A probe and the part's velocity. Give the velocity once: "
+        + "velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + temperature_c for water). "
+        + "Each length once: _mm or _in.")
+public record PulseParametersRequest(
+        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", format = "double", example = "5",
+                exclusiveMinimumValue = 0, maximum = "1000")
+        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        Double frequencyMhz,
+
+        @Schema(description = "Sound velocity in the part, m/s (100 to 20000)", format = "double", example = "5920",
+                minimum = "100", maximum = "20000")
+        @DecimalMin("100") @DecimalMax("20000")
+        Double velocityMPerS,
+
+        @Schema(description = "Sound velocity in the part, in/us (equivalent of 100 to 20000 m/s)", format = "double",
+                example = "0.2331")
+        @DecimalMin(value = "0", inclusive = false)
+        Double velocityInPerUs,
+
+        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
+        String material,
+
+        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
+        WaveMode waveMode,
+
+        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
+                minimum = "0", maximum = "95")
+        @DecimalMin("0") @DecimalMax("95")
+        Double temperatureC,
+
+        @Schema(description = "-6 dB fractional bandwidth of the probe, % (0 to 200 exclusive)", format = "double",
+                example = "60", exclusiveMinimumValue = 0, exclusiveMaximumValue = 200)
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
+        Double bandwidthPercent,
+
+        @Schema(description = "How frequency_mhz relates to the -6 dB edges: ARITHMETIC (fl + fu)/2 or GEOMETRIC "
+                + "sqrt(fl fu); default ARITHMETIC. Only with bandwidth_percent")
+        CentreFrequencyConvention centreFrequencyConvention,
+
+        @Schema(description = "Element diameter (circular), mm (> 0, <= 100000)", format = "double", example = "10",
+                exclusiveMinimumValue = 0, maximum = "100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        Double elementDiameterMm,
+
+        @Schema(description = "Element diameter (circular), in", format = "double", example = "0.375",
+                exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double elementDiameterIn,
+
+        @Schema(description = "Distance in the part for the beam diameter, mm; needs the element diameter",
+                format = "double", example = "50", exclusiveMinimumValue = 0, maximum = "100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        Double distanceMm,
+
+        @Schema(description = "Distance in the part for the beam diameter, in", format = "double", example = "2",
+                exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double distanceIn,
+
+        @Schema(description = "Sound path in a wedge or delay line before the part, mm; needs "
+                + "wedge_velocity_m_per_s and the element diameter", format = "double", example = "12",
+                exclusiveMinimumValue = 0, maximum = "100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        Double wedgePathMm,
+
+        @Schema(description = "Sound path in a wedge or delay line, in", format = "double", example = "0.5",
+                exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double wedgePathIn,
+
+        @Schema(description = "Longitudinal velocity of the wedge or delay line, m/s (100 to 20000); wedge grades "
+                + "vary by maker and temperature: give the measured value", format = "double", example = "2730",
+                minimum = "100", maximum = "20000")
+        @DecimalMin("100") @DecimalMax("20000")
+        Double wedgeVelocityMPerS,
+
+        @Schema(description = "Incident angle in the wedge, deg (0 to below 90); needs wedge_velocity_m_per_s",
+                format = "double", example = "36", minimum = "0", exclusiveMaximumValue = 90)
+        @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
+        Double incidentAngleDeg) implements VelocityFields {
+}

@@ -1,0 +1,47 @@
+package utdigit.web.quantization;
+
+import io.swagger.v3.oas.annotations.media.Schema;
+import java.util.List;
+import java.util.Optional;
+import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ResultNotes.WarningView;
+
+/** The answer of POST /api/quantization-assessments. */
+@Schema(name = "QuantizationAssessment", description = "Amplitude resolution of the converter in %FSH and dB. "
+        + "Fields whose optional inputs were not given are omitted; a value that cannot exist is null with a warning.")
+record QuantizationAssessmentResponse(
+        @Schema(description = "Number of codes, 2^N", format = "int64", example = "256")
+        long levels,
+        @Schema(description = "One code step in displayed %FSH (grows with digital gain)", format = "double",
+                example = "0.78125")
+        double lsbPercentFsh,
+        @Schema(description = "Full screen to one LSB, dB", format = "double", example = "42.14")
+        double dynamicRangeDb,
+        @Schema(description = "Ideal SQNR of a full-scale sine, 20 log10(2^N) + 10 log10(1.5), dB; null for "
+                + "RECTIFIED", format = "double", example = "49.93", types = {"number", "null"})
+        Optional<Double> idealSqnrDb,
+        @Schema(description = "Worst reading above the signal height, dB (>= 0)", format = "double", example = "0.084")
+        Double amplitudeErrorOverDb,
+        @Schema(description = "Worst reading below the signal height, dB (< 0); null when it does not exist",
+                format = "double", example = "-0.085", types = {"number", "null"})
+        Optional<Double> amplitudeErrorUnderDb,
+        @Schema(description = "Lowest displayed height read within the tolerance, %FSH", format = "double",
+                example = "3.6")
+        Double minimumHeightPercentFsh,
+        @Schema(description = "That height as a level relative to full screen, dB", format = "double",
+                example = "-28.9")
+        Double minimumHeightDb,
+        @Schema(description = "Reference height at the evaluation level, %FSH", format = "double", example = "16")
+        Double evaluationHeightPercentFsh,
+        @Schema(description = "Worst reading below the evaluation height, dB (< 0); null when it does not exist",
+                format = "double", example = "-0.2", types = {"number", "null"})
+        Optional<Double> evaluationErrorUnderDb,
+        @Schema(description = "SNR gain of averaging uncorrelated noise, 10 log10(M), dB", format = "double",
+                example = "6.02")
+        Double averagingSnrGainDb,
+        @Schema(description = "The normalised request, with every default that has an effect; itself a valid "
+                + "request that reproduces this answer")
+        QuantizationAssessmentRequest inputs,
+        List<WarningView> warnings,
+        List<ReferenceView> references) {
+}
