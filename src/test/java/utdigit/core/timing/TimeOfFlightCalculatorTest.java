@@ -223,6 +223,16 @@ class TimeOfFlightCalculatorTest {
         assertThat(r.decimationFactor()).isEqualTo(1);
     }
 
+    @ParameterizedTest
+    @EnumSource(Technique.class)
+    @DisplayName("an explicit TRIGGER reference is accepted with every technique (it is the default)")
+    void explicitTriggerIsAcceptedWithEveryTechnique(Technique technique) {
+        TimeOfFlightResult r = TimeOfFlightCalculator.compute(tofd().technique(technique)
+                .probeCentreSeparationMm(technique == Technique.TOFD ? 60.0 : null)
+                .timeReference(TimeReference.TRIGGER).build());
+        assertThat(r.timingErrorNs()).isCloseTo(5.0, within(ALLOWED_ERROR_NS));
+    }
+
     @Test
     @DisplayName("a bit-identical answer for the same input (StrictMath only)")
     void sameInputGivesBitIdenticalAnswer() {
