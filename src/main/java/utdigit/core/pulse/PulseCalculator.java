@@ -17,6 +17,15 @@ import utdigit.core.common.Warning;
  * element diameter, the near field and the pulse-echo beam spread of a circular piston; with a
  * distance, the beam diameter there; behind a wedge, the near field left in the part and the
  * refracted angle.
+ *
+ * <p>The formulas and their references are on {@link Waves}, {@link GaussianPulse},
+ * {@link CentreFrequencyConvention}, {@link PistonBeam}, {@link PistonDirectivity} and
+ * {@link Snell}. Period, wavelength, near field and beam spread use the nominal frequency; durations
+ * and cycles the pulse model's carrier (the same with ARITHMETIC). The distance is a distance in the
+ * part: with wedge_path_mm given, it is compared with the near field left in the part, else with
+ * the near field. The band edges are the one-sided model's (DOMAIN); a -20 or -40 dB lower edge more
+ * than 0.1 % above the real pulse's (its negative-frequency image, {@link RealPulseSpectrum}) is
+ * flagged with a warning. Stateless and thread-safe.
  */
 public final class PulseCalculator {
     private PulseCalculator() {}
@@ -57,10 +66,11 @@ public final class PulseCalculator {
     public static final double REAL_LOWER_EDGE_TOLERANCE_FRACTION = 1e-3;
 
     /**
-     * Below this image ratio at a model edge the real edge is closer than 1e-5 relative and is not
-     * solved for (see {@link RealPulseSpectrum#imageRatio}).
+     * The real lower edge is solved only where its first-order estimated shift exceeds this (half the
+     * tolerance: the estimate is within a few % of the solved shift near the tolerance, see
+     * {@link RealPulseSpectrum#estimatedLowerEdgeShiftFraction}).
      */
-    private static final double NEGLIGIBLE_IMAGE_RATIO = 1e-6;
+    private static final double REAL_LOWER_EDGE_SOLVE_FRACTION = REAL_LOWER_EDGE_TOLERANCE_FRACTION / 2.0;
 
     private static final MathContext MESSAGE_DIGITS = new MathContext(4);
 
@@ -293,7 +303,7 @@ public final class PulseCalculator {
                     + field + " does not exist"));
             return Optional.empty();
         }
-        if (RealPulseSpectrum.imageRatio(model, edgeMhz) > NEGLIGIBLE_IMAGE_RATIO) {
+        if (RealPulseSpectrum.estimatedLowerEdgeShiftFraction(model, levelDb) > REAL_LOWER_EDGE_SOLVE_FRACTION) {
             Optional<Double> realMhz = RealPulseSpectrum.lowerEdgeMhz(model, levelDb);
             boolean departs = realMhz.isEmpty()
                     || edgeMhz - realMhz.get() > REAL_LOWER_EDGE_TOLERANCE_FRACTION * realMhz.get();

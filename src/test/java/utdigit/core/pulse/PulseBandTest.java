@@ -183,6 +183,18 @@ class PulseBandTest {
         assertThat(RealPulseSpectrum.peakFrequencyMhz(model)).isCloseTo(spectrum.band(levelDb).peakMhz(), within(binMhz));
     }
 
+    @ParameterizedTest(name = "{0} MHz, {1} %, {2} dB")
+    @CsvSource({"5.0, 60, -40", "5.0, 62, -40", "5.0, 65, -40", "10.0, 80, -20", "5.0, 90, -6", "5.0, 100, -6"})
+    @DisplayName("the first-order estimate of the real lower edge's shift is within 10 % of the solved shift, for shifts below 1 %")
+    void estimatedShiftIsCloseToSolvedShiftForSmallShifts(double fcMhz, double bandwidthPercent, double levelDb) {
+        GaussianPulse model = GaussianPulse.of(fcMhz, bandwidthPercent / 100.0);
+        double modelMhz = model.lowerEdgeMhz(levelDb);
+        double solvedFraction = (modelMhz - RealPulseSpectrum.lowerEdgeMhz(model, levelDb).orElseThrow()) / modelMhz;
+        assertThat(solvedFraction).isBetween(1e-5, 1e-2);
+        assertThat(RealPulseSpectrum.estimatedLowerEdgeShiftFraction(model, levelDb))
+                .isCloseTo(solvedFraction, within(0.1 * solvedFraction));
+    }
+
     @Test
     @DisplayName("where the real spectrum stays above the level down to 0 Hz (FFT) the real lower edge is empty")
     void realPulseLowerEdgeIsEmptyWhereFftFindsNone() {
