@@ -125,7 +125,8 @@ class PulseSamplingLossTest {
     @ParameterizedTest(name = "{0} MHz, {1}, n = {2}, absolute {3}")
     @CsvSource({
         "5, 0.3, 4.75, true", "5, 0.3, 5.5, false", "5, 0.25, 3.1, true", "3.5, 0.4, 2.3, true",
-        "2.25, 0.2, 8.7, false", "5, 0.15, 5.9, true", "7.5, 0.5, 3.7, false", "5, 0.12, 2.05, true"})
+        "2.25, 0.2, 8.7, false", "5, 0.15, 5.9, true", "7.5, 0.5, 3.7, false", "5, 0.12, 2.05, true",
+        "5, 0.3, 3.2, true", "2.25, 0.1, 3.5, true"})
     @DisplayName("pulse loss equals the brute-force phase scan written in the test within 1e-4 dB")
     void pulseLossMatchesBruteForceScan(double fcMhz, double bw, double n, boolean absolute) {
         double brute = BruteForcePulseScan.lossDb(fcMhz, bw, n, absolute);
