@@ -31,6 +31,12 @@ public final class PulseSamplingLoss {
     private static final double TIE_RELATIVE = 1e-13;
 
     /**
+     * A threshold search stops only when a phase reads below the threshold by more than this
+     * relative margin, so that the final decision stays the one of {@link #rfLossDb} in dB.
+     */
+    private static final double STOP_MARGIN_RELATIVE = 1e-12;
+
+    /**
      * Classic sine bound: a single peak sampled n times per period is read low by at most
      * -20 log10(cos(pi / n)) dB, the peak falling midway between two samples.
      *
@@ -142,15 +148,20 @@ public final class PulseSamplingLoss {
     }
 
     /**
-     * The read amplitude R(dt/2) with the peak midway between two samples, as a ratio of the true
-     * peak: an upper bound of {@link #rfReadRatio} (the worst case is at most this), cheap (no
-     * search). Used to reject a rate quickly when even this phase reads below a tolerance.
+     * Whether the worst-case RF loss ({@link #rfLossDb}) stays within {@code toleranceDb}. Same
+     * search, but it stops as soon as any phase reads clearly below 10^(-X/20) (the worst case is
+     * at most that): exact, and cheap for rates that fail.
      */
-    static double midwayReadRatio(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading) {
+    static boolean rfLossWithin(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading,
+                                double toleranceDb) {
         double bound = closedFormBoundRatio(pulse, samplingIntervalUs);
+        if (-Decibels.fromRatio(bound) <= toleranceDb) {
+            return true; // the loss never exceeds the closed form
+        }
         PhaseSearch search = new PhaseSearch(pulse, samplingIntervalUs, reading, bound);
-        search.evaluate(samplingIntervalUs / 2.0);
-        return search.lastMaximum;
+        search.stopBelow = Decibels.toRatio(-toleranceDb) * (1.0 - STOP_MARGIN_RELATIVE);
+        double ratio = search.minimumReadRatio();
+        return !(ratio < search.stopBelow) && -Decibels.fromRatio(ratio) <= toleranceDb;
     }
 
     private static void requireAboveTwo(double samplesPerPeriod) {
@@ -169,6 +180,9 @@ public final class PulseSamplingLoss {
         private final boolean absolute;
         private final double boundRatio;
         private BrentSolver solver;
+
+        /** The search may stop at the first phase reading below this (no threshold: -infinity). */
+        double stopBelow = Double.NEGATIVE_INFINITY;
 
         /** Maximum and the index of the sample holding it, set by {@link #evaluate}. */
         private double lastMaximum;
@@ -189,7 +203,13 @@ public final class PulseSamplingLoss {
             double leftMaximum = lastMaximum;
             int leftIndex = lastIndex;
             evaluate(right);
+            if (lastMaximum < stopBelow) {
+                return lastMaximum;
+            }
             double minimum = minimumOver(0.0, leftMaximum, leftIndex, right, lastMaximum, lastIndex, 0);
+            if (minimum < stopBelow) {
+                return minimum;
+            }
             // The bound holds by construction; keep rounding from reporting below it or above 1.
             return StrictMath.min(1.0, StrictMath.max(minimum, boundRatio));
         }
@@ -269,6 +289,9 @@ public final class PulseSamplingLoss {
             double rightCurve = sampleValue(rightIndex, crossingUs);
             evaluate(crossingUs);
             double crossingMaximum = lastMaximum;
+            if (crossingMaximum < stopBelow) {
+                return crossingMaximum;
+            }
             if (crossingMaximum <= StrictMath.max(leftCurve, rightCurve) * (1.0 + TIE_RELATIVE)) {
                 // R >= g_left on [left, crossing] and R >= g_right on [crossing, right], both
                 // log-concave there: the minimum is at an end or at the crossing.
@@ -282,7 +305,13 @@ public final class PulseSamplingLoss {
             evaluate(middleUs);
             double middleMaximum = lastMaximum;
             int middleIndex = lastIndex;
+            if (middleMaximum < stopBelow) {
+                return middleMaximum;
+            }
             double left = minimumOver(leftUs, leftMaximum, leftIndex, middleUs, middleMaximum, middleIndex, depth + 1);
+            if (left < stopBelow) {
+                return left;
+            }
             double right = minimumOver(middleUs, middleMaximum, middleIndex, rightUs, rightMaximum, rightIndex, depth + 1);
             return StrictMath.min(left, right);
         }

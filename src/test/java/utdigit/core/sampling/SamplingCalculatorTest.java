@@ -487,6 +487,19 @@ class SamplingCalculatorTest {
         }
 
         @Test
+        @DisplayName("RF pulse-rate search below 1 % bandwidth: invalid at bandwidth_percent (search domain); "
+                + "forward figures and the ENVELOPE inverse stay available")
+        void pulseRateSearchBelowOnePercent() {
+            SamplingInput narrow = SamplingInput.of(100.0, 5.0).withBandwidthPercent(0.5);
+            assertInvalid(() -> compute(narrow.withAmplitudeToleranceDb(1.0)), "bandwidth_percent");
+            assertThat(compute(narrow).pulseAmplitudeLossDb()).isPresent();
+            assertThat(compute(narrow.withSignal(SampledSignal.ENVELOPE).withAmplitudeToleranceDb(1.0))
+                    .requiredSamplingFrequencyPulseMhz()).isNotNull();
+            assertThat(compute(SamplingInput.of(100.0, 5.0).withBandwidthPercent(1.0).withAmplitudeToleranceDb(1.0))
+                    .requiredSamplingFrequencyPulseMhz()).isGreaterThan(10.0);
+        }
+
+        @Test
         @DisplayName("centre_frequency_convention without bandwidth: not applicable")
         void conventionWithoutBandwidth() {
             assertNotApplicable(SamplingInput.of(100.0, 5.0)
