@@ -22,4 +22,13 @@ public interface Calculation<Q> {
      * @throws utdigit.core.common.CalculationException from the core (400 or 422)
      */
     Object answer(Q request);
+
+    /**
+     * The JSON Pointer of an input the core names in a failure. The core names a quantity that
+     * comes in two units by its base name ("depth"); a calculation with such inputs overrides this to
+     * point at the form the caller sent ("/depth_in").
+     */
+    default String pointer(String coreField, Q request) {
+        return JsonPointers.property(coreField);
+    }
 }

@@ -14,6 +14,7 @@ import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
+import utdigit.core.common.CalculationException;
 import utdigit.web.stamp.Stamper;
 
 /**
@@ -85,7 +86,16 @@ public class CalculationRunner {
 
     private <Q> ObjectNode answer(Calculation<Q> c, Q request) {
         validate(request);
-        Object answer = c.answer(request);
+        Object answer;
+        try {
+            answer = c.answer(request);
+        } catch (CalculationException e) {
+            List<FieldError> errors = new ArrayList<>();
+            for (String field : e.fields()) {
+                errors.add(new FieldError(c.pointer(field, request), e.getMessage()));
+            }
+            throw new InputProblem(ProblemAdvice.typeOf(e), e.getMessage(), errors);
+        }
         ObjectNode tree = mapper.valueToTree(answer);
         List<String> nonFinite = new ArrayList<>();
         replaceNonFinite(tree, "", nonFinite);

@@ -28,6 +28,10 @@ final class JacksonProblems {
         if (e instanceof InvalidFormatException f && f.getTargetType() != null && f.getTargetType().isEnum()) {
             return InputProblem.invalid(pointer, enumDetail(f.getTargetType()));
         }
+        if (e.getOriginalMessage() != null && e.getOriginalMessage().startsWith("Trailing token")) {
+            return new InputProblem(ProblemType.MALFORMED_BODY, "the body has content after its JSON object",
+                    List.of(new FieldError("", "only one JSON object is allowed")));
+        }
         if (e instanceof MismatchedInputException m) {
             return InputProblem.invalid(pointer, typeDetail(m.getTargetType()));
         }

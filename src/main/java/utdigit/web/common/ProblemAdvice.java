@@ -130,7 +130,7 @@ class ProblemAdvice {
     }
 
     /** The problem type of a core failure. */
-    public static ProblemType typeOf(CalculationException e) {
+    static ProblemType typeOf(CalculationException e) {
         return switch (e.error()) {
             case IMPOSSIBLE_COMBINATION -> ProblemType.IMPOSSIBLE_COMBINATION;
             case NOT_APPLICABLE -> ProblemType.INAPPLICABLE_INPUT;

@@ -1,0 +1,287 @@
+package utdigit.core.timing;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import utdigit.core.common.CalculationException;
+import utdigit.core.common.Checks;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Units;
+import utdigit.core.common.Warning;
+import utdigit.core.pulse.CentreFrequencyConvention;
+import utdigit.core.pulse.GaussianPulse;
+import utdigit.core.sampling.DecimationMode;
+import utdigit.core.sampling.SampleClock;
+
+/**
+ * Time-of-flight resolution (POST /api/time-of-flight-resolutions): what one sample of the stored
+ * time base is worth in time and in millimetres of sound path, depth and surface distance, and for
+ * TOFD the geometry of {@link TofdGeometry} at the caller's depth and thickness.
+ *
+ * <p>Defaults: decimation_factor 1, technique PULSE_ECHO, time_reference TRIGGER. The timing
+ * figures follow the effective rate fs/m whatever the decimation mode, so the mode is not an input.
+ */
+public final class TimeOfFlightCalculator {
+    private TimeOfFlightCalculator() {}
+
+    /** Default decimation factor: no decimation. */
+    public static final int DEFAULT_DECIMATION_FACTOR = 1;
+    /** Default technique. */
+    public static final Technique DEFAULT_TECHNIQUE = Technique.PULSE_ECHO;
+    /** Default time reference. */
+    public static final TimeReference DEFAULT_TIME_REFERENCE = TimeReference.TRIGGER;
+    /** Level of the envelope duration taken as the TOFD pulse duration from frequency and bandwidth, dB. */
+    public static final double TOFD_PULSE_DURATION_LEVEL_DB = 20.0;
+    /** Centre-frequency convention of the pulse model for the TOFD pulse duration (not an option here). */
+    public static final CentreFrequencyConvention PULSE_MODEL_CONVENTION = CentreFrequencyConvention.ARITHMETIC;
+
+    /**
+     * Computes the resolution of {@code in}.
+     *
+     * @throws CalculationException NOT_APPLICABLE (400) for an input that does not belong to the
+     *     technique, for TOFD without probe_centre_separation, for two pulse-duration sources or an
+     *     incomplete one; INVALID_INPUT (400) for a value outside a formula's domain (angle of 90 deg
+     *     or more, non-positive lengths, NaN); IMPOSSIBLE_COMBINATION (422) for a depth below the
+     *     thickness
+     */
+    public static TimeOfFlightResult compute(TimeOfFlightInput in) {
+        Technique technique = in.technique() == null ? DEFAULT_TECHNIQUE : in.technique();
+        TimeReference timeReference = in.timeReference() == null ? DEFAULT_TIME_REFERENCE : in.timeReference();
+        int decimationFactor = in.decimationFactor() == null ? DEFAULT_DECIMATION_FACTOR : in.decimationFactor();
+        SampleClock clock = SampleClock.of(in.samplingFrequencyMhz(), decimationFactor, DecimationMode.DROP);
+        double velocityMmPerUs = Units.mPerSToMmPerUs(Checks.positive("velocity", in.velocityMPerS()));
+
+        checkApplicable(in, technique, timeReference);
+
+        List<Warning> warnings = new ArrayList<>();
+        List<Reference> references = new ArrayList<>();
+        references.add(Reference.of("time resolution",
+                "dt = m / fs, the interval of the stored samples after decimation by m (definition)"));
+
+        double timingErrorNs;
+        double timingStandardUncertaintyNs;
+        if (timeReference == TimeReference.LATERAL_WAVE) {
+            timingErrorNs = clock.differenceWorstCaseNs();
+            timingStandardUncertaintyNs = clock.differenceStandardUncertaintyNs();
+            references.add(Reference.of("timing from the lateral wave",
+                    "a difference of two quantized instants: worst case dt, standard uncertainty dt/sqrt(6)"
+                            + " (triangular distribution, JCGM 100:2008 (GUM) 4.3.9)"));
+        } else {
+            timingErrorNs = clock.singleInstantWorstCaseNs();
+            timingStandardUncertaintyNs = clock.singleInstantStandardUncertaintyNs();
+            references.add(Reference.of("timing from the trigger",
+                    "one instant read at the nearest sample, trigger synchronous with the sampling clock:"
+                            + " worst case dt/2, standard uncertainty dt/sqrt(12) (rectangular distribution,"
+                            + " JCGM 100:2008 (GUM) 4.3.7); sub-sample interpolation does better"));
+        }
+
+        double samplingIntervalUs = clock.samplingIntervalUs();
+        double soundPathResolutionMm = soundPathResolutionMm(technique, velocityMmPerUs, samplingIntervalUs);
+
+        Double depthResolutionMm = null;
+        Double surfaceDistanceResolutionMm = null;
+        Double lateralWaveTimeUs = null;
+        Double timeOfFlightUs = null;
+        Double pulseLimitedDepthResolutionMm = null;
+        Double deadZoneDepthMm = null;
+        Double backwallDeadZoneMm = null;
+        Double pulseDurationUsedUs = null;
+
+        switch (technique) {
+            case PULSE_ECHO -> {
+                references.add(Reference.of("sound path per sample, pulse-echo",
+                        "v dt / 2: the one-way path of one sample of round-trip time (definition)"));
+                if (in.refractedAngleDeg() != null) {
+                    double angleDeg = Checks.inRangeHalfOpen("refracted_angle_deg", in.refractedAngleDeg(), 0.0, 90.0);
+                    double angleRad = StrictMath.toRadians(angleDeg);
+                    depthResolutionMm = soundPathResolutionMm * StrictMath.cos(angleRad);
+                    surfaceDistanceResolutionMm = soundPathResolutionMm * StrictMath.sin(angleRad);
+                    references.add(Reference.of("angle beam",
+                            "depth x cos(theta) and surface distance x sin(theta) of a sound path x along"
+                                    + " the refracted angle theta (geometry, definition)"));
+                }
+            }
+            case THROUGH_TRANSMISSION -> references.add(Reference.of("sound path per sample, through-transmission",
+                    "v dt: the path of one sample of one-way time (definition)"));
+            case TOFD -> {
+                references.add(Reference.of("sound path per sample, TOFD",
+                        "v dt: the change of the path over both legs, transmitter to tip to receiver (definition)"));
+                double halfSeparationMm = Checks.positive("probe_centre_separation", in.probeCentreSeparationMm()) / 2.0;
+                Double depthMm = in.depthMm() == null ? null : Checks.positive("depth", in.depthMm());
+                Double thicknessMm = in.thicknessMm() == null ? null : Checks.positive("thickness", in.thicknessMm());
+                if (depthMm != null && thicknessMm != null && depthMm > thicknessMm) {
+                    throw CalculationException.impossible(
+                            "depth (" + mm(depthMm) + ") lies below the back wall: it exceeds thickness ("
+                                    + mm(thicknessMm) + ")",
+                            "depth", "thickness");
+                }
+                pulseDurationUsedUs = pulseDurationUs(in, references);
+
+                lateralWaveTimeUs = TofdGeometry.lateralWaveTimeUs(halfSeparationMm, velocityMmPerUs);
+                references.add(Reference.of("TOFD geometry",
+                        "probes symmetric about the tip, S = probe_centre_separation / 2: lateral wave 2S/v,"
+                                + " tip t = 2 sqrt(S^2 + d^2)/v, d = sqrt((v t/2)^2 - S^2) (Charlesworth & Temple,"
+                                + " Engineering Applications of Ultrasonic Time-of-Flight Diffraction, 2nd ed.,"
+                                + " 2.3.4, read second-hand); times in the part, wedge delays excluded"));
+                references.add(Reference.of("flaw off the centre line",
+                        "a tip off the centre line between the probes (or off their beam plane) has a longer"
+                                + " path than one on it at the same depth, so the symmetric formula reads it deeper"
+                                + " than it is: off the centre line a flaw lies shallower than its reading"
+                                + " (derived from the same geometry)"));
+
+                if (depthMm != null) {
+                    timeOfFlightUs = TofdGeometry.timeOfFlightUs(halfSeparationMm, depthMm, velocityMmPerUs);
+                    depthResolutionMm = TofdGeometry.depthStepMm(
+                            halfSeparationMm, depthMm, samplingIntervalUs, velocityMmPerUs);
+                    references.add(Reference.of("TOFD depth step per sample",
+                            "the exact forward difference d(t + dt) - d(t) at the depth (derived); the linearised"
+                                    + " slope dt v sqrt(S^2 + d^2)/(2d) overstates it, most near the surface"));
+                    double ratio = TofdGeometry.depthPerHalfSeparationRatio(halfSeparationMm, depthMm);
+                    references.add(Reference.of("probe centre separation error",
+                            String.format(Locale.ROOT,
+                                    "at a fixed time dd/dS = -S/d (derivation); at this depth -S/d = %.4g, so an error"
+                                            + " e in probe_centre_separation (2S) moves the depth by %.4g e",
+                                    ratio, ratio / 2.0)));
+                }
+                if (pulseDurationUsedUs != null) {
+                    deadZoneDepthMm = TofdGeometry.deadZoneDepthMm(halfSeparationMm, pulseDurationUsedUs, velocityMmPerUs);
+                    references.add(Reference.of("TOFD near-surface dead zone",
+                            "sqrt((S + v tp/2)^2 - S^2): depths whose tip signal arrives within tp of the lateral"
+                                    + " wave (from memory; geometry of Charlesworth & Temple 2.3.4)"));
+                    if (depthMm != null) {
+                        pulseLimitedDepthResolutionMm = TofdGeometry.pulseLimitedDepthResolutionMm(
+                                halfSeparationMm, depthMm, pulseDurationUsedUs, velocityMmPerUs);
+                        references.add(Reference.of("TOFD pulse-limited depth resolution",
+                                "sqrt((v (t + tp)/2)^2 - S^2) - d: the depth range within one pulse duration"
+                                        + " after the tip signal (derived from the same geometry)"));
+                        if (depthMm < deadZoneDepthMm) {
+                            warnings.add(Warning.of("DEPTH_IN_DEAD_ZONE",
+                                    "depth (" + mm(depthMm) + ") lies inside the near-surface dead zone ("
+                                            + mm(deadZoneDepthMm) + "): its tip signal arrives within the pulse"
+                                            + " duration of the lateral wave and is hidden by it"));
+                        }
+                    }
+                    if (thicknessMm != null) {
+                        backwallDeadZoneMm = backwallDeadZone(halfSeparationMm, thicknessMm, depthMm,
+                                pulseDurationUsedUs, velocityMmPerUs, deadZoneDepthMm, warnings, references);
+                    }
+                }
+            }
+        }
+
+        return new TimeOfFlightResult(technique, timeReference, decimationFactor,
+                clock.samplingIntervalNs(), timingErrorNs, timingStandardUncertaintyNs, soundPathResolutionMm,
+                depthResolutionMm, surfaceDistanceResolutionMm, lateralWaveTimeUs, timeOfFlightUs,
+                pulseLimitedDepthResolutionMm, deadZoneDepthMm, backwallDeadZoneMm, pulseDurationUsedUs,
+                warnings, references);
+    }
+
+    /**
+     * Sound path of one sample, mm: v dt / 2 for pulse-echo (one way of a round trip), v dt for
+     * through-transmission (one way) and for TOFD (both legs together) (definitions).
+     */
+    public static double soundPathResolutionMm(Technique technique, double velocityMmPerUs, double samplingIntervalUs) {
+        double pathMm = velocityMmPerUs * samplingIntervalUs;
+        return technique == Technique.PULSE_ECHO ? pathMm / 2.0 : pathMm;
+    }
+
+    private static Double backwallDeadZone(double halfSeparationMm, double thicknessMm, Double depthMm,
+            double pulseDurationUs, double velocityMmPerUs, double deadZoneDepthMm,
+            List<Warning> warnings, List<Reference> references) {
+        double zoneMm = TofdGeometry.backwallDeadZoneMm(halfSeparationMm, thicknessMm, pulseDurationUs, velocityMmPerUs);
+        references.add(Reference.of("TOFD back-wall dead zone",
+                "T - sqrt((v (t_T - tp)/2)^2 - S^2) with t_T = 2 sqrt(S^2 + T^2)/v: depths whose tip signal"
+                        + " arrives within tp before the back-wall signal; T when t_T - tp falls at or before"
+                        + " the lateral wave (from memory; geometry of Charlesworth & Temple 2.3.4)"));
+        if (TofdGeometry.backwallPulseReachesLateralWave(halfSeparationMm, thicknessMm, pulseDurationUs, velocityMmPerUs)) {
+            warnings.add(Warning.of("WHOLE_THICKNESS_DEAD",
+                    "the back-wall signal less the pulse duration falls at or before the lateral wave:"
+                            + " the back-wall dead zone covers the whole thickness (" + mm(thicknessMm)
+                            + "); a shorter pulse or a smaller probe_centre_separation widens the window between"
+                            + " the lateral wave and the back wall"));
+            return zoneMm;
+        }
+        if (deadZoneDepthMm + zoneMm >= thicknessMm) {
+            warnings.add(Warning.of("DEAD_ZONES_COVER_THICKNESS",
+                    "the near-surface dead zone (" + mm(deadZoneDepthMm) + ") and the back-wall dead zone ("
+                            + mm(zoneMm) + ") together cover the whole thickness (" + mm(thicknessMm) + ")"));
+        } else if (depthMm != null && depthMm > thicknessMm - zoneMm) {
+            warnings.add(Warning.of("DEPTH_IN_BACKWALL_DEAD_ZONE",
+                    "depth (" + mm(depthMm) + ") lies inside the back-wall dead zone (the last " + mm(zoneMm)
+                            + " above the back wall): its tip signal arrives within the pulse duration before"
+                            + " the back-wall signal and is hidden by it"));
+        }
+        return zoneMm;
+    }
+
+    /** The TOFD pulse duration from its one source, or null when none is given. */
+    private static Double pulseDurationUs(TimeOfFlightInput in, List<Reference> references) {
+        if (in.pulseDurationUs() != null) {
+            references.add(Reference.of("TOFD pulse duration", "pulse_duration_us as given by the caller"));
+            return Checks.positive("pulse_duration_us", in.pulseDurationUs());
+        }
+        if (in.frequencyMhz() == null) {
+            return null;
+        }
+        double frequencyMhz = Checks.positive("frequency_mhz", in.frequencyMhz());
+        double bandwidthFraction = Checks.positive("bandwidth_percent", in.bandwidthPercent()) / 100.0;
+        GaussianPulse pulse = PULSE_MODEL_CONVENTION.pulseModel(frequencyMhz, bandwidthFraction);
+        references.add(Reference.of("TOFD pulse duration",
+                "model value: the -20 dB envelope duration 2 sqrt(ln 10 / a) of the Gaussian pulse model"
+                        + " exp(-a t^2) cos(2 pi fc t) with a = -(pi fc bw)^2 / (4 ln 10^(-6/20)), centre frequency"
+                        + " ARITHMETIC (scipy.signal.gausspulse parameterisation); real probes ring longer:"
+                        + " give pulse_duration_us measured on the A-scan when it matters"));
+        return pulse.envelopeDurationUs(TOFD_PULSE_DURATION_LEVEL_DB);
+    }
+
+    /** Inputs that do not belong to the chosen technique, and TOFD's required and paired inputs. */
+    private static void checkApplicable(TimeOfFlightInput in, Technique technique, TimeReference timeReference) {
+        if (technique != Technique.TOFD) {
+            onlyTofd("probe_centre_separation", in.probeCentreSeparationMm(), technique);
+            onlyTofd("depth", in.depthMm(), technique);
+            onlyTofd("thickness", in.thicknessMm(), technique);
+            onlyTofd("pulse_duration_us", in.pulseDurationUs(), technique);
+            onlyTofd("frequency_mhz", in.frequencyMhz(), technique);
+            onlyTofd("bandwidth_percent", in.bandwidthPercent(), technique);
+            if (timeReference == TimeReference.LATERAL_WAVE) {
+                throw CalculationException.notApplicable("time_reference",
+                        "time_reference LATERAL_WAVE applies only to technique TOFD (here " + technique + ")");
+            }
+        }
+        if (technique != Technique.PULSE_ECHO && in.refractedAngleDeg() != null) {
+            throw CalculationException.notApplicable("refracted_angle_deg",
+                    "refracted_angle_deg applies only to technique PULSE_ECHO (here " + technique + ")"
+                            + (technique == Technique.TOFD ? "; the TOFD geometry comes from probe_centre_separation" : ""));
+        }
+        if (technique == Technique.TOFD) {
+            if (in.probeCentreSeparationMm() == null) {
+                throw CalculationException.notApplicable("probe_centre_separation",
+                        "probe_centre_separation is required for TOFD");
+            }
+            if (in.pulseDurationUs() != null && (in.frequencyMhz() != null || in.bandwidthPercent() != null)) {
+                throw CalculationException.notApplicable("pulse_duration_us",
+                        "give the pulse duration by pulse_duration_us or by frequency_mhz with bandwidth_percent,"
+                                + " not both");
+            }
+            if (in.frequencyMhz() != null && in.bandwidthPercent() == null) {
+                throw CalculationException.notApplicable("bandwidth_percent",
+                        "bandwidth_percent is required with frequency_mhz for the TOFD pulse duration");
+            }
+            if (in.bandwidthPercent() != null && in.frequencyMhz() == null) {
+                throw CalculationException.notApplicable("frequency_mhz",
+                        "frequency_mhz is required with bandwidth_percent for the TOFD pulse duration");
+            }
+        }
+    }
+
+    private static void onlyTofd(String field, Double value, Technique technique) {
+        if (value != null) {
+            throw CalculationException.notApplicable(field,
+                    field + " applies only to technique TOFD (here " + technique + ")");
+        }
+    }
+
+    private static String mm(double lengthMm) {
+        return String.format(Locale.ROOT, "%.4g mm", lengthMm);
+    }
+}
