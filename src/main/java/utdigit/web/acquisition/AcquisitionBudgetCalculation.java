@@ -10,7 +10,6 @@ import org.springframework.stereotype.Component;
 import utdigit.core.acquisition.AcquisitionCalculator;
 import utdigit.core.acquisition.AcquisitionInput;
 import utdigit.core.acquisition.AcquisitionResult;
-import utdigit.core.common.CalculationError;
 import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.web.common.Calculation;
@@ -41,6 +40,16 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
     @Override
     public Class<AcquisitionBudgetRequest> requestType() {
         return AcquisitionBudgetRequest.class;
+    }
+
+    /** A core input named in mm points at the inch form when the caller gave that; a velocity at its source. */
+    @Override
+    public String pointer(String coreField, AcquisitionBudgetRequest q) {
+        if ("velocity_m_per_s".equals(coreField)) {
+            return JsonPointers.property(q.material() != null ? "material"
+                    : q.velocityInPerUs() != null ? "velocity_in_per_us" : "velocity_m_per_s");
+        }
+        return JsonPointers.property(inchInputs(q).getOrDefault(coreField, coreField));
     }
 
     @Override
@@ -154,7 +163,7 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
         }
     }
 
-    /** The core's millimetre input names for the inputs this request gave in inches. */
+    /** The core's millimetre input names for the inputs this request gave in inches, with the inch names. */
     private static Map<String, String> inchInputs(AcquisitionBudgetRequest q) {
         Map<String, String> renames = new LinkedHashMap<>();
         if (q.gateLengthIn() != null) {
@@ -173,10 +182,12 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
     }
 
     /**
-     * The core's failure with its input names as the caller gave them (gate_length_in for a gate the
-     * core saw in mm), in the pointers and in the message; unchanged when no renamed input is named.
+     * The core's failure with the message naming the inputs as the caller gave them (gate_length_in
+     * for a gate the core saw in mm); the pointers follow from {@link #pointer}. Unchanged when no
+     * input was given in inches, and for INVALID_INPUT, which Bean Validation and the mirrors' range
+     * checks leave unreachable.
      */
-    static RuntimeException inCallerTerms(CalculationException e, Map<String, String> renames) {
+    static CalculationException inCallerTerms(CalculationException e, Map<String, String> renames) {
         if (e.fields().stream().noneMatch(renames::containsKey)) {
             return e;
         }
@@ -185,16 +196,10 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
             message = Pattern.compile("\\b" + Pattern.quote(rename.getKey()) + "\\b").matcher(message)
                     .replaceAll(Matcher.quoteReplacement(rename.getValue()));
         }
-        List<String> fields = e.fields().stream().map(f -> renames.getOrDefault(f, f)).toList();
-        if (e.error() == CalculationError.IMPOSSIBLE_COMBINATION) {
-            return CalculationException.impossible(message, fields.toArray(String[]::new));
-        }
-        if (e.error() == CalculationError.NOT_APPLICABLE) {
-            return CalculationException.notApplicable(fields.get(0), message);
-        }
-        // INVALID_INPUT: not reached after Bean Validation and the mirrors' range checks; kept in caller terms.
-        String detail = message;
-        return new InputProblem(ProblemType.INVALID_INPUT, detail,
-                fields.stream().map(f -> new FieldError(JsonPointers.property(f), detail)).toList());
+        return switch (e.error()) {
+            case IMPOSSIBLE_COMBINATION -> CalculationException.impossible(message, e.fields().toArray(String[]::new));
+            case NOT_APPLICABLE -> CalculationException.notApplicable(e.fields().get(0), message);
+            case INVALID_INPUT -> e;
+        };
     }
 }
