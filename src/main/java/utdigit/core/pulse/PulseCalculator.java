@@ -1,0 +1,372 @@
+package utdigit.core.pulse;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import utdigit.core.common.CalculationException;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Units;
+import utdigit.core.common.Warning;
+
+/**
+ * Pulse and beam parameters of a probe (POST /api/pulse-parameters): period and wavelength; with a
+ * bandwidth, the band edges, pulse durations and lengths of the Gaussian pulse model; with an
+ * element diameter, the near field and the pulse-echo beam spread of a circular piston; with a
+ * distance, the beam diameter there; behind a wedge, the near field left in the part and the
+ * refracted angle.
+ *
+ * <p>The formulas and their references are on {@link Waves}, {@link GaussianPulse},
+ * {@link CentreFrequencyConvention}, {@link PistonBeam}, {@link PistonDirectivity} and
+ * {@link Snell}. Period, wavelength, near field and beam spread use the nominal frequency; durations
+ * and cycles the pulse model's carrier (the same with ARITHMETIC). The distance is a distance in the
+ * part: with wedge_path_mm given, it is compared with the near field left in the part, else with
+ * the near field. The band edges are the one-sided model's (DOMAIN); a -20 or -40 dB lower edge more
+ * than 0.1 % above the real pulse's (its negative-frequency image, {@link RealPulseSpectrum}) is
+ * flagged with a warning. Stateless and thread-safe.
+ */
+public final class PulseCalculator {
+    private PulseCalculator() {}
+
+    /** The convention used when a bandwidth is given without one (the contract's default). */
+    public static final CentreFrequencyConvention DEFAULT_CONVENTION = CentreFrequencyConvention.ARITHMETIC;
+
+    /** Above this bandwidth the real pulse's negative-frequency image moves its lower edges. */
+    public static final double IMAGE_WARNING_BANDWIDTH_PERCENT = 100.0;
+
+    /** Pulse-echo levels of the beam-spread fields, dB below the axis. */
+    static final double BEAM_SPREAD_6DB = -6.0;
+    static final double BEAM_SPREAD_20DB = -20.0;
+
+    /** Band-edge and duration levels of the result fields, dB below the peak. */
+    static final double LEVEL_6DB = -6.0;
+    static final double LEVEL_20DB = -20.0;
+    static final double LEVEL_40DB = -40.0;
+
+    /** Warning codes. */
+    public static final String BANDWIDTH_ABOVE_100_PERCENT = "BANDWIDTH_ABOVE_100_PERCENT";
+    public static final String NO_LOWER_FREQUENCY_20DB = "NO_LOWER_FREQUENCY_20DB";
+    public static final String NO_LOWER_FREQUENCY_40DB = "NO_LOWER_FREQUENCY_40DB";
+    public static final String REAL_LOWER_EDGE_BELOW_MODEL = "REAL_LOWER_EDGE_BELOW_MODEL";
+    public static final String NO_EXACT_NEAR_FIELD = "NO_EXACT_NEAR_FIELD";
+    public static final String NO_BEAM_SPREAD_6DB = "NO_BEAM_SPREAD_6DB";
+    public static final String NO_BEAM_SPREAD_20DB = "NO_BEAM_SPREAD_20DB";
+    public static final String NO_BEAM_SPREAD_NULL = "NO_BEAM_SPREAD_NULL";
+    public static final String NO_BEAM_DIAMETER_6DB = "NO_BEAM_DIAMETER_6DB";
+    public static final String DISTANCE_IN_NEAR_FIELD = "DISTANCE_IN_NEAR_FIELD";
+    public static final String PART_IN_FAR_FIELD_ONLY = "PART_IN_FAR_FIELD_ONLY";
+    public static final String PAST_CRITICAL_ANGLE = "PAST_CRITICAL_ANGLE";
+
+    /**
+     * A model lower edge more than this fraction above the real pulse's is flagged (the tolerance to
+     * which the tests hold unflagged edges against an FFT of the real pulse: 0.1 %).
+     */
+    public static final double REAL_LOWER_EDGE_TOLERANCE_FRACTION = 1e-3;
+
+    /**
+     * The real lower edge is solved only where its first-order estimated shift exceeds this (half the
+     * tolerance: the estimate is within a few % of the solved shift near the tolerance, see
+     * {@link RealPulseSpectrum#estimatedLowerEdgeShiftFraction}).
+     */
+    private static final double REAL_LOWER_EDGE_SOLVE_FRACTION = REAL_LOWER_EDGE_TOLERANCE_FRACTION / 2.0;
+
+    private static final MathContext MESSAGE_DIGITS = new MathContext(4);
+
+    /**
+     * Computes every result whose inputs are given.
+     *
+     * @throws CalculationException NOT_APPLICABLE (HTTP 400) for an input given without the input
+     *     it needs: centre_frequency_convention without bandwidth_percent, distance_mm or
+     *     wedge_path_mm without element_diameter_mm, wedge_path_mm or incident_angle_deg without
+     *     wedge_velocity_m_per_s, wedge_velocity_m_per_s without either of them
+     */
+    public static PulseResult compute(PulseInput in) {
+        Objects.requireNonNull(in, "input");
+        checkApplicability(in);
+        List<Warning> warnings = new ArrayList<>();
+        List<Reference> references = new ArrayList<>();
+
+        double frequencyMhz = in.frequencyMhz();
+        double velocityMPerS = in.velocityMPerS();
+        double periodUs = Waves.periodUs(frequencyMhz);
+        double wavelengthMm = Waves.wavelengthMm(velocityMPerS, frequencyMhz);
+        references.add(Reference.of("period and wavelength",
+                "definitions: T = 1/f, lambda = v/f, at the nominal frequency_mhz"));
+
+        Band band = in.bandwidthPercent() == null
+                ? Band.NONE
+                : band(in, warnings, references);
+
+        Double nearFieldLengthMm = null;
+        Optional<Double> nearFieldLengthExactMm = null;
+        Optional<Double> beamSpread6dbDeg = null;
+        Optional<Double> beamSpread20dbDeg = null;
+        Optional<Double> beamSpreadNullDeg = null;
+        Optional<Double> beamDiameter6dbMm = null;
+        Double nearFieldInPartMm = null;
+        if (in.elementDiameterMm() != null) {
+            double diameterMm = in.elementDiameterMm();
+            nearFieldLengthMm = PistonBeam.nearFieldLengthMm(diameterMm, wavelengthMm);
+            references.add(Reference.of("near field length",
+                    "N = D^2/(4 lambda): the trade's formula for a circular element, common practice"));
+            nearFieldLengthExactMm = PistonBeam.exactNearFieldLengthMm(diameterMm, wavelengthMm);
+            references.add(Reference.of("exact near field length",
+                    "last on-axis pressure maximum of a circular piston, (D^2 - lambda^2)/(4 lambda): "
+                            + "Krautkraemer, Ultrasonic Testing of Materials; Kinsler et al., "
+                            + "Fundamentals of Acoustics (from memory)"));
+            if (nearFieldLengthExactMm.isEmpty()) {
+                warnings.add(Warning.of(NO_EXACT_NEAR_FIELD, "element_diameter_mm " + fmt(diameterMm)
+                        + " is smaller than the wavelength " + fmt(wavelengthMm)
+                        + " mm: the on-axis pressure has no maximum in front of the element, so "
+                        + "near_field_length_exact_mm does not exist"));
+            }
+
+            beamSpread6dbDeg = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
+                    wavelengthMm, diameterMm, NO_BEAM_SPREAD_6DB, "beam_spread_6db_deg",
+                    "the pulse-echo -6 dB level", warnings);
+            beamSpread20dbDeg = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
+                    wavelengthMm, diameterMm, NO_BEAM_SPREAD_20DB, "beam_spread_20db_deg",
+                    "the pulse-echo -20 dB level", warnings);
+            beamSpreadNullDeg = beamSpread(PistonDirectivity.firstNullConstant(),
+                    wavelengthMm, diameterMm, NO_BEAM_SPREAD_NULL, "beam_spread_null_deg",
+                    "the first null", warnings);
+            references.add(Reference.of("beam spread",
+                    "far-field directivity of a circular piston D(x) = 2 J1(x)/x, x = pi D sin(theta)/lambda "
+                            + "(Kinsler et al., Fundamentals of Acoustics, from memory); pulse-echo half-angles "
+                            + "sin(theta) = k lambda/D with D(pi k)^2 = 10^(-L/20), the first null at the first "
+                            + "zero of J1; k solved with Apache Commons Math 3.6.1 BesselJ and BrentSolver"));
+
+            if (in.wedgePathMm() != null) {
+                nearFieldInPartMm = PistonBeam.nearFieldInPartMm(
+                        nearFieldLengthMm, in.wedgePathMm(), in.wedgeVelocityMPerS(), velocityMPerS);
+                references.add(Reference.of("near field in the part",
+                        "N - w v_w / v behind a wedge or delay line: common practice (from memory)"));
+                if (nearFieldInPartMm < 0) {
+                    warnings.add(Warning.of(PART_IN_FAR_FIELD_ONLY, "the near field ("
+                            + fmt(nearFieldLengthMm) + " mm in the part's material) ends inside the wedge "
+                            + "or delay line (wedge_path_mm " + fmt(in.wedgePathMm())
+                            + " at wedge_velocity_m_per_s " + fmt(in.wedgeVelocityMPerS())
+                            + "): near_field_in_part_mm is negative and the part sees only far field"));
+                }
+            }
+
+            if (in.distanceMm() != null) {
+                double distanceMm = in.distanceMm();
+                if (beamSpread6dbDeg.isEmpty()) {
+                    beamDiameter6dbMm = Optional.empty();
+                    warnings.add(Warning.of(NO_BEAM_DIAMETER_6DB, "without a pulse-echo -6 dB beam-spread "
+                            + "angle the far-field beam does not narrow to a -6 dB width: "
+                            + "beam_diameter_6db_mm does not exist"));
+                } else {
+                    beamDiameter6dbMm = Optional.of(PistonBeam.beamDiameterMm(distanceMm, beamSpread6dbDeg.get()));
+                }
+                references.add(Reference.of("beam diameter",
+                        "2 z tan(theta) with the pulse-echo -6 dB half-angle: far-field beam geometry, "
+                                + "common practice"));
+                double nearFieldAheadMm = nearFieldInPartMm != null ? nearFieldInPartMm : nearFieldLengthMm;
+                if (distanceMm < nearFieldAheadMm) {
+                    warnings.add(Warning.of(DISTANCE_IN_NEAR_FIELD, "distance_mm " + fmt(distanceMm)
+                            + " lies inside the near field (" + fmt(nearFieldAheadMm) + " mm"
+                            + (nearFieldInPartMm != null ? " left in the part" : "")
+                            + "): the far-field beam_diameter_6db_mm does not hold there"));
+                }
+            }
+        }
+
+        Optional<Double> refractedAngleDeg = null;
+        if (in.incidentAngleDeg() != null) {
+            double incidentDeg = in.incidentAngleDeg();
+            double wedgeVelocityMPerS = in.wedgeVelocityMPerS();
+            refractedAngleDeg = Snell.refractedAngleDeg(incidentDeg, wedgeVelocityMPerS, velocityMPerS);
+            references.add(Reference.of("refracted angle",
+                    "Snell's law sin(theta_r)/v = sin(theta_i)/v_w, with the part's velocity of the chosen "
+                            + "wave mode"));
+            if (refractedAngleDeg.isEmpty()) {
+                double criticalDeg = Snell.criticalAngleDeg(wedgeVelocityMPerS, velocityMPerS).orElseThrow();
+                warnings.add(Warning.of(PAST_CRITICAL_ANGLE, "incident_angle_deg " + fmt(incidentDeg)
+                        + " is at or past the critical angle " + fmt(criticalDeg) + " deg (wedge_velocity_m_per_s "
+                        + fmt(wedgeVelocityMPerS) + " into velocity_m_per_s " + fmt(velocityMPerS)
+                        + "): no refracted wave of this mode enters the part, refracted_angle_deg does not exist"));
+            }
+        }
+
+        return new PulseResult(
+                band.convention,
+                periodUs,
+                wavelengthMm,
+                Units.mmToIn(wavelengthMm),
+                band.lowerFrequencyMhz,
+                band.upperFrequencyMhz,
+                band.lowerFrequency20dbMhz,
+                band.upperFrequency20dbMhz,
+                band.lowerFrequency40dbMhz,
+                band.upperFrequency40dbMhz,
+                band.pulseDuration6dbUs,
+                band.pulseDuration20dbUs,
+                band.cycles6db,
+                band.spatialPulseLengthMm,
+                band.axialResolutionMm,
+                nearFieldLengthMm,
+                nearFieldLengthExactMm,
+                beamSpread6dbDeg,
+                beamSpread20dbDeg,
+                beamSpreadNullDeg,
+                beamDiameter6dbMm,
+                nearFieldInPartMm,
+                refractedAngleDeg,
+                warnings,
+                references);
+    }
+
+    /** The band results, all null without a bandwidth. */
+    private record Band(
+            CentreFrequencyConvention convention,
+            Double lowerFrequencyMhz,
+            Double upperFrequencyMhz,
+            Optional<Double> lowerFrequency20dbMhz,
+            Double upperFrequency20dbMhz,
+            Optional<Double> lowerFrequency40dbMhz,
+            Double upperFrequency40dbMhz,
+            Double pulseDuration6dbUs,
+            Double pulseDuration20dbUs,
+            Double cycles6db,
+            Double spatialPulseLengthMm,
+            Double axialResolutionMm) {
+        static final Band NONE = new Band(null, null, null, null, null, null, null, null, null, null, null, null);
+    }
+
+    private static Band band(PulseInput in, List<Warning> warnings, List<Reference> references) {
+        CentreFrequencyConvention convention = in.centreFrequencyConvention() == null
+                ? DEFAULT_CONVENTION
+                : in.centreFrequencyConvention();
+        double bandwidthPercent = in.bandwidthPercent();
+        double fractionalBandwidth = bandwidthPercent / 100.0;
+        double[] edgesMhz = convention.bandEdgesMhz(in.frequencyMhz(), fractionalBandwidth);
+        GaussianPulse model = convention.pulseModel(in.frequencyMhz(), fractionalBandwidth);
+
+        references.add(Reference.of("-6 dB band edges", convention == CentreFrequencyConvention.ARITHMETIC
+                ? "bandwidth between the -6 dB points (ASTM E1065, 3.2.2); arithmetic centre "
+                        + "fc = (fl + fu)/2 (ASTM E1065, from memory)"
+                : "bandwidth between the -6 dB points (ASTM E1065, 3.2.2); geometric centre "
+                        + "fc = sqrt(fl fu) (EN 12668-2 / ISO 22232-2, from memory)"));
+        references.add(Reference.of("-20 dB and -40 dB band edges, pulse durations and cycles",
+                "model value: Gaussian pulse exp(-a t^2) cos(2 pi fc t), the parameterisation of "
+                        + "scipy.signal.gausspulse, carrier (fl + fu)/2; one-sided spectrum L dB down at "
+                        + "fc +/- (bw fc/2) sqrt(L/6); envelope duration 2 sqrt(-ln r / a) at ratio r"));
+        references.add(Reference.of("spatial pulse length and axial resolution",
+                "v tau(-6 dB), and half of it in pulse-echo: common practice, no published source"));
+
+        if (bandwidthPercent > IMAGE_WARNING_BANDWIDTH_PERCENT) {
+            Optional<Double> realLowerMhz = RealPulseSpectrum.lowerEdgeMhz(model, LEVEL_6DB);
+            warnings.add(Warning.of(BANDWIDTH_ABOVE_100_PERCENT, "bandwidth_percent " + fmt(bandwidthPercent)
+                    + " is above 100 %: the real model pulse's negative-frequency image raises its spectrum at "
+                    + "low frequencies, so its -6 dB lower edge is not at lower_frequency_mhz (" + fmt(edgesMhz[0])
+                    + " MHz) but " + realLowerMhz.map(f -> fmt(f) + " MHz").orElse("absent (it stays above -6 dB "
+                    + "down to 0 Hz)") + "; the model values (durations, cycles, -20 and -40 dB edges) then "
+                    + "describe a pulse whose real band is wider than the stated one"));
+            references.add(REAL_LOWER_EDGE_REFERENCE);
+        }
+        Optional<Double> lower20 = lowerEdge(model, LEVEL_20DB, NO_LOWER_FREQUENCY_20DB,
+                "lower_frequency_20db_mhz", warnings, references);
+        Optional<Double> lower40 = lowerEdge(model, LEVEL_40DB, NO_LOWER_FREQUENCY_40DB,
+                "lower_frequency_40db_mhz", warnings, references);
+
+        double duration6Us = model.envelopeDurationUs(LEVEL_6DB);
+        double spatialPulseLengthMm = Waves.spatialPulseLengthMm(in.velocityMPerS(), duration6Us);
+        return new Band(
+                convention,
+                edgesMhz[0],
+                edgesMhz[1],
+                lower20,
+                model.upperEdgeMhz(LEVEL_20DB),
+                lower40,
+                model.upperEdgeMhz(LEVEL_40DB),
+                duration6Us,
+                model.envelopeDurationUs(LEVEL_20DB),
+                model.cycles(LEVEL_6DB),
+                spatialPulseLengthMm,
+                Waves.axialResolutionMm(spatialPulseLengthMm));
+    }
+
+    private static final Reference REAL_LOWER_EDGE_REFERENCE = Reference.of("real pulse's lower band edge",
+            "(derived) spectrum G(f - fc) + G(f + fc) of the real pulse, G the one-sided model's Gaussian; "
+                    + "roots by Apache Commons Math 3.6.1 BrentSolver");
+
+    private static Optional<Double> lowerEdge(GaussianPulse model, double levelDb, String code, String field,
+            List<Warning> warnings, List<Reference> references) {
+        double edgeMhz = model.lowerEdgeMhz(levelDb);
+        if (!(edgeMhz > 0)) {
+            warnings.add(Warning.of(code, "the pulse model's spectrum does not fall " + fmt(-levelDb)
+                    + " dB below its peak above 0 Hz (the edge would lie at " + fmt(edgeMhz) + " MHz): "
+                    + field + " does not exist"));
+            return Optional.empty();
+        }
+        if (RealPulseSpectrum.estimatedLowerEdgeShiftFraction(model, levelDb) > REAL_LOWER_EDGE_SOLVE_FRACTION) {
+            Optional<Double> realMhz = RealPulseSpectrum.lowerEdgeMhz(model, levelDb);
+            boolean departs = realMhz.isEmpty()
+                    || edgeMhz - realMhz.get() > REAL_LOWER_EDGE_TOLERANCE_FRACTION * realMhz.get();
+            if (departs) {
+                if (!references.contains(REAL_LOWER_EDGE_REFERENCE)) {
+                    references.add(REAL_LOWER_EDGE_REFERENCE);
+                }
+                String why = realMhz.isEmpty()
+                        ? "keeps its spectrum above " + fmt(levelDb) + " dB down to 0 Hz, so the real pulse has "
+                                + "no such lower edge"
+                        : "lifts its spectrum at low frequencies, so its " + fmt(levelDb) + " dB lower edge lies at "
+                                + fmt(realMhz.get()) + " MHz, " + fmt(100.0 * (edgeMhz - realMhz.get()) / edgeMhz)
+                                + " % lower";
+                warnings.add(Warning.of(REAL_LOWER_EDGE_BELOW_MODEL, field + " " + fmt(edgeMhz)
+                        + " MHz is the one-sided model's edge; the real pulse's negative-frequency image " + why));
+            }
+        }
+        return Optional.of(edgeMhz);
+    }
+
+    private static Optional<Double> beamSpread(double constant, double wavelengthMm, double diameterMm,
+            String code, String field, String what, List<Warning> warnings) {
+        Optional<Double> angleDeg = PistonDirectivity.halfAngleDeg(constant, wavelengthMm, diameterMm);
+        if (angleDeg.isEmpty()) {
+            warnings.add(Warning.of(code, "element_diameter_mm " + fmt(diameterMm) + " is too small for the "
+                    + "wavelength " + fmt(wavelengthMm) + " mm: k lambda / D = "
+                    + fmt(PistonDirectivity.sineOfHalfAngle(constant, wavelengthMm, diameterMm))
+                    + " is not below 1, so the beam does not fall to " + what + " at any angle and "
+                    + field + " does not exist"));
+        }
+        return angleDeg;
+    }
+
+    private static void checkApplicability(PulseInput in) {
+        if (in.centreFrequencyConvention() != null && in.bandwidthPercent() == null) {
+            throw CalculationException.notApplicable("centre_frequency_convention",
+                    "centre_frequency_convention applies only together with bandwidth_percent");
+        }
+        if (in.distanceMm() != null && in.elementDiameterMm() == null) {
+            throw CalculationException.notApplicable("distance_mm",
+                    "distance_mm needs element_diameter_mm: the beam diameter follows from the element's beam spread");
+        }
+        if (in.wedgePathMm() != null && in.wedgeVelocityMPerS() == null) {
+            throw CalculationException.notApplicable("wedge_path_mm",
+                    "wedge_path_mm needs wedge_velocity_m_per_s to give the near field left in the part");
+        }
+        if (in.wedgePathMm() != null && in.elementDiameterMm() == null) {
+            throw CalculationException.notApplicable("wedge_path_mm",
+                    "wedge_path_mm needs element_diameter_mm: the near field left in the part follows from "
+                            + "the element's near field");
+        }
+        if (in.incidentAngleDeg() != null && in.wedgeVelocityMPerS() == null) {
+            throw CalculationException.notApplicable("incident_angle_deg",
+                    "incident_angle_deg needs wedge_velocity_m_per_s to give the refracted angle");
+        }
+        if (in.wedgeVelocityMPerS() != null && in.wedgePathMm() == null && in.incidentAngleDeg() == null) {
+            throw CalculationException.notApplicable("wedge_velocity_m_per_s",
+                    "wedge_velocity_m_per_s applies only together with wedge_path_mm or incident_angle_deg");
+        }
+    }
+
+    /** A number for a message: 4 significant digits, no exponent. */
+    private static String fmt(double x) {
+        return new BigDecimal(x).round(MESSAGE_DIGITS).stripTrailingZeros().toPlainString();
+    }
+}

@@ -1,0 +1,78 @@
+package utdigit.core.pulse;
+
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Warning;
+
+/**
+ * The results of the pulse-parameters calculation, named as the contract names them (camelCase of
+ * the snake_case fields). A boxed or {@code Optional} field is null when the input it needs was not
+ * given; an {@code Optional} field is empty when the value cannot exist for the given inputs, and
+ * then a {@link Warning} says why.
+ *
+ * @param centreFrequencyConvention the convention used (the default ARITHMETIC when the bandwidth
+ *     was given without one); null without a bandwidth
+ * @param periodUs period 1/f at the nominal frequency, us
+ * @param wavelengthMm wavelength v/f in the part at the nominal frequency, mm
+ * @param wavelengthIn the same in inches
+ * @param lowerFrequencyMhz lower -6 dB band edge of the convention, MHz
+ * @param upperFrequencyMhz upper -6 dB band edge of the convention, MHz
+ * @param lowerFrequency20dbMhz lower -20 dB edge of the pulse model, MHz; empty when <= 0 Hz
+ * @param upperFrequency20dbMhz upper -20 dB edge of the pulse model, MHz
+ * @param lowerFrequency40dbMhz lower -40 dB edge of the pulse model, MHz; empty when <= 0 Hz
+ * @param upperFrequency40dbMhz upper -40 dB edge of the pulse model, MHz
+ * @param pulseDuration6dbUs full envelope duration of the pulse model at -6 dB, us
+ * @param pulseDuration20dbUs full envelope duration of the pulse model at -20 dB, us
+ * @param cycles6db carrier cycles within the -6 dB duration
+ * @param spatialPulseLengthMm v times the -6 dB duration, mm
+ * @param axialResolutionMm half the spatial pulse length (pulse-echo), mm
+ * @param nearFieldLengthMm D^2 / (4 lambda), mm
+ * @param nearFieldLengthExactMm (D^2 - lambda^2) / (4 lambda), mm; empty when D < lambda
+ * @param beamSpread6dbDeg pulse-echo -6 dB half-angle, degrees; empty when it does not exist
+ * @param beamSpread20dbDeg pulse-echo -20 dB half-angle, degrees; empty when it does not exist
+ * @param beamSpreadNullDeg half-angle of the first null, degrees; empty when it does not exist
+ * @param beamDiameter6dbMm -6 dB beam diameter at the distance, mm; empty without a -6 dB angle
+ * @param nearFieldInPartMm near field left in the part behind the wedge, mm (negative: none)
+ * @param refractedAngleDeg refracted angle in the part, degrees; empty past the critical angle
+ * @param warnings conditions the caller should know about
+ * @param references the source of every formula used
+ */
+public record PulseResult(
+        CentreFrequencyConvention centreFrequencyConvention,
+        double periodUs,
+        double wavelengthMm,
+        double wavelengthIn,
+        Double lowerFrequencyMhz,
+        Double upperFrequencyMhz,
+        Optional<Double> lowerFrequency20dbMhz,
+        Double upperFrequency20dbMhz,
+        Optional<Double> lowerFrequency40dbMhz,
+        Double upperFrequency40dbMhz,
+        Double pulseDuration6dbUs,
+        Double pulseDuration20dbUs,
+        Double cycles6db,
+        Double spatialPulseLengthMm,
+        Double axialResolutionMm,
+        Double nearFieldLengthMm,
+        Optional<Double> nearFieldLengthExactMm,
+        Optional<Double> beamSpread6dbDeg,
+        Optional<Double> beamSpread20dbDeg,
+        Optional<Double> beamSpreadNullDeg,
+        Optional<Double> beamDiameter6dbMm,
+        Double nearFieldInPartMm,
+        Optional<Double> refractedAngleDeg,
+        List<Warning> warnings,
+        List<Reference> references) {
+
+    public PulseResult {
+        warnings = List.copyOf(Objects.requireNonNull(warnings, "warnings"));
+        references = List.copyOf(Objects.requireNonNull(references, "references"));
+    }
+
+    /** Whether a warning with this code was given. */
+    public boolean hasWarning(String code) {
+        return warnings.stream().anyMatch(w -> w.code().equals(code));
+    }
+}

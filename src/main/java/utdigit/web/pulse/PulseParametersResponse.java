@@ -1,0 +1,75 @@
+package utdigit.web.pulse;
+
+import io.swagger.v3.oas.annotations.media.Schema;
+import java.util.List;
+import java.util.Optional;
+import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ResultNotes.WarningView;
+import utdigit.web.common.VelocitySourceView;
+
+/** The answer of POST /api/pulse-parameters. */
+@Schema(name = "PulseParameters", description = "Period, wavelength, the Gaussian pulse model's band and durations, "
+        + "and the circular piston's near field and beam spread. Fields whose optional inputs were not given are "
+        + "omitted; a value that cannot exist is null with a warning.")
+record PulseParametersResponse(
+        @Schema(description = "Period of the nominal frequency, us", format = "double", example = "0.2")
+        double periodUs,
+        @Schema(description = "Wavelength in the part at the nominal frequency, mm", format = "double", example = "1.184")
+        double wavelengthMm,
+        @Schema(description = "Wavelength in the part, in", format = "double", example = "0.0466")
+        double wavelengthIn,
+        @Schema(description = "Lower -6 dB band edge of the chosen convention, MHz", format = "double", example = "3.5")
+        Double lowerFrequencyMhz,
+        @Schema(description = "Upper -6 dB band edge of the chosen convention, MHz", format = "double", example = "6.5")
+        Double upperFrequencyMhz,
+        @Schema(description = "Lower -20 dB edge of the pulse model, MHz; null below 0 Hz", format = "double",
+                types = {"number", "null"}, example = "2.26")
+        Optional<Double> lowerFrequency20dbMhz,
+        @Schema(description = "Upper -20 dB edge of the pulse model, MHz", format = "double", example = "7.74")
+        Double upperFrequency20dbMhz,
+        @Schema(description = "Lower -40 dB edge of the pulse model, MHz; null below 0 Hz", format = "double",
+                types = {"number", "null"}, example = "0.39")
+        Optional<Double> lowerFrequency40dbMhz,
+        @Schema(description = "Upper -40 dB edge of the pulse model, MHz", format = "double", example = "9.61")
+        Double upperFrequency40dbMhz,
+        @Schema(description = "Envelope duration between its -6 dB points, us", format = "double", example = "0.294")
+        Double pulseDuration6dbUs,
+        @Schema(description = "Envelope duration between its -20 dB points, us", format = "double", example = "0.537")
+        Double pulseDuration20dbUs,
+        @Schema(description = "Carrier cycles within the -6 dB envelope duration", format = "double", example = "1.47")
+        Double cycles6db,
+        @Schema(description = "Spatial pulse length, velocity x -6 dB duration, mm", format = "double", example = "1.74")
+        Double spatialPulseLengthMm,
+        @Schema(description = "Axial (range) resolution, half the spatial pulse length, mm (common practice)",
+                format = "double", example = "0.87")
+        Double axialResolutionMm,
+        @Schema(description = "Near-field length D^2 / (4 lambda), mm", format = "double", example = "21.1")
+        Double nearFieldLengthMm,
+        @Schema(description = "Last on-axis maximum (D^2 - lambda^2) / (4 lambda), mm; null when D <= lambda",
+                format = "double", types = {"number", "null"}, example = "20.8")
+        Optional<Double> nearFieldLengthExactMm,
+        @Schema(description = "Pulse-echo (two-way) -6 dB beam-spread half-angle, deg; null when none exists",
+                format = "double", types = {"number", "null"}, example = "3.49")
+        Optional<Double> beamSpread6dbDeg,
+        @Schema(description = "Pulse-echo (two-way) -20 dB beam-spread half-angle, deg; null when none exists",
+                format = "double", types = {"number", "null"}, example = "5.9")
+        Optional<Double> beamSpread20dbDeg,
+        @Schema(description = "Half-angle to the first null of the far-field directivity, deg; null when none exists",
+                format = "double", types = {"number", "null"}, example = "8.3")
+        Optional<Double> beamSpreadNullDeg,
+        @Schema(description = "Beam diameter at the distance, 2 z tan(theta -6 dB), mm; null when no angle exists",
+                format = "double", types = {"number", "null"}, example = "6.1")
+        Optional<Double> beamDiameter6dbMm,
+        @Schema(description = "Near field left in the part behind the wedge or delay line, N - w v_w / v, mm; "
+                + "negative: the part sees only far field", format = "double", example = "15.6")
+        Double nearFieldInPartMm,
+        @Schema(description = "Refracted angle in the part by Snell's law, deg; null past the critical angle",
+                format = "double", types = {"number", "null"}, example = "45.3")
+        Optional<Double> refractedAngleDeg,
+        @Schema(description = "The normalised request, with every default that has an effect; itself a valid "
+                + "request that reproduces this answer")
+        PulseParametersRequest inputs,
+        VelocitySourceView velocitySource,
+        List<WarningView> warnings,
+        List<ReferenceView> references) {
+}
