@@ -19,7 +19,10 @@ import org.junit.jupiter.api.DynamicTest;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestFactory;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.SerializationFeature;
+import tools.jackson.core.util.DefaultIndenter;
+import tools.jackson.core.util.DefaultPrettyPrinter;
+import tools.jackson.core.util.Separators;
+import tools.jackson.databind.ObjectWriter;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.support.ApiTest;
@@ -53,7 +56,12 @@ class ExamplesTest extends ApiTest {
     static final String STAMPED_EXAMPLE = "pulse-parameters";
     static final String STAMP_VERIFICATION = "stamp-verifications";
 
-    private final JsonMapper mapper = JsonMapper.builder().enable(SerializationFeature.INDENT_OUTPUT).build();
+    private final JsonMapper mapper = JsonMapper.builder().build();
+    /** Two-space indents, {@code "name": value}, one array element a line (the style of jq and json.tool). */
+    private final ObjectWriter pretty = mapper.writer(new DefaultPrettyPrinter()
+            .withSeparators(Separators.createDefaultInstance().withObjectNameValueSpacing(Separators.Spacing.AFTER)
+                    .withObjectEmptySeparator("").withArrayEmptySeparator(""))
+            .withArrayIndenter(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE));
 
     @TestFactory
     Stream<DynamicTest> everyPostExampleAnswersAsCommitted() throws IOException {
@@ -138,7 +146,7 @@ class ExamplesTest extends ApiTest {
         JsonNode served = mapper.readTree(response.asString());
         Path answerFile = DIR.resolve(name + ".answer.json");
         if (REGENERATE) {
-            Files.writeString(answerFile, mapper.writeValueAsString(served) + "\n", StandardCharsets.UTF_8);
+            Files.writeString(answerFile, pretty.writeValueAsString(served) + "\n", StandardCharsets.UTF_8);
             return;
         }
         assertThat(answerFile).as(name + ": no committed answer. " + HOW_TO_REGENERATE).exists();
@@ -157,7 +165,7 @@ class ExamplesTest extends ApiTest {
                 .then().statusCode(200).extract().asString();
         ObjectNode request = mapper.createObjectNode();
         request.set("document", mapper.readTree(stamped));
-        Files.writeString(DIR.resolve(STAMP_VERIFICATION + ".json"), mapper.writeValueAsString(request) + "\n",
+        Files.writeString(DIR.resolve(STAMP_VERIFICATION + ".json"), pretty.writeValueAsString(request) + "\n",
                 StandardCharsets.UTF_8);
     }
 

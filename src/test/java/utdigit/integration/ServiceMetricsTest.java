@@ -6,6 +6,7 @@ import static org.awaitility.Awaitility.await;
 
 import io.micrometer.core.instrument.Counter;
 import io.micrometer.core.instrument.MeterRegistry;
+import java.nio.charset.StandardCharsets;
 import java.time.Duration;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
@@ -57,7 +58,8 @@ class ServiceMetricsTest extends ApiTest {
         double invalid = rows("pulse-parameters", "INVALID");
         String body = PULSE + "\n" + PULSE + "\n" + "{\"frequency_mhz\": 0}\n" + "not json\n" + PULSE + "\n";
 
-        given().contentType("application/x-ndjson").accept("application/x-ndjson").body(body)
+        given().contentType("application/x-ndjson").accept("application/x-ndjson")
+                .body(body.getBytes(StandardCharsets.UTF_8))
                 .post("/api/pulse-parameters/batch").then().statusCode(200);
 
         // 3 good rows; a value out of range and a line that is not JSON are INVALID.
