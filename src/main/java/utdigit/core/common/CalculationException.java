@@ -37,6 +37,14 @@ public final class CalculationException extends RuntimeException {
                 CalculationError.INVALID_INPUT.format(field, value, requirement));
     }
 
+    /**
+     * The same failure with its field names rewritten by {@code rename}, for a caller that
+     * embeds a calculation in a larger document (a technique sheet's sections).
+     */
+    public CalculationException relocated(java.util.function.UnaryOperator<String> rename) {
+        return new CalculationException(error, fields.stream().map(rename).toList(), getMessage());
+    }
+
     public CalculationError error() {
         return error;
     }

@@ -54,7 +54,7 @@ public final class SheetMetrics {
             "megabytes_per_metre", "file_size_megabytes", "max_scan_speed_mm_per_s",
             "data_rate_megabytes_per_s", "max_prf_without_wraparound_hz",
             // the sheet's own consistency
-            "combined_amplitude_error_db");
+            "evaluation_error_magnitude_db", "combined_amplitude_error_db");
 
     /** Every metric name, inputs first. */
     public static final Set<String> ALL;

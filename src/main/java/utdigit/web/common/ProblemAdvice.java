@@ -1,7 +1,6 @@
 package utdigit.web.common;
 
 import jakarta.servlet.http.HttpServletRequest;
-import java.net.URI;
 import java.util.ArrayList;
 import java.util.List;
 import org.slf4j.Logger;
@@ -32,6 +31,8 @@ import utdigit.core.common.CalculationException;
  */
 @RestControllerAdvice
 class ProblemAdvice {
+
+
     private static final Logger log = LoggerFactory.getLogger(ProblemAdvice.class);
 
     @ExceptionHandler(InputProblem.class)
@@ -155,16 +156,6 @@ class ProblemAdvice {
 
     /** The problem body; also used for batch rows. */
     public static ProblemDetail body(ProblemType type, String detail, List<FieldError> errors, String instance) {
-        ProblemDetail body = ProblemDetail.forStatus(type.status());
-        body.setType(type.type());
-        body.setTitle(type.title());
-        body.setDetail(detail);
-        if (instance != null) {
-            body.setInstance(URI.create(instance));
-        }
-        if (!errors.isEmpty()) {
-            body.setProperty("errors", List.copyOf(errors));
-        }
-        return body;
+        return Problems.body(type, detail, errors, instance);
     }
 }

@@ -49,9 +49,8 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
         Double diameterMm = Mirrors.lengthMm(errors, "element_diameter", q.elementDiameterMm(), q.elementDiameterIn(), false);
         Double distanceMm = Mirrors.lengthMm(errors, "distance", q.distanceMm(), q.distanceIn(), false);
         Double wedgePathMm = Mirrors.lengthMm(errors, "wedge_path", q.wedgePathMm(), q.wedgePathIn(), false);
-        if (q.centreFrequencyConvention() != null && q.bandwidthPercent() == null) {
-            errors.add("centre_frequency_convention", "applies only with bandwidth_percent");
-        }
+        // centre_frequency_convention without bandwidth_percent is the core's NOT_APPLICABLE (400
+        // inapplicable-input), not a field error of this layer (which would answer invalid-input).
         errors.throwIfAny();
 
         PulseResult r = PulseCalculator.compute(new PulseInput(q.frequencyMhz(), velocity.velocityMPerS(),

@@ -1,0 +1,282 @@
+package utdigit.core.sheets;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import utdigit.core.acquisition.AcquisitionCalculator;
+import utdigit.core.acquisition.AcquisitionInput;
+import utdigit.core.acquisition.AcquisitionResult;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Warning;
+import utdigit.core.pulse.PulseCalculator;
+import utdigit.core.pulse.PulseInput;
+import utdigit.core.pulse.PulseResult;
+import utdigit.core.quantization.QuantizationCalculator;
+import utdigit.core.quantization.QuantizationInput;
+import utdigit.core.quantization.QuantizationResult;
+import utdigit.core.rules.Finding;
+import utdigit.core.rules.RequirementProfile;
+import utdigit.core.rules.RuleEvaluator;
+import utdigit.core.sampling.SamplingCalculator;
+import utdigit.core.sampling.SamplingInput;
+import utdigit.core.sampling.SamplingResult;
+import utdigit.core.thickness.ThicknessCalculator;
+import utdigit.core.thickness.ThicknessInput;
+import utdigit.core.thickness.ThicknessResult;
+import utdigit.core.timing.Technique;
+import utdigit.core.timing.TimeOfFlightCalculator;
+import utdigit.core.timing.TimeOfFlightInput;
+import utdigit.core.timing.TimeOfFlightResult;
+
+/**
+ * Computes every metric a technique sheet's fields allow, by calling the same core calculators as
+ * the single endpoints (no second implementation of any formula), then checks the metrics against a
+ * requirement profile.
+ *
+ * <p>Which calculations run: pulse (frequency and velocity), sampling (sampling frequency and
+ * frequency), quantization (bit depth), time of flight (sampling frequency and velocity; TOFD for a
+ * TOFD sheet with a probe-centre separation, otherwise pulse-echo), thickness (sampling frequency,
+ * velocity and thickness), acquisition (sampling frequency, bit depth, gate, increment and PRF).
+ * {@code combined_amplitude_error_db} is the worst-case sum of the pulse's sampling loss and the
+ * quantization error at the evaluation height, pulse_amplitude_loss_db + |evaluation_error_under_db|
+ * (derived: both are worst cases of independent effects, so their dB add in the worst case).
+ */
+public final class SheetEvaluator {
+    private SheetEvaluator() {}
+
+    /** The service's own cautions, added after the profile's. */
+    public static final List<String> SERVICE_CAUTIONS = List.of(
+            "These results support a qualified examiner; they never replace the qualification of a procedure.",
+            "The governing code edition, local codes and licensed practice decide which limits apply.",
+            "Built-in velocities are planning defaults: measure the part's velocity for sizing.");
+
+    public static SheetResult evaluate(SheetInput sheet, RequirementProfile profile) {
+        Values v = new Values();
+        SheetInput.Probe probe = sheet.probe();
+        SheetInput.Part part = sheet.part();
+        SheetInput.Digitization dig = sheet.digitization();
+        SheetInput.Acquisition acq = sheet.acquisition();
+        SheetInput.Evaluation eval = sheet.evaluation();
+        SheetInput.Tfm tfm = sheet.tfm();
+        putInputs(sheet, v);
+
+        Double f = probe.frequencyMhz();
+        Double c = part.velocityMPerS();
+        Double fs = dig.samplingFrequencyMhz();
+
+        if (f != null && c != null) {
+            PulseResult r = PulseCalculator.compute(PulseInput.of(f, c)
+                    .withBandwidthPercent(probe.bandwidthPercent())
+                    .withElementDiameterMm(probe.elementDiameterMm()));
+            v.put("period_us", r.periodUs());
+            v.put("wavelength_mm", r.wavelengthMm());
+            v.put("lower_frequency_mhz", r.lowerFrequencyMhz());
+            v.put("upper_frequency_mhz", r.upperFrequencyMhz());
+            v.put("pulse_duration_6db_us", r.pulseDuration6dbUs());
+            v.put("pulse_duration_20db_us", r.pulseDuration20dbUs());
+            v.put("cycles_6db", r.cycles6db());
+            v.put("spatial_pulse_length_mm", r.spatialPulseLengthMm());
+            v.put("axial_resolution_mm", r.axialResolutionMm());
+            v.put("near_field_length_mm", r.nearFieldLengthMm());
+            v.put("beam_spread_6db_deg", r.beamSpread6dbDeg());
+            v.notes("pulse", r.warnings(), r.references());
+        }
+        if (fs != null && f != null) {
+            boolean hasGrid = tfm.gridSpacingMm() != null;
+            boolean hasLateral = tfm.lateralGridSpacingMm() != null || tfm.apertureMm() != null || tfm.depthMm() != null;
+            SamplingResult r = SamplingCalculator.compute(new SamplingInput(fs, f, dig.decimationFactor(),
+                    dig.decimationMode(), probe.bandwidthPercent(), null, dig.signal(), null, null,
+                    tfm.gridSpacingMm(), hasGrid ? c : null, hasGrid ? tfm.image() : null,
+                    hasLateral ? tfm.lateralGridSpacingMm() : null, hasLateral ? tfm.apertureMm() : null,
+                    hasLateral ? tfm.depthMm() : null));
+            v.put("effective_sampling_frequency_mhz", r.effectiveSamplingFrequencyMhz());
+            v.put("sampling_interval_ns", r.samplingIntervalNs());
+            v.put("samples_per_period", r.samplesPerPeriod());
+            v.put("samples_per_period_upper", r.samplesPerPeriodUpper());
+            v.put("nyquist_frequency_mhz", r.nyquistFrequencyMhz());
+            v.put("sine_amplitude_loss_db", r.sineAmplitudeLossDb());
+            v.put("pulse_amplitude_loss_db", r.pulseAmplitudeLossDb());
+            v.put("spectral_level_at_nyquist_db", r.spectralLevelAtNyquistDb());
+            v.put("energy_above_nyquist_fraction", r.energyAboveNyquistFraction());
+            v.put("timing_error_ns", r.timingErrorNs());
+            v.put("timing_standard_uncertainty_ns", r.timingStandardUncertaintyNs());
+            v.put("tfm_grid_amplitude_loss_db", r.tfmGridAmplitudeLossDb());
+            v.put("tfm_lateral_amplitude_loss_db", r.tfmLateralAmplitudeLossDb());
+            v.notes("sampling", r.warnings(), r.references());
+        }
+        if (dig.bitDepth() != null) {
+            QuantizationResult r = QuantizationCalculator.compute(new QuantizationInput(dig.bitDepth(),
+                    dig.digitizedSignal(), dig.quantizer(), dig.codeMapping(), null, null,
+                    eval.amplitudeToleranceDb(), eval.referenceHeightPercentFsh(), eval.evaluationLevelDb(), null));
+            v.put("levels", (double) r.levels());
+            v.put("lsb_percent_fsh", r.lsbPercentFsh());
+            v.put("dynamic_range_db", r.dynamicRangeDb());
+            v.put("minimum_height_percent_fsh", r.minimumHeightPercentFsh());
+            v.put("evaluation_height_percent_fsh", r.evaluationHeightPercentFsh());
+            v.put("evaluation_error_under_db", r.evaluationErrorUnderDb());
+            v.notes("quantization", r.warnings(), r.references());
+        }
+        if (fs != null && c != null) {
+            TimeOfFlightInput.Builder b = TimeOfFlightInput.builder(fs, c).decimationFactor(dig.decimationFactor());
+            if (sheet.technique() == SheetTechnique.TOFD && sheet.tofd().probeCentreSeparationMm() != null) {
+                b.technique(Technique.TOFD)
+                        .probeCentreSeparationMm(sheet.tofd().probeCentreSeparationMm())
+                        .depthMm(sheet.tofd().depthOfInterestMm())
+                        .thicknessMm(part.thicknessMm());
+                if (f != null && probe.bandwidthPercent() != null) {
+                    b.frequencyMhz(f).bandwidthPercent(probe.bandwidthPercent());
+                }
+            } else {
+                b.technique(Technique.PULSE_ECHO).refractedAngleDeg(part.refractedAngleDeg());
+            }
+            TimeOfFlightResult r = TimeOfFlightCalculator.compute(b.build());
+            v.put("sound_path_resolution_mm", r.soundPathResolutionMm());
+            v.put("depth_resolution_mm", r.depthResolutionMm());
+            v.put("lateral_wave_time_us", r.lateralWaveTimeUs());
+            v.put("time_of_flight_us", r.timeOfFlightUs());
+            v.put("pulse_limited_depth_resolution_mm", r.pulseLimitedDepthResolutionMm());
+            v.put("dead_zone_depth_mm", r.deadZoneDepthMm());
+            v.put("backwall_dead_zone_mm", r.backwallDeadZoneMm());
+            v.notes("time of flight", r.warnings(), r.references());
+        }
+        if (fs != null && c != null && part.thicknessMm() != null) {
+            ThicknessResult r = ThicknessCalculator.compute(ThicknessInput.builder(fs, c, part.thicknessMm())
+                    .decimationFactor(dig.decimationFactor())
+                    .velocityUncertaintyMPerS(part.velocityUncertaintyMPerS())
+                    .velocityUncertaintyPercent(part.velocityUncertaintyPercent())
+                    .requiredResolutionMm(eval.thicknessToleranceMm())
+                    .frequencyMhz(probe.bandwidthPercent() == null ? null : f)
+                    .bandwidthPercent(f == null ? null : probe.bandwidthPercent())
+                    .build());
+            v.put("thickness_resolution_mm", r.thicknessResolutionMm());
+            v.put("samples_across_thickness", r.samplesAcrossThickness());
+            v.put("standard_uncertainty_mm", r.standardUncertaintyMm());
+            v.put("expanded_uncertainty_mm", r.expandedUncertaintyMm());
+            v.notes("thickness", r.warnings(), r.references());
+        }
+        boolean hasGate = acq.gateLengthUs() != null || acq.gateLengthMm() != null;
+        if (fs != null && dig.bitDepth() != null && hasGate && acq.scanIncrementMm() != null
+                && acq.pulseRepetitionFrequencyHz() != null) {
+            boolean needsVelocity = acq.gateLengthMm() != null || acq.maxSoundPathMm() != null;
+            AcquisitionResult r = AcquisitionCalculator.compute(AcquisitionInput.builder(fs, dig.bitDepth(),
+                            acq.scanIncrementMm(), acq.pulseRepetitionFrequencyHz())
+                    .decimationFactor(dig.decimationFactor())
+                    .gateLengthUs(acq.gateLengthUs())
+                    .gateLengthMm(acq.gateLengthMm())
+                    .velocityMPerS(needsVelocity ? c : null)
+                    .focalLaws(acq.focalLaws())
+                    .fmcElementCount(acq.fmcElementCount())
+                    .capture(acq.capture())
+                    .averaging(acq.averaging())
+                    .scanLengthMm(acq.scanLengthMm())
+                    .plannedScanSpeedMmPerS(acq.plannedScanSpeedMmPerS())
+                    .maxRoundTripUs(acq.maxRoundTripUs())
+                    .maxSoundPathMm(acq.maxSoundPathMm())
+                    .wraparoundDecayFactor(acq.wraparoundDecayFactor())
+                    .build());
+            v.put("samples_per_a_scan", (double) r.samplesPerAScan());
+            v.put("firings_per_position", (double) r.firingsPerPosition());
+            v.put("a_scans_per_position", (double) r.aScansPerPosition());
+            v.put("bytes_per_position", (double) r.bytesPerPosition());
+            v.put("megabytes_per_metre", r.megabytesPerMetre());
+            v.put("file_size_megabytes", r.fileSizeMegabytes());
+            v.put("max_scan_speed_mm_per_s", r.maxScanSpeedMmPerS());
+            v.put("data_rate_megabytes_per_s", r.dataRateMegabytesPerS());
+            v.put("max_prf_without_wraparound_hz", r.maxPrfWithoutWraparoundHz());
+            v.notes("acquisition", r.warnings(), r.references());
+        }
+        Double pulseLoss = v.values.get("pulse_amplitude_loss_db");
+        Double evaluationError = v.values.get("evaluation_error_under_db");
+        if (evaluationError != null) {
+            v.put("evaluation_error_magnitude_db", Math.abs(evaluationError));
+        }
+        if (pulseLoss != null && evaluationError != null) {
+            v.put("combined_amplitude_error_db", pulseLoss + Math.abs(evaluationError));
+            v.references.add(Reference.of("combined amplitude error",
+                    "worst-case sum pulse_amplitude_loss_db + |evaluation_error_under_db| of the sampling and "
+                            + "quantization errors at the evaluation height (derived)"));
+        }
+
+        List<Finding> findings = RuleEvaluator.evaluate(profile, sheet.technique().name(), v.values);
+        List<String> cautions = new ArrayList<>(profile.cautions());
+        cautions.addAll(SERVICE_CAUTIONS);
+        return new SheetResult(v.values, findings, RuleEvaluator.verdict(findings), cautions,
+                v.warnings, new ArrayList<>(v.references));
+    }
+
+    private static void putInputs(SheetInput s, Values v) {
+        v.put("frequency_mhz", s.probe().frequencyMhz());
+        v.put("bandwidth_percent", s.probe().bandwidthPercent());
+        v.put("element_diameter_mm", s.probe().elementDiameterMm());
+        v.put("element_count", s.probe().elementCount());
+        v.put("velocity_m_per_s", s.part().velocityMPerS());
+        v.put("velocity_uncertainty_m_per_s", s.part().velocityUncertaintyMPerS() != null
+                ? s.part().velocityUncertaintyMPerS()
+                : s.part().velocityUncertaintyPercent() != null && s.part().velocityMPerS() != null
+                        ? s.part().velocityUncertaintyPercent() / 100.0 * s.part().velocityMPerS() : null);
+        v.put("thickness_mm", s.part().thicknessMm());
+        v.put("refracted_angle_deg", s.part().refractedAngleDeg());
+        v.put("sampling_frequency_mhz", s.digitization().samplingFrequencyMhz());
+        v.put("decimation_factor", s.digitization().decimationFactor());
+        v.put("bit_depth", s.digitization().bitDepth());
+        SheetInput.Acquisition a = s.acquisition();
+        v.put("pulse_repetition_frequency_hz", a.pulseRepetitionFrequencyHz());
+        v.put("focal_laws", a.focalLaws());
+        v.put("fmc_element_count", a.fmcElementCount());
+        v.put("averaging", a.averaging());
+        v.put("scan_increment_mm", a.scanIncrementMm());
+        v.put("scan_length_mm", a.scanLengthMm());
+        v.put("planned_scan_speed_mm_per_s", a.plannedScanSpeedMmPerS());
+        v.put("gate_length_us", a.gateLengthUs());
+        v.put("max_sound_path_mm", a.maxSoundPathMm());
+        v.put("max_round_trip_us", a.maxRoundTripUs());
+        v.put("wraparound_decay_factor", a.wraparoundDecayFactor());
+        v.put("probe_centre_separation_mm", s.tofd().probeCentreSeparationMm());
+        v.put("depth_of_interest_mm", s.tofd().depthOfInterestMm());
+        v.put("tfm_grid_spacing_mm", s.tfm().gridSpacingMm());
+        v.put("tfm_lateral_grid_spacing_mm", s.tfm().lateralGridSpacingMm());
+        v.put("tfm_aperture_mm", s.tfm().apertureMm());
+        v.put("tfm_depth_mm", s.tfm().depthMm());
+        v.put("reference_height_percent_fsh", s.evaluation().referenceHeightPercentFsh());
+        v.put("evaluation_level_db", s.evaluation().evaluationLevelDb());
+        v.put("amplitude_tolerance_db", s.evaluation().amplitudeToleranceDb());
+        v.put("thickness_tolerance_mm", s.evaluation().thicknessToleranceMm());
+    }
+
+    /** The values under construction with the notes of each calculation. */
+    private static final class Values {
+        final Map<String, Double> values = new LinkedHashMap<>();
+        final List<Warning> warnings = new ArrayList<>();
+        final Set<Reference> references = new LinkedHashSet<>();
+
+        void put(String metric, Double value) {
+            if (value != null) {
+                assert SheetMetrics.isKnown(metric) : metric;
+                values.put(metric, value);
+            }
+        }
+
+        void put(String metric, Integer value) {
+            put(metric, value == null ? null : value.doubleValue());
+        }
+
+        void put(String metric, double value) {
+            put(metric, Double.valueOf(value));
+        }
+
+        void put(String metric, Optional<Double> value) {
+            put(metric, value == null ? null : value.orElse(null));
+        }
+
+        void notes(String calculation, List<Warning> ws, List<Reference> refs) {
+            for (Warning w : ws) {
+                warnings.add(Warning.of(w.code(), calculation + ": " + w.message()));
+            }
+            references.addAll(refs);
+        }
+    }
+}

@@ -1,0 +1,243 @@
+package utdigit.web.batch;
+
+import java.io.BufferedOutputStream;
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.OutputStream;
+import java.io.PushbackInputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+import org.springframework.stereotype.Component;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ObjectNode;
+import tools.jackson.dataformat.csv.CsvMapper;
+import utdigit.web.common.Calculation;
+import utdigit.web.common.CalculationRunner;
+import utdigit.web.common.FieldError;
+import utdigit.web.common.InputProblem;
+import utdigit.web.common.Problems;
+import utdigit.web.common.ProblemType;
+
+/**
+ * The one streaming component behind every batch endpoint: reads rows one at a time in the body's
+ * format, answers each through the same {@link CalculationRunner} path as the single endpoint, and
+ * writes each answer as soon as it is computed, in input order. Memory stays flat whatever the
+ * number of rows. A bad row is answered INVALID with its problem and never stops the batch; a
+ * limit reached mid-way ends the stream with one LIMIT_REACHED row naming the first row not
+ * processed.
+ */
+@Component
+class BatchProcessor {
+    private static final Logger log = LoggerFactory.getLogger(BatchProcessor.class);
+
+    /** The formats of a batch body and of its answer. */
+    enum Format {
+        JSON("application/json"), NDJSON("application/x-ndjson"), CSV("text/csv");
+
+        final String mediaType;
+
+        Format(String mediaType) {
+            this.mediaType = mediaType;
+        }
+    }
+
+    private final CalculationRunner runner;
+    private final JsonMapper mapper;
+    private final CsvMapper csv;
+    private final BatchLimits limits;
+    private final Map<String, RecordShape> requestShapes = new ConcurrentHashMap<>();
+    private final Map<String, List<String>> answerColumns = new ConcurrentHashMap<>();
+
+    BatchProcessor(CalculationRunner runner, JsonMapper mapper, BatchLimits limits) {
+        this.runner = runner;
+        this.mapper = mapper;
+        this.csv = CsvMapper.builder().build();
+        this.limits = limits;
+    }
+
+    BatchLimits limits() {
+        return limits;
+    }
+
+    /**
+     * Opens the body: checks its format as a whole (a 400 {@link BatchBodyException} before any
+     * row is answered) and returns its rows.
+     */
+    RowSource open(String calculation, Format format, InputStream body) {
+        Calculation<?> c = runner.calculation(calculation);
+        InputStream in = new CountingInputStream(skipBom(body), limits.maxBodyBytes());
+        return switch (format) {
+            case JSON -> new JsonArraySource(mapper, in);
+            case NDJSON -> new NdjsonSource(mapper, reader(in));
+            case CSV -> new CsvSource(csv, reader(in), requestShapes.computeIfAbsent(calculation,
+                    k -> RecordShape.ofRequest(c.requestType())));
+        };
+    }
+
+    /** The sink for the accepted format. */
+    RowSink sink(String calculation, Format format, OutputStream out) throws IOException {
+        return switch (format) {
+            case JSON -> new JsonArraySink(mapper, out);
+            case NDJSON -> new NdjsonSink(mapper, out);
+            case CSV -> new CsvSink(csv, out, answerColumns.computeIfAbsent(calculation,
+                    k -> RecordShape.answerColumns(answerType(runner.calculation(k)))));
+        };
+    }
+
+    /** Answers every row of {@code rows} into {@code sink}, in order. */
+    long process(String calculation, RowSource rows, RowSink sink, OutputStream flushTarget) throws IOException {
+        long answered = 0;
+        try (rows) {
+            while (true) {
+                if (answered >= limits.maxRows()) {
+                    Row next = nextOrLimit(rows);
+                    if (next != null) {
+                        sink.write(limitRow(answered + 1, "the batch row limit (" + limits.maxRows()
+                                + ") is reached"));
+                    }
+                    break;
+                }
+                Row row;
+                try {
+                    row = rows.next();
+                } catch (UncheckedIOException e) {
+                    if (e.getCause() instanceof CountingInputStream.LimitExceeded) {
+                        sink.write(limitRow(answered + 1, "the batch body limit (" + limits.maxBodyBytes()
+                                + " bytes) is reached"));
+                        break;
+                    }
+                    throw e;
+                } catch (RuntimeException e) {
+                    if (hasLimitCause(e)) {
+                        sink.write(limitRow(answered + 1, "the batch body limit (" + limits.maxBodyBytes()
+                                + " bytes) is reached"));
+                        break;
+                    }
+                    throw e;
+                }
+                if (row == null) {
+                    if (rows.fatal() != null) {
+                        sink.write(problemRow(answered + 1, null, ProblemType.MALFORMED_BODY, rows.fatal(),
+                                List.of(new FieldError("", rows.fatal()))));
+                    }
+                    break;
+                }
+                sink.write(answer(calculation, row));
+                answered++;
+                if (answered % limits.flushEveryRows() == 0) {
+                    flushTarget.flush();
+                }
+            }
+        }
+        sink.finish();
+        return answered;
+    }
+
+    private static Row nextOrLimit(RowSource rows) {
+        try {
+            return rows.next();
+        } catch (RuntimeException e) {
+            return Row.of(-1, null);
+        }
+    }
+
+    private static boolean hasLimitCause(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof CountingInputStream.LimitExceeded) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** One row's answer: OK with the single endpoint's answer, or INVALID with its problem. */
+    ObjectNode answer(String calculation, Row row) {
+        JsonNode body = row.body();
+        String id = body != null && body.path("sheet_id").isString() ? body.get("sheet_id").stringValue() : null;
+        if (!row.readable()) {
+            return problemRow(row.number(), id, row.readProblem(), row.readDetail(), row.readErrors());
+        }
+        try {
+            ObjectNode result = runner.runTree(calculation, body);
+            ObjectNode out = mapper.createObjectNode();
+            out.put("row", row.number());
+            if (id != null) {
+                out.put("id", id);
+            }
+            out.put("status", "OK");
+            out.set("result", result);
+            return out;
+        } catch (InputProblem p) {
+            return problemRow(row.number(), id, p.type(), p.getMessage(), p.errors());
+        } catch (RuntimeException e) {
+            log.error("unexpected failure on batch row {} of {}", row.number(), calculation, e);
+            return problemRow(row.number(), id, ProblemType.INTERNAL_ERROR,
+                    "the service could not answer this row; the failure is logged", List.of());
+        }
+    }
+
+    private ObjectNode problemRow(long number, String id, ProblemType type, String detail, List<FieldError> errors) {
+        ObjectNode out = mapper.createObjectNode();
+        out.put("row", number);
+        if (id != null) {
+            out.put("id", id);
+        }
+        out.put("status", "INVALID");
+        out.set("problem", mapper.valueToTree(Problems.body(type, detail, errors, null)));
+        return out;
+    }
+
+    private ObjectNode limitRow(long firstUnprocessed, String why) {
+        ObjectNode out = mapper.createObjectNode();
+        out.put("row", firstUnprocessed);
+        out.put("status", "LIMIT_REACHED");
+        out.put("first_unprocessed_row", firstUnprocessed);
+        ObjectNode problem = mapper.valueToTree(Problems.body(ProblemType.PAYLOAD_TOO_LARGE, why + "; row "
+                + firstUnprocessed + " and every later row were not processed: resume from row " + firstUnprocessed,
+                List.of(), null));
+        out.set("problem", problem);
+        return out;
+    }
+
+    private static Class<?> answerType(Calculation<?> c) {
+        for (var m : c.getClass().getMethods()) {
+            if (m.getName().equals("answer") && m.getParameterCount() == 1
+                    && m.getParameterTypes()[0] == c.requestType() && m.getReturnType().isRecord()) {
+                return m.getReturnType();
+            }
+        }
+        throw new IllegalStateException("calculation " + c.name() + " does not declare its answer record type");
+    }
+
+    private static BufferedReader reader(InputStream in) {
+        return new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8), 1 << 16);
+    }
+
+    /** Skips a UTF-8 byte-order mark. */
+    static InputStream skipBom(InputStream in) {
+        PushbackInputStream p = new PushbackInputStream(in, 3);
+        try {
+            byte[] head = new byte[3];
+            int n = p.readNBytes(head, 0, 3);
+            boolean bom = n == 3 && (head[0] & 0xFF) == 0xEF && (head[1] & 0xFF) == 0xBB && (head[2] & 0xFF) == 0xBF;
+            if (!bom && n > 0) {
+                p.unread(head, 0, n);
+            }
+            return p;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    static OutputStream buffered(OutputStream out) {
+        return new BufferedOutputStream(out, 1 << 16);
+    }
+}

@@ -1,0 +1,100 @@
+package utdigit.web.batch;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.SequenceWriter;
+import tools.jackson.databind.node.ObjectNode;
+import tools.jackson.dataformat.csv.CsvMapper;
+import tools.jackson.dataformat.csv.CsvSchema;
+
+/**
+ * Output rows as CSV with a fixed header per calculation: row, id, status, every result field it
+ * can produce (flattened with dotted names), the warnings' codes, then the problem's type, detail
+ * and pointers. A cell is empty where the row has no value; a value that does not exist (JSON null)
+ * is empty too, with its warning in the warnings column.
+ */
+final class CsvSink implements RowSink {
+    private final List<String> resultColumns;
+    private final SequenceWriter writer;
+
+    CsvSink(CsvMapper csv, OutputStream out, List<String> resultColumns) throws IOException {
+        this.resultColumns = resultColumns;
+        List<String> header = new ArrayList<>();
+        header.add("row");
+        header.add("id");
+        header.add("status");
+        for (String c : resultColumns) {
+            header.add(c);
+        }
+        header.add("problem.type");
+        header.add("problem.detail");
+        header.add("problem.pointers");
+        CsvSchema.Builder schema = CsvSchema.builder();
+        header.forEach(schema::addColumn);
+        this.writer = csv.writerFor(List.class).with(schema.build().withHeader()).writeValues(out);
+    }
+
+    @Override
+    public void write(ObjectNode row) throws IOException {
+        List<String> cells = new ArrayList<>(resultColumns.size() + 6);
+        cells.add(row.get("row").asString());
+        cells.add(row.has("id") ? row.get("id").asString() : "");
+        cells.add(row.get("status").asString());
+        JsonNode result = row.get("result");
+        for (String column : resultColumns) {
+            cells.add(result == null ? "" : cell(result, column));
+        }
+        JsonNode problem = row.get("problem");
+        if (problem == null) {
+            cells.add("");
+            cells.add("");
+            cells.add("");
+        } else {
+            cells.add(problem.path("type").asString(""));
+            cells.add(problem.path("detail").asString(""));
+            List<String> pointers = new ArrayList<>();
+            for (JsonNode e : problem.path("errors")) {
+                pointers.add(e.path("pointer").asString(""));
+            }
+            cells.add(String.join(";", pointers));
+        }
+        writer.write(cells);
+    }
+
+    private static String cell(JsonNode result, String dotted) {
+        JsonNode node = result;
+        for (String part : dotted.split("\\.")) {
+            node = node == null ? null : node.get(part);
+        }
+        if (node == null || node.isNull()) {
+            return "";
+        }
+        if (node.isArray()) {
+            List<String> parts = new ArrayList<>();
+            for (JsonNode item : node) {
+                if (item.has("code")) {
+                    parts.add(item.get("code").asString());
+                } else if (item.has("rule_id")) {
+                    parts.add(item.get("rule_id").asString() + "=" + item.path("verdict").asString());
+                } else {
+                    parts.add(item.isValueNode() ? item.asString() : item.toString());
+                }
+            }
+            return String.join(";", parts);
+        }
+        if (node.isObject()) {
+            return node.toString();
+        }
+        return node.asString();
+    }
+
+    @Override
+    public void finish() throws IOException {
+        writer.flush();
+    }
+
+}

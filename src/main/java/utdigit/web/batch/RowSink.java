@@ -1,0 +1,18 @@
+package utdigit.web.batch;
+
+import java.io.Closeable;
+import java.io.IOException;
+import tools.jackson.databind.node.ObjectNode;
+
+/** Writes answered rows in the format the caller accepts. */
+interface RowSink extends Closeable {
+
+    /** Writes one output row: {row, id?, status, result | problem}. */
+    void write(ObjectNode outputRow) throws IOException;
+
+    /** Ends the output (closing bracket of a JSON array) and flushes. */
+    void finish() throws IOException;
+
+    @Override
+    default void close() {}
+}
