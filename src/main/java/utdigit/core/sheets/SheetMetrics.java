@@ -41,8 +41,6 @@ public final class SheetMetrics {
             // quantization
             "levels", "lsb_percent_fsh", "dynamic_range_db", "minimum_height_percent_fsh",
             "evaluation_height_percent_fsh", "evaluation_error_under_db",
-            // |evaluation_error_under_db|: limits are a number or a metric, so the magnitude is its own metric
-            "evaluation_error_magnitude_db",
             // time of flight and TOFD
             "sound_path_resolution_mm", "depth_resolution_mm", "lateral_wave_time_us", "time_of_flight_us",
             "pulse_limited_depth_resolution_mm", "dead_zone_depth_mm", "backwall_dead_zone_mm",
