@@ -8,7 +8,6 @@ import utdigit.core.sampling.SamplingInput;
 import utdigit.core.sampling.SamplingResult;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
-import utdigit.web.common.JsonPointers;
 import utdigit.web.common.Mirrors;
 import utdigit.web.common.ResultNotes;
 import utdigit.web.common.VelocitySourceView;
@@ -37,20 +36,21 @@ class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentReq
         return SamplingAssessmentRequest.class;
     }
 
-    /** A core input named in mm points at the inch form when the caller gave that; a velocity at its source. */
+    /**
+     * A core input named in mm (tfm_grid_spacing_mm) or by its base name points at the form the
+     * caller sent (tfm_grid_spacing_in when given in inches); a velocity at its source.
+     */
     @Override
     public String pointer(String coreField, SamplingAssessmentRequest q) {
-        return JsonPointers.property(switch (coreField) {
-            case "tfm_grid_spacing_mm", "tfm_grid_spacing" ->
-                    q.tfmGridSpacingIn() != null ? "tfm_grid_spacing_in" : "tfm_grid_spacing_mm";
-            case "tfm_lateral_grid_spacing_mm", "tfm_lateral_grid_spacing" ->
-                    q.tfmLateralGridSpacingIn() != null ? "tfm_lateral_grid_spacing_in" : "tfm_lateral_grid_spacing_mm";
-            case "tfm_aperture_mm", "tfm_aperture" -> q.tfmApertureIn() != null ? "tfm_aperture_in" : "tfm_aperture_mm";
-            case "tfm_depth_mm", "tfm_depth" -> q.tfmDepthIn() != null ? "tfm_depth_in" : "tfm_depth_mm";
-            case "velocity_m_per_s", "velocity" -> q.material() != null ? "material"
-                    : q.velocityInPerUs() != null ? "velocity_in_per_us" : "velocity_m_per_s";
-            default -> coreField;
-        });
+        String base = coreField.endsWith("_mm") ? coreField.substring(0, coreField.length() - 3) : coreField;
+        return switch (base) {
+            case "tfm_grid_spacing" -> Mirrors.lengthPointer(base, q.tfmGridSpacingIn());
+            case "tfm_lateral_grid_spacing" -> Mirrors.lengthPointer(base, q.tfmLateralGridSpacingIn());
+            case "tfm_aperture" -> Mirrors.lengthPointer(base, q.tfmApertureIn());
+            case "tfm_depth" -> Mirrors.lengthPointer(base, q.tfmDepthIn());
+            case "velocity", "velocity_m_per_s" -> Mirrors.velocityPointer(q);
+            default -> Calculation.super.pointer(coreField, q);
+        };
     }
 
     @Override
