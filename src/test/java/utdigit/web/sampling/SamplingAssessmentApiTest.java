@@ -62,8 +62,9 @@ class SamplingAssessmentApiTest extends ApiTest {
     /**
      * Rounding allowance of the round trip, dB. The core's answer is the rate whose loss meets the
      * tolerance in exact arithmetic; recomputed at that rate, the loss can land a few 1e-16 dB above
-     * it (seen: 0.30000000000000027 for 0.3 dB; the closed-form start of the search is not re-checked).
-     * Reported to the lead as a core finding; far below any meaningful dB.
+     * it. The RF search now re-checks its closed-form start and meets the tolerance to the last bit;
+     * the ENVELOPE closed form read back through the whole request path can still land one or two
+     * ulps above it (seen: 1.0000000000000002 for 1 dB), far below any meaningful dB.
      */
     private static final double ROUND_TRIP_ROUNDING_DB = 1e-12;
 
