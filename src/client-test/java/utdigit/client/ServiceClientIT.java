@@ -19,7 +19,10 @@ import utdigit.client.api.AcquisitionApi;
 import utdigit.client.api.MaterialsApi;
 import utdigit.client.api.PulseAndBeamApi;
 import utdigit.client.api.QuantizationApi;
+import utdigit.client.api.RequirementProfilesApi;
+import utdigit.client.api.SamplingApi;
 import utdigit.client.api.StampsApi;
+import utdigit.client.api.TechniqueSheetsApi;
 import utdigit.client.api.ThicknessApi;
 import utdigit.client.api.TimeOfFlightApi;
 import utdigit.client.model.AcquisitionBudget;
@@ -30,8 +33,19 @@ import utdigit.client.model.PulseParameters;
 import utdigit.client.model.PulseParametersRequest;
 import utdigit.client.model.QuantizationAssessment;
 import utdigit.client.model.QuantizationAssessmentRequest;
+import utdigit.client.model.RequirementProfile;
+import utdigit.client.model.RequirementProfileSummary;
+import utdigit.client.model.SamplingAssessment;
+import utdigit.client.model.SamplingAssessmentRequest;
+import utdigit.client.model.SheetAcquisition;
+import utdigit.client.model.SheetDigitization;
+import utdigit.client.model.SheetEvaluation;
+import utdigit.client.model.SheetMaterial;
+import utdigit.client.model.SheetProbe;
 import utdigit.client.model.StampVerification;
 import utdigit.client.model.StampVerificationRequest;
+import utdigit.client.model.TechniqueSheet;
+import utdigit.client.model.TechniqueSheetValidation;
 import utdigit.client.model.ThicknessResolution;
 import utdigit.client.model.ThicknessResolutionRequest;
 import utdigit.client.model.TimeOfFlightResolution;
@@ -61,16 +75,16 @@ class ServiceClientIT {
 
     @Test
     void materialsListAndOne() throws ApiException {
-        assertThat(new MaterialsApi(client).callList().getMaterials())
+        assertThat(new MaterialsApi(client).getMaterials().getMaterials())
                 .extracting(Material::getId).contains("carbon-steel", "water");
-        Material steel = new MaterialsApi(client).one("carbon-steel", null);
+        Material steel = new MaterialsApi(client).getMaterialsById("carbon-steel", null);
         assertThat(steel.getLongitudinalMPerS()).isEqualTo(STEEL_LONGITUDINAL_M_PER_S);
         assertThat(steel.getShearMPerS()).isEqualTo(STEEL_SHEAR_M_PER_S);
     }
 
     @Test
     void pulseParameters() throws ApiException {
-        PulseParameters answer = new PulseAndBeamApi(client).compute(pulseRequest());
+        PulseParameters answer = new PulseAndBeamApi(client).postPulseParameters(pulseRequest());
         assertThat(answer.getPeriodUs()).isCloseTo(1 / 5.0, within(EXACT));
         assertThat(answer.getWavelengthMm()).isCloseTo(STEEL_LONGITUDINAL_M_PER_S / 5e6 * 1e3, within(EXACT));
         assertThat(answer.getStamp().getCalculation()).isEqualTo("pulse-parameters");
@@ -79,7 +93,7 @@ class ServiceClientIT {
 
     @Test
     void quantizationAssessment() throws ApiException {
-        QuantizationAssessment answer = new QuantizationApi(client).assess(new QuantizationAssessmentRequest()
+        QuantizationAssessment answer = new QuantizationApi(client).postQuantizationAssessments(new QuantizationAssessmentRequest()
                 .bitDepth(12).signalHeightPercentFsh(80.0).amplitudeToleranceDb(1.0));
         assertThat(answer.getLevels()).isEqualTo(1 << 12);
         // RF spans -100..+100 %FSH: the LSB is 200 %FSH / 2^n.
@@ -90,7 +104,7 @@ class ServiceClientIT {
 
     @Test
     void timeOfFlightResolution() throws ApiException {
-        TimeOfFlightResolution answer = new TimeOfFlightApi(client).resolve(new TimeOfFlightResolutionRequest()
+        TimeOfFlightResolution answer = new TimeOfFlightApi(client).postTimeOfFlightResolutions(new TimeOfFlightResolutionRequest()
                 .samplingFrequencyMhz(100.0).material("carbon-steel")
                 .waveMode(TimeOfFlightResolutionRequest.WaveModeEnum.SHEAR).refractedAngleDeg(60.0));
         assertThat(answer.getTimeResolutionNs()).isCloseTo(1e3 / 100.0, within(EXACT));
@@ -100,7 +114,7 @@ class ServiceClientIT {
 
     @Test
     void thicknessResolution() throws ApiException {
-        ThicknessResolution answer = new ThicknessApi(client).resolve1(new ThicknessResolutionRequest()
+        ThicknessResolution answer = new ThicknessApi(client).postThicknessResolutions(new ThicknessResolutionRequest()
                 .samplingFrequencyMhz(100.0).material("carbon-steel").nominalThicknessMm(12.7)
                 .velocityUncertaintyPercent(0.5));
         assertThat(answer.getThicknessResolutionMm()).isCloseTo(STEEL_LONGITUDINAL_M_PER_S * 1e-8 / 2 * 1e3,
@@ -109,7 +123,7 @@ class ServiceClientIT {
 
     @Test
     void acquisitionBudget() throws ApiException {
-        AcquisitionBudget answer = new AcquisitionApi(client).budget(new AcquisitionBudgetRequest()
+        AcquisitionBudget answer = new AcquisitionApi(client).postAcquisitionBudgets(new AcquisitionBudgetRequest()
                 .samplingFrequencyMhz(100.0).bitDepth(12).gateLengthUs(40.0).scanIncrementMm(1.0)
                 .pulseRepetitionFrequencyHz(6000.0).focalLaws(61).scanLengthMm(2400.0));
         assertThat(answer.getMaxScanSpeedMmPerS()).isCloseTo(6000.0 / 61 * 1.0, within(1e-9));
@@ -117,12 +131,52 @@ class ServiceClientIT {
     }
 
     @Test
+    void samplingAssessment() throws ApiException {
+        SamplingAssessment answer = new SamplingApi(client).postSamplingAssessments(new SamplingAssessmentRequest()
+                .samplingFrequencyMhz(100.0).frequencyMhz(5.0).decimationFactor(2).bandwidthPercent(60.0));
+        assertThat(answer.getEffectiveSamplingFrequencyMhz()).isCloseTo(100.0 / 2, within(EXACT));
+        assertThat(answer.getSamplesPerPeriod()).isCloseTo(50.0 / 5.0, within(EXACT));
+        // Worst-case sine bound at n samples per period: 20 log10(1 / cos(pi / n)).
+        assertThat(answer.getSineAmplitudeLossDb()).isCloseTo(-20 * Math.log10(Math.cos(Math.PI / 10)), within(1e-9));
+    }
+
+    @Test
+    void requirementProfilesListAndOne() throws ApiException {
+        assertThat(new RequirementProfilesApi(client).getRequirementProfiles().getProfiles())
+                .extracting(RequirementProfileSummary::getId).contains("common-practice");
+        RequirementProfile profile = new RequirementProfilesApi(client).getRequirementProfilesById("common-practice");
+        assertThat(profile.getRules()).isNotEmpty();
+        assertThat(profile.getSha256()).matches("[0-9a-f]{64}");
+    }
+
+    @Test
+    void techniqueSheetValidation() throws ApiException {
+        // The demo shop's sheet BPF-W-PAUT-03: 61 focal laws at 6000 Hz and 1 mm increments allow
+        // 6000 / 61 x 1 = 98.4 mm/s; the sheet plans 150 mm/s.
+        TechniqueSheet sheet = new TechniqueSheet().sheetId("BPF-W-PAUT-03").revision("A")
+                .technique(TechniqueSheet.TechniqueEnum.PHASED_ARRAY).profileId("common-practice")
+                .probe(new SheetProbe().frequencyMhz(5.0).bandwidthPercent(65.0).elementCount(32))
+                .material(new SheetMaterial().material("carbon-steel").waveMode(SheetMaterial.WaveModeEnum.SHEAR)
+                        .thicknessMm(32.0).refractedAngleDeg(55.0))
+                .digitization(new SheetDigitization().samplingFrequencyMhz(100.0).decimationFactor(2).bitDepth(12))
+                .acquisition(new SheetAcquisition().pulseRepetitionFrequencyHz(6000.0).focalLaws(61)
+                        .scanIncrementMm(1.0).scanLengthMm(2400.0).plannedScanSpeedMmPerS(150.0).gateLengthMm(120.0)
+                        .maxSoundPathMm(150.0).wraparoundDecayFactor(1.5))
+                .evaluation(new SheetEvaluation().referenceHeightPercentFsh(80.0).evaluationLevelDb(-14.0)
+                        .amplitudeToleranceDb(2.0).thicknessToleranceMm(0.5));
+        TechniqueSheetValidation answer = new TechniqueSheetsApi(client).postTechniqueSheetValidations(sheet);
+        assertThat(answer.getVerdict()).isEqualTo(TechniqueSheetValidation.VerdictEnum.FAIL);
+        assertThat(answer.getValues().get("max_scan_speed_mm_per_s")).isCloseTo(6000.0 / 61, within(1e-9));
+        assertThat(answer.getStamp().getCalculation()).isEqualTo("technique-sheet-validations");
+    }
+
+    @Test
     void stampVerificationOfAnAnswerReadThroughTheGeneratedModel() throws ApiException {
         // The answer goes through the generated model and back to JSON: its stamp still verifies only
         // if the model holds every member of the answer.
-        PulseParameters answer = new PulseAndBeamApi(client).compute(pulseRequest());
+        PulseParameters answer = new PulseAndBeamApi(client).postPulseParameters(pulseRequest());
         JsonNode document = client.getObjectMapper().valueToTree(answer);
-        StampVerification verdict = new StampsApi(client).verify(new StampVerificationRequest().document(document));
+        StampVerification verdict = new StampsApi(client).postStampVerifications(new StampVerificationRequest().document(document));
         assertThat(verdict.getContentIntact()).isTrue();
         assertThat(verdict.getReproducible()).isTrue();
     }

@@ -50,6 +50,8 @@ class ExamplesTest extends ApiTest {
     static {
         GET_EXAMPLES.put("materials", "/api/materials");
         GET_EXAMPLES.put("materials-water", "/api/materials/water?temperature_c=40");
+        GET_EXAMPLES.put("requirement-profiles", "/api/requirement-profiles");
+        GET_EXAMPLES.put("requirement-profiles-common-practice", "/api/requirement-profiles/common-practice");
     }
 
     /** The stamp verification example verifies this example's committed answer. */
@@ -58,7 +60,7 @@ class ExamplesTest extends ApiTest {
 
     private final JsonMapper mapper = JsonMapper.builder().build();
     /** Two-space indents, {@code "name": value}, one array element a line (the style of jq and json.tool). */
-    private final ObjectWriter pretty = mapper.writer(new DefaultPrettyPrinter()
+    private final ObjectWriter pretty = mapper.writer().with(new DefaultPrettyPrinter()
             .withSeparators(Separators.createDefaultInstance().withObjectNameValueSpacing(Separators.Spacing.AFTER)
                     .withObjectEmptySeparator("").withArrayEmptySeparator(""))
             .withArrayIndenter(DefaultIndenter.SYSTEM_LINEFEED_INSTANCE));
