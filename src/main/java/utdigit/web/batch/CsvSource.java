@@ -85,7 +85,7 @@ final class CsvSource implements RowSource {
                 put(body, header[i], cell, errors);
             }
             if (!errors.isEmpty()) {
-                return Row.unreadable(row, ProblemType.INVALID_INPUT,
+                return Row.unreadable(row, body, ProblemType.INVALID_INPUT,
                         errors.size() == 1 ? errors.get(0).pointer() + ": " + errors.get(0).detail()
                                 : errors.size() + " fields are invalid; see errors", errors);
             }
