@@ -13,8 +13,8 @@ import org.springframework.core.Ordered;
 
 /**
  * Registers the protections that sit in front of every feature: the security headers filter
- * first of all filters, and the request body filter after Spring Security (so that a call without
- * a valid token is refused before its body is read) and before the DispatcherServlet.
+ * first of all filters; after Spring Security (so that a call without a valid token is refused
+ * before its body is read) the request body filter and the cap on batches in progress.
  */
 @Configuration(proxyBeanMethods = false)
 class HardeningConfiguration {
@@ -42,6 +42,18 @@ class HardeningConfiguration {
         registration.setOrder(SecurityFilterProperties.DEFAULT_FILTER_ORDER + 10);
         registration.setDispatcherTypes(DispatcherType.REQUEST, DispatcherType.ASYNC);
         registration.setAsyncSupported(true);
+        return registration;
+    }
+
+    @Bean
+    FilterRegistrationBean<BatchConcurrencyFilter> batchConcurrencyFilter(
+            @Value("${utdigit.http.max-concurrent-batches:16}") int maxBatches, ProblemResponses problems) {
+        if (maxBatches < 1) {
+            throw new IllegalArgumentException("utdigit.http.max-concurrent-batches must be >= 1 (got " + maxBatches + ")");
+        }
+        var registration = new FilterRegistrationBean<>(new BatchConcurrencyFilter(maxBatches, problems));
+        registration.setOrder(SecurityFilterProperties.DEFAULT_FILTER_ORDER + 11);
+        registration.setDispatcherTypes(DispatcherType.REQUEST);
         return registration;
     }
 
