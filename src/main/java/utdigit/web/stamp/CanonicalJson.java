@@ -69,11 +69,20 @@ public final class CanonicalJson {
         }
     }
 
-    /** RFC 8785 3.2.2.2: escape '"', '\\' and control characters; everything else literal. */
+    /**
+     * RFC 8785 3.2.2.2: escape '"', '\\' and control characters; everything else literal. Runs
+     * without escapes are appended whole.
+     */
     static void string(String s, StringBuilder out) {
         out.append('"');
+        int run = 0;
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
+            if (c != '"' && c != '\\' && c >= 0x20) {
+                continue;
+            }
+            out.append(s, run, i);
+            run = i + 1;
             switch (c) {
                 case '"' -> out.append("\\\"");
                 case '\\' -> out.append("\\\\");
@@ -82,15 +91,10 @@ public final class CanonicalJson {
                 case '\n' -> out.append("\\n");
                 case '\r' -> out.append("\\r");
                 case '\t' -> out.append("\\t");
-                default -> {
-                    if (c < 0x20) {
-                        out.append(String.format("\\u%04x", (int) c));
-                    } else {
-                        out.append(c);
-                    }
-                }
+                default -> out.append(String.format("\\u%04x", (int) c));
             }
         }
+        out.append(s, run, s.length());
         out.append('"');
     }
 
