@@ -2,8 +2,10 @@
 # Start-up benchmark: time from `java` to the first 200 on /actuator/health/readiness, for the
 # service and for an empty application of the same stack (same parent, same starters and
 # dependencies, one @SpringBootApplication class, probes enabled), each plain and with what the
-# platform offers: lazy initialization, class data sharing (CDS) of the extracted jar
-# (-XX:ArchiveClassesAtExit, then -XX:SharedArchiveFile), and both.
+# platform offers: lazy initialization, Spring AOT (built with -Paot, run with
+# -Dspring.aot.enabled=true), class data sharing (CDS) of the extracted jar
+# (-XX:ArchiveClassesAtExit in a training run, then -XX:SharedArchiveFile), and CDS with AOT.
+# Both jars are built with -Paot: an AOT-processed jar runs as a plain one unless AOT is enabled.
 # DESIGN "Non-functional targets": ready within 1.3x the empty application.
 #
 #   src/bench/startup-bench.sh            # 5 runs per variant, median; about 3 minutes
@@ -17,11 +19,11 @@ ROOT="$PWD"
 RUNS="${RUNS:-5}"
 TMP="${TMPDIR:-/tmp}/utdigit-startup"
 mkdir -p "$TMP"
-JAR="$(ls target/ut-digitization-service-*.jar 2>/dev/null | grep -v plain | head -1 || true)"
-if [[ -z "$JAR" || "${REBUILD:-0}" == 1 ]]; then
-  mvn -B -q -DskipTests package
-  JAR="$(ls target/ut-digitization-service-*.jar | grep -v plain | head -1)"
+if [[ ! -f "$TMP/service-aot.jar" || "${REBUILD:-0}" == 1 ]]; then
+  mvn -B -q -Paot -DskipTests package >/dev/null
+  cp "$(ls target/ut-digitization-service-*.jar | grep -v plain | head -1)" "$TMP/service-aot.jar"
 fi
+JAR="$TMP/service-aot.jar"
 
 # --- the empty application of the same stack
 EMPTY="$TMP/empty-app"
@@ -29,7 +31,7 @@ if [[ ! -f "$EMPTY/target/empty-app.jar" || "${REBUILD:-0}" == 1 ]]; then
   rm -rf "$EMPTY"
   mkdir -p "$EMPTY/src/main/java/empty" "$EMPTY/src/main/resources"
   sed -e 's|<artifactId>ut-digitization-service</artifactId>|<artifactId>empty-app</artifactId>|' \
-      -e 's|</plugins>|</plugins><finalName>empty-app</finalName>|' pom.xml >"$EMPTY/pom.xml"
+      -e '0,/<\/plugins>/s||</plugins><finalName>empty-app</finalName>|' pom.xml >"$EMPTY/pom.xml"
   cat >"$EMPTY/src/main/java/empty/EmptyApplication.java" <<'JAVA'
 package empty;
 
@@ -45,7 +47,7 @@ public class EmptyApplication {
 JAVA
   printf 'management:\n  endpoint:\n    health:\n      probes:\n        enabled: true\n' \
     >"$EMPTY/src/main/resources/application.yml"
-  (cd "$EMPTY" && mvn -B -q -o -DskipTests package -Djmh.skip)
+  (cd "$EMPTY" && mvn -B -q -o -Paot -DskipTests package >/dev/null)
 fi
 
 # --- extracted layouts and CDS archives (Spring Boot's jarmode tools; one training run each)
@@ -53,14 +55,17 @@ extract() { # jar dir
   rm -rf "$2"
   java -Djarmode=tools -jar "$1" extract --destination "$2" >/dev/null
 }
-train() { # dir archive
-  java -XX:ArchiveClassesAtExit="$2" -Dspring.context.exit=onRefresh -jar "$1"/*.jar \
+train() { # dir archive [java options]
+  local dir="$1" archive="$2"; shift 2
+  java -XX:ArchiveClassesAtExit="$archive" "$@" -Dspring.context.exit=onRefresh -jar "$dir"/*.jar \
     --server.port=0 >/dev/null 2>&1 || true
 }
 extract "$JAR" "$TMP/service"
 extract "$EMPTY/target/empty-app.jar" "$TMP/empty"
 train "$TMP/service" "$TMP/service.jsa"
 train "$TMP/empty" "$TMP/empty.jsa"
+train "$TMP/service" "$TMP/service-aot.jsa" -Dspring.aot.enabled=true
+train "$TMP/empty" "$TMP/empty-aot.jsa" -Dspring.aot.enabled=true
 
 free_port() { python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1",0)); print(s.getsockname()[1])'; }
 
@@ -92,8 +97,20 @@ measure() { # label java-args...
 echo "time to ready (first 200 on /actuator/health/readiness), median of $RUNS; $(nproc) cores, load before: $(cut -d' ' -f1-3 /proc/loadavg)"
 measure "empty app, java -jar" -jar "$EMPTY/target/empty-app.jar"; empty=$(cat "$TMP/last")
 measure "service, java -jar" -jar "$JAR"; plain=$(cat "$TMP/last")
+measure "service, lazy initialization" -jar "$JAR" --spring.main.lazy-initialization=true
+measure "empty app, AOT" -Dspring.aot.enabled=true -jar "$EMPTY/target/empty-app.jar"; empty_aot=$(cat "$TMP/last")
+measure "service, AOT" -Dspring.aot.enabled=true -jar "$JAR"; aot=$(cat "$TMP/last")
 measure "empty app, extracted + CDS" -XX:SharedArchiveFile="$TMP/empty.jsa" -jar "$TMP/empty/empty-app.jar"; empty_cds=$(cat "$TMP/last")
 measure "service, extracted + CDS" -XX:SharedArchiveFile="$TMP/service.jsa" -jar "$TMP"/service/*.jar; cds=$(cat "$TMP/last")
-measure "service, lazy initialization" -jar "$JAR" --spring.main.lazy-initialization=true
-measure "service, extracted + CDS + lazy initialization" -XX:SharedArchiveFile="$TMP/service.jsa" -jar "$TMP"/service/*.jar --spring.main.lazy-initialization=true
-python3 -c "print(f'service / empty: plain {$plain/$empty:.2f}x, with CDS {$cds/$empty_cds:.2f}x; CDS gain for the service {100*(1-$cds/$plain):.0f} %  (target <= 1.3x)')"
+measure "empty app, extracted + CDS + AOT" -XX:SharedArchiveFile="$TMP/empty-aot.jsa" -Dspring.aot.enabled=true \
+  -jar "$TMP/empty/empty-app.jar"; empty_both=$(cat "$TMP/last")
+measure "service, extracted + CDS + AOT" -XX:SharedArchiveFile="$TMP/service-aot.jsa" -Dspring.aot.enabled=true \
+  -jar "$TMP"/service/*.jar; both=$(cat "$TMP/last")
+python3 - "$empty" "$plain" "$empty_aot" "$aot" "$empty_cds" "$cds" "$empty_both" "$both" <<'PY'
+import sys
+e, p, ea, a, ec, c, eb, b = map(float, sys.argv[1:])
+print(f"service / empty app: plain {p / e:.2f}x, AOT {a / ea:.2f}x, CDS {c / ec:.2f}x, CDS + AOT {b / eb:.2f}x "
+      f"(target <= 1.3x)")
+print(f"service gain over plain java -jar: AOT {100 * (1 - a / p):.0f} %, CDS {100 * (1 - c / p):.0f} %, "
+      f"CDS + AOT {100 * (1 - b / p):.0f} %")
+PY
