@@ -17,7 +17,8 @@ import tools.jackson.databind.json.JsonMapper;
  * The one JSON mapper of the service: snake_case properties, nulls omitted (an empty
  * {@link java.util.Optional} is written as null: "does not exist"), and strict reading (unknown
  * properties, duplicate keys, trailing tokens, numbers for enums, quoted numbers, non-finite numbers
- * and fractions into integers are all rejected). Read limits are explicit, not library defaults.
+ * and fractions into integers are all rejected). Read limits are explicit, not library defaults
+ * (nesting depth, number, string, name and document length).
  */
 @Configuration(proxyBeanMethods = false)
 class JsonConfiguration {
@@ -27,12 +28,18 @@ class JsonConfiguration {
             @Value("${utdigit.json.max-nesting-depth:32}") int maxNestingDepth,
             @Value("${utdigit.json.max-number-length:64}") int maxNumberLength,
             @Value("${utdigit.json.max-string-length:10000}") int maxStringLength,
-            @Value("${utdigit.json.max-name-length:200}") int maxNameLength) {
+            @Value("${utdigit.json.max-name-length:200}") int maxNameLength,
+            @Value("${utdigit.json.max-document-length:${utdigit.batch.max-body-bytes:2147483648}}")
+            long maxDocumentLength) {
+        // One JSON-array batch body is one document for the parser, so the document limit is the
+        // batch body limit; single-endpoint bodies are capped lower before parsing
+        // (utdigit.json.max-body-bytes, utdigit.web.security.RequestBodyFilter).
         StreamReadConstraints limits = StreamReadConstraints.builder()
                 .maxNestingDepth(maxNestingDepth)
                 .maxNumberLength(maxNumberLength)
                 .maxStringLength(maxStringLength)
                 .maxNameLength(maxNameLength)
+                .maxDocumentLength(maxDocumentLength)
                 .build();
         JsonFactory factory = JsonFactory.builder().streamReadConstraints(limits).build();
         return StrictJson.configure(JsonMapper.builder(factory)).build();

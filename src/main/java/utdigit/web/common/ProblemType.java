@@ -16,7 +16,9 @@ public enum ProblemType {
     METHOD_NOT_ALLOWED("method-not-allowed", "Method not allowed", HttpStatus.METHOD_NOT_ALLOWED),
     NOT_ACCEPTABLE("not-acceptable", "Not acceptable", HttpStatus.NOT_ACCEPTABLE),
     PAYLOAD_TOO_LARGE("payload-too-large", "Request body too large", HttpStatus.CONTENT_TOO_LARGE),
+    REQUEST_TIMEOUT("request-timeout", "Request body too slow", HttpStatus.REQUEST_TIMEOUT),
     UNSUPPORTED_MEDIA_TYPE("unsupported-media-type", "Unsupported media type", HttpStatus.UNSUPPORTED_MEDIA_TYPE),
+    SERVICE_BUSY("service-busy", "Service busy", HttpStatus.SERVICE_UNAVAILABLE),
     UNAUTHORIZED("unauthorized", "Authentication required", HttpStatus.UNAUTHORIZED),
     INTERNAL_ERROR("internal-error", "Internal error", HttpStatus.INTERNAL_SERVER_ERROR);
 

@@ -1,0 +1,246 @@
+package utdigit.reliability;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.quicktheories.QuickTheory.qt;
+import static org.quicktheories.generators.SourceDSL.doubles;
+import static org.quicktheories.generators.SourceDSL.integers;
+
+import java.lang.reflect.RecordComponent;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.stream.IntStream;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ObjectNode;
+import utdigit.core.common.CalculationException;
+import utdigit.core.common.Units;
+import utdigit.core.sampling.SamplingCalculator;
+import utdigit.core.sampling.SamplingInput;
+import utdigit.web.common.Calculation;
+import utdigit.web.common.CalculationRunner;
+import utdigit.web.common.InputProblem;
+import utdigit.web.support.ApiTest;
+
+/**
+ * Properties of the calculations, seeded so that every run checks the same cases: valid finite
+ * inputs give finite answers or a typed refusal, monotonic relations hold, mm and in agree, and
+ * answers computed in parallel equal answers computed one after the other, bit for bit.
+ */
+class CorePropertiesTest extends ApiTest {
+    static final long SEED = 20_261_201L;
+    static final int REQUESTS_PER_CALCULATION = 1500;
+    /** mm and in forms differ by the rounding of x / 25.4 * 25.4: a few ulps, relative. */
+    static final double MIRROR_TOLERANCE = 1e-12;
+
+    @Autowired
+    List<Calculation<?>> calculations;
+    @Autowired
+    CalculationRunner runner;
+    @Autowired
+    JsonMapper mapper;
+
+    @Test
+    void validFiniteInputsGiveFiniteAnswersOrATypedRefusal() {
+        List<String> failures = new ArrayList<>();
+        StringBuilder figures = new StringBuilder();
+        int total = 0;
+        for (Calculation<?> c : calculations) {
+            int[] counts = run(c, new RequestGenerator(SEED ^ c.name().hashCode()), failures);
+            total += counts[0];
+            figures.append(String.format("%n  %-28s %5d generated, %5d valid, %5d answered finite, %5d refused typed",
+                    c.name(), counts[0], counts[1], counts[2], counts[3]));
+        }
+        System.out.println("Finite-output property: " + total + " requests, " + failures.size() + " failures" + figures);
+        assertThat(failures).isEmpty();
+    }
+
+    private <Q> int[] run(Calculation<Q> c, RequestGenerator generator, List<String> failures) {
+        int valid = 0;
+        int answered = 0;
+        int refused = 0;
+        for (int i = 0; i < REQUESTS_PER_CALCULATION; i++) {
+            Q request = generator.next(c.requestType());
+            try {
+                runner.validate(request);
+            } catch (InputProblem invalid) {
+                continue;
+            }
+            valid++;
+            try {
+                Object answer = c.answer(request);
+                List<String> nonFinite = new ArrayList<>();
+                nonFinite(answer, "", nonFinite);
+                if (nonFinite.isEmpty()) {
+                    answered++;
+                } else if (failures.size() < 20) {
+                    failures.add(c.name() + " " + request + " -> non-finite " + nonFinite);
+                }
+            } catch (CalculationException | InputProblem typed) {
+                refused++;
+            } catch (RuntimeException e) {
+                if (failures.size() < 20) {
+                    failures.add(c.name() + " " + request + " -> " + e);
+                }
+            }
+        }
+        return new int[] {REQUESTS_PER_CALCULATION, valid, answered, refused};
+    }
+
+    /** Every double reachable from an answer record: finite, or absent (null / empty Optional). */
+    static void nonFinite(Object value, String path, List<String> found) {
+        if (value instanceof Double d) {
+            if (!Double.isFinite(d)) {
+                found.add(path + "=" + d);
+            }
+        } else if (value instanceof Float f) {
+            if (!Float.isFinite(f)) {
+                found.add(path + "=" + f);
+            }
+        } else if (value instanceof Optional<?> o) {
+            o.ifPresent(v -> nonFinite(v, path, found));
+        } else if (value instanceof Collection<?> list) {
+            int i = 0;
+            for (Object v : list) {
+                nonFinite(v, path + "/" + i++, found);
+            }
+        } else if (value instanceof Map<?, ?> map) {
+            map.forEach((k, v) -> nonFinite(v, path + "/" + k, found));
+        } else if (value != null && value.getClass().isRecord()) {
+            for (RecordComponent rc : value.getClass().getRecordComponents()) {
+                try {
+                    var accessor = rc.getAccessor();
+                    accessor.setAccessible(true);
+                    nonFinite(accessor.invoke(value), path + "/" + rc.getName(), found);
+                } catch (ReflectiveOperationException e) {
+                    throw new IllegalStateException(e);
+                }
+            }
+        }
+    }
+
+    @Test
+    void moreSamplesPerPeriodNeverMoreSineLoss() {
+        // -20 log10(cos(pi/n)) falls as n = fs/f rises (sampling a sine: the worst-phase peak).
+        qt().withFixedSeed(SEED).withExamples(2000)
+                .forAll(doubles().between(0.1, 50), doubles().between(2.01, 200), doubles().between(1.0, 3.0))
+                .checkAssert((frequencyMhz, samplesPerPeriod, factor) -> {
+                    double fewer = loss(samplesPerPeriod * frequencyMhz, frequencyMhz);
+                    double more = loss(samplesPerPeriod * factor * frequencyMhz, frequencyMhz);
+                    assertThat(more).isLessThanOrEqualTo(fewer);
+                });
+    }
+
+    private static double loss(double samplingMhz, double frequencyMhz) {
+        return SamplingCalculator.compute(SamplingInput.of(samplingMhz, frequencyMhz)).sineAmplitudeLossDb()
+                .orElseThrow();
+    }
+
+    @Test
+    void moreBitsNeverMoreQuantizationErrorThroughTheServicePath() {
+        String[] quantizers = {"ROUNDING", "TRUNCATION"};
+        String[] mappings = {"FSR_OVER_2N", "MAX_CODE"};
+        String[] signals = {"RF", "RECTIFIED"};
+        qt().withFixedSeed(SEED).withExamples(400)
+                .forAll(integers().between(2, 31), doubles().between(1, 100), integers().between(0, 7))
+                .checkAssert((bits, heightPercent, option) -> {
+                    String options = "\"quantizer\": \"" + quantizers[option & 1] + "\", \"code_mapping\": \""
+                            + mappings[(option >> 1) & 1] + "\", \"digitized_signal\": \"" + signals[(option >> 2) & 1] + "\"";
+                    JsonNode fewer = answer("quantization-assessments", "{\"bit_depth\": " + bits
+                            + ", \"signal_height_percent_fsh\": " + heightPercent + ", " + options + "}");
+                    JsonNode more = answer("quantization-assessments", "{\"bit_depth\": " + (bits + 1)
+                            + ", \"signal_height_percent_fsh\": " + heightPercent + ", " + options + "}");
+                    assertThat(more.get("lsb_percent_fsh").asDouble()).isLessThan(fewer.get("lsb_percent_fsh").asDouble());
+                    assertThat(more.get("amplitude_error_over_db").asDouble())
+                            .isLessThanOrEqualTo(fewer.get("amplitude_error_over_db").asDouble());
+                    if (!fewer.get("amplitude_error_under_db").isNull() && !more.get("amplitude_error_under_db").isNull()) {
+                        assertThat(Math.abs(more.get("amplitude_error_under_db").asDouble()))
+                                .isLessThanOrEqualTo(Math.abs(fewer.get("amplitude_error_under_db").asDouble()));
+                    }
+                });
+    }
+
+    @Test
+    void millimetresAndInchesRoundTrip() {
+        qt().withFixedSeed(SEED).withExamples(5000).forAll(doubles().between(1e-6, 1e7)).checkAssert(mm -> {
+            assertThat(Units.inToMm(Units.mmToIn(mm))).isCloseTo(mm, org.assertj.core.data.Offset.offset(4 * Math.ulp(mm)));
+            double in = mm / 25.4;
+            assertThat(Units.mmToIn(Units.inToMm(in))).isCloseTo(in, org.assertj.core.data.Offset.offset(4 * Math.ulp(in)));
+        });
+    }
+
+    @Test
+    void inchFormsOfTheExampleRequestsGiveTheMillimetreAnswers() throws Exception {
+        int compared = 0;
+        for (Calculation<?> c : calculations) {
+            Path example = Path.of("api-examples", c.name() + ".json");
+            if (!Files.exists(example)) {
+                continue;
+            }
+            ObjectNode mm = (ObjectNode) mapper.readTree(Files.readString(example));
+            ObjectNode in = mm.deepCopy();
+            boolean any = false;
+            for (String name : List.copyOf(mm.propertyNames())) {
+                if (name.endsWith("_mm") && mm.get(name).isNumber()) {
+                    in.remove(name);
+                    in.put(name.substring(0, name.length() - 3) + "_in", Units.mmToIn(mm.get(name).asDouble()));
+                    any = true;
+                }
+            }
+            if (!any) {
+                continue;
+            }
+            JsonNode a = runner.runTree(c.name(), mm);
+            JsonNode b = runner.runTree(c.name(), in);
+            for (String name : List.copyOf(a.propertyNames())) {
+                JsonNode x = a.get(name);
+                if (x.isNumber()) {
+                    assertThat(b.get(name).asDouble()).as(c.name() + " " + name)
+                            .isCloseTo(x.asDouble(), org.assertj.core.data.Offset.offset(
+                                    Math.abs(x.asDouble()) * MIRROR_TOLERANCE + Double.MIN_NORMAL));
+                    compared++;
+                }
+            }
+        }
+        System.out.println("mm/in mirror property: " + compared + " result fields compared");
+        assertThat(compared).isGreaterThan(10);
+    }
+
+    @Test
+    void parallelAndSequentialAnswersAreIdenticalBitForBit() {
+        List<String[]> requests = new ArrayList<>();
+        RequestGenerator generator = new RequestGenerator(SEED);
+        for (Calculation<?> c : calculations) {
+            for (int i = 0; i < 150; i++) {
+                requests.add(new String[] {c.name(), mapper.writeValueAsString(generator.next(c.requestType()))});
+            }
+        }
+        List<String> sequential = requests.stream().map(this::stampOrProblem).toList();
+        List<String> parallel = IntStream.range(0, requests.size()).parallel()
+                .mapToObj(i -> stampOrProblem(requests.get(i))).toList();
+        long answered = sequential.stream().filter(s -> s.length() == 64).count();
+        System.out.printf("Parallel vs sequential: %d requests (%d answered, stamps compared), %d differences%n",
+                requests.size(), answered, IntStream.range(0, requests.size())
+                        .filter(i -> !sequential.get(i).equals(parallel.get(i))).count());
+        assertThat(parallel).isEqualTo(sequential);
+        assertThat(answered).isGreaterThan(requests.size() / 4);
+    }
+
+    private String stampOrProblem(String[] request) {
+        try {
+            return runner.runTree(request[0], mapper.readTree(request[1])).path("stamp").path("sha256").asString();
+        } catch (InputProblem p) {
+            return "problem " + p.type() + " " + p.getMessage();
+        }
+    }
+
+    private JsonNode answer(String name, String json) {
+        return runner.runTree(name, mapper.readTree(json));
+    }
+}
