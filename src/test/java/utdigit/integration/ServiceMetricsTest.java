@@ -69,6 +69,19 @@ class ServiceMetricsTest extends ApiTest {
                 assertThat(requests("pulse-parameters/batch", "POST", 200)).isPositive());
     }
 
+    @Test
+    void prometheusScrapesBothCounters() {
+        post("/api/pulse-parameters", PULSE).statusCode(200);
+        given().contentType("application/x-ndjson").accept("application/x-ndjson")
+                .body((PULSE + "\n").getBytes(StandardCharsets.UTF_8))
+                .post("/api/pulse-parameters/batch").then().statusCode(200);
+        await().atMost(SETTLE).untilAsserted(() -> {
+            String scrape = given().get("/actuator/prometheus").then().statusCode(200).extract().asString();
+            assertThat(scrape).contains("utdigit_requests_total{endpoint=\"pulse-parameters\",method=\"POST\",status=\"200\"}")
+                    .contains("utdigit_batch_rows_total{calculation=\"pulse-parameters\",status=\"OK\"}");
+        });
+    }
+
     private double requests(String endpoint, String method, int status) {
         Counter c = registry.find(ServiceMetrics.REQUESTS).tag("endpoint", endpoint).tag("method", method)
                 .tag("status", Integer.toString(status)).counter();
