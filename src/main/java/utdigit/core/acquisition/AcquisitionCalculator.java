@@ -322,6 +322,9 @@ public final class AcquisitionCalculator {
 
     /** A number for a message: six significant digits, no trailing zeros, no exponent. */
     private static String fmt(double x) {
+        if (!Double.isFinite(x)) {
+            return x > 0 ? "infinity" : x < 0 ? "-infinity" : "not a number";
+        }
         return new BigDecimal(x).round(MESSAGE_DIGITS).stripTrailingZeros().toPlainString();
     }
 

@@ -367,6 +367,9 @@ public final class PulseCalculator {
 
     /** A number for a message: 4 significant digits, no exponent. */
     private static String fmt(double x) {
+        if (!Double.isFinite(x)) {
+            return x > 0 ? "infinity" : x < 0 ? "-infinity" : "not a number";
+        }
         return new BigDecimal(x).round(MESSAGE_DIGITS).stripTrailingZeros().toPlainString();
     }
 }

@@ -69,6 +69,11 @@ public final class RequiredPulseRate {
         Objects.requireNonNull(reading, "peak_reading");
         Checks.positive("amplitude_tolerance_db", amplitudeToleranceDb);
         double startMhz = closedFormBoundRateMhz(pulse, amplitudeToleranceDb);
+        // The closed-form root is exact up to rounding: step up by ulps until the rate really passes,
+        // so that the answer read back at its own rate is within the tolerance to the last bit.
+        for (int i = 0; i < 64 && !passes(pulse, reading, amplitudeToleranceDb, startMhz); i++) {
+            startMhz = StrictMath.nextUp(startMhz * (1.0 + 1e-15));
+        }
 
         double passingMhz = startMhz;
         double failingMhz;
@@ -132,7 +137,12 @@ public final class RequiredPulseRate {
     public static double forEnvelope(GaussianPulse pulse, double amplitudeToleranceDb) {
         Checks.positive("amplitude_tolerance_db", amplitudeToleranceDb);
         double intervalUs = 2.0 * StrictMath.sqrt(amplitudeToleranceDb * LN_10 / (20.0 * pulse.envelopeRatePerUs2()));
-        return 1.0 / intervalUs;
+        double rateMhz = 1.0 / intervalUs;
+        // Rounding may leave the loss at this rate a few ulps above X: step up until it is within.
+        for (int i = 0; i < 64 && PulseSamplingLoss.envelopeLossDb(pulse, 1.0 / rateMhz) > amplitudeToleranceDb; i++) {
+            rateMhz = StrictMath.nextUp(rateMhz * (1.0 + 1e-15));
+        }
+        return rateMhz;
     }
 
     private static boolean passes(GaussianPulse pulse, PeakReading reading, double toleranceDb, double rateMhz) {

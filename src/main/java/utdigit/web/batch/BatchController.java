@@ -71,6 +71,9 @@ class BatchController {
             rows = processor.open(calculation, in, request.getInputStream());
         } catch (BatchBodyException e) {
             throw InputProblem.invalid(e.pointer(), e.getMessage());
+        } catch (CountingInputStream.LimitExceeded e) {
+            throw new PayloadTooLargeProblem("the body is over the batch limit of "
+                    + processor.limits().maxBodyBytes() + " bytes before its first row; split the batch");
         }
         response.setStatus(200);
         response.setContentType(out.mediaType + (out == BatchProcessor.Format.CSV ? ";charset=UTF-8" : ""));

@@ -108,13 +108,6 @@ class BatchProcessor {
                 Row row;
                 try {
                     row = rows.next();
-                } catch (UncheckedIOException e) {
-                    if (e.getCause() instanceof CountingInputStream.LimitExceeded) {
-                        sink.write(limitRow(answered + 1, "the batch body limit (" + limits.maxBodyBytes()
-                                + " bytes) is reached"));
-                        break;
-                    }
-                    throw e;
                 } catch (RuntimeException e) {
                     if (hasLimitCause(e)) {
                         sink.write(limitRow(answered + 1, "the batch body limit (" + limits.maxBodyBytes()

@@ -35,7 +35,10 @@ final class CsvSink implements RowSink {
         header.add("problem.pointers");
         CsvSchema.Builder schema = CsvSchema.builder();
         header.forEach(schema::addColumn);
-        this.writer = csv.writerFor(List.class).with(schema.build().withHeader()).writeValues(out);
+        // The header is written as the first record, not by the schema: Jackson writes a schema's header
+        // only with the first row, and an answer of zero rows must still carry it.
+        this.writer = csv.writerFor(List.class).with(schema.build().withoutHeader()).writeValues(out);
+        writer.write(header);
     }
 
     @Override

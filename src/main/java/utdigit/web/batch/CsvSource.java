@@ -18,7 +18,8 @@ import utdigit.web.common.ProblemType;
  * as {@code probe.frequency_mhz}; quoted fields; LF or CRLF; UTF-8, a BOM is skipped by the caller).
  * Each data row becomes the JSON request the single endpoint takes: an empty cell is an absent
  * field, a number column must hold a finite decimal number, an integer column a whole number.
- * A header naming an unknown column is a 400 before any row.
+ * A header naming an unknown column is a 400 before any row. A blank line is not a row (as in
+ * NDJSON): it is skipped and not counted, so row numbers stay those of the data rows.
  */
 final class CsvSource implements RowSource {
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
@@ -39,6 +40,7 @@ final class CsvSource implements RowSource {
             }
             this.header = rows.next();
         } catch (JacksonException e) {
+            CountingInputStream.rethrowIfLimit(e);
             throw new BatchBodyException("the body is not well-formed CSV", "");
         }
         List<String> unknown = new ArrayList<>();
@@ -61,14 +63,14 @@ final class CsvSource implements RowSource {
     @Override
     public Row next() {
         try {
-            if (!rows.hasNext()) {
-                return null;
-            }
-            String[] cells = rows.next();
+            String[] cells;
+            do {
+                if (!rows.hasNext()) {
+                    return null;
+                }
+                cells = rows.next();
+            } while (cells.length == 1 && cells[0].isEmpty());
             row++;
-            if (cells.length == 1 && cells[0].isEmpty() && header.length > 1) {
-                return next();
-            }
             if (cells.length != header.length) {
                 String detail = "the row has " + cells.length + " cells; the header has " + header.length;
                 return Row.unreadable(row, ProblemType.INVALID_INPUT, detail, List.of(new FieldError("", detail)));
@@ -83,12 +85,13 @@ final class CsvSource implements RowSource {
                 put(body, header[i], cell, errors);
             }
             if (!errors.isEmpty()) {
-                return Row.unreadable(row, ProblemType.INVALID_INPUT,
+                return Row.unreadable(row, body, ProblemType.INVALID_INPUT,
                         errors.size() == 1 ? errors.get(0).pointer() + ": " + errors.get(0).detail()
                                 : errors.size() + " fields are invalid; see errors", errors);
             }
             return Row.of(row, body);
         } catch (JacksonException e) {
+            CountingInputStream.rethrowIfLimit(e);
             row++;
             String detail = "the row is not well-formed CSV";
             return Row.unreadable(row, ProblemType.MALFORMED_BODY, detail, List.of(new FieldError("", detail)));

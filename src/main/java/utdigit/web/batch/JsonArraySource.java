@@ -4,8 +4,11 @@ import java.io.InputStream;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
+import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.JsonNodeFactory;
 
 /**
  * Rows of an application/json body: one JSON array of request objects, read element by element.
@@ -13,14 +16,18 @@ import tools.jackson.databind.json.JsonMapper;
  * the batch ends with a row that says where the body broke.
  */
 final class JsonArraySource implements RowSource {
+    private static final JsonNode EMPTY_ARRAY = JsonNodeFactory.instance.arrayNode();
+
     private final JsonParser parser;
-    private final JsonMapper mapper;
+    private final ObjectReader elements;
     private long row;
     private String fatal;
     private boolean done;
 
     JsonArraySource(JsonMapper mapper, InputStream in) {
-        this.mapper = mapper;
+        // The strict mapper fails on trailing tokens, and after one element of the array the rest of
+        // the array is exactly that: elements are read without that check (the array is checked here).
+        this.elements = mapper.readerFor(JsonNode.class).without(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
         try {
             this.parser = mapper.createParser(in);
             JsonToken first = parser.nextToken();
@@ -29,6 +36,7 @@ final class JsonArraySource implements RowSource {
                         + "objects", "");
             }
         } catch (JacksonException e) {
+            CountingInputStream.rethrowIfLimit(e);
             throw new BatchBodyException("the body is not well-formed JSON", "");
         }
     }
@@ -38,6 +46,7 @@ final class JsonArraySource implements RowSource {
         if (done) {
             return null;
         }
+        long next = row + 1;
         try {
             JsonToken t = parser.nextToken();
             if (t == JsonToken.END_ARRAY) {
@@ -52,12 +61,19 @@ final class JsonArraySource implements RowSource {
                 fatal = "the array is not closed: the body ended after row " + row;
                 return null;
             }
-            row++;
-            JsonNode node = mapper.readTree(parser);
+            row = next;
+            if (t == JsonToken.START_ARRAY) {
+                // not a request (the runner answers "must be a JSON object"); skipped token by token,
+                // never built: an array of a million rows nested in one element would not fit the heap
+                parser.skipChildren();
+                return Row.of(row, EMPTY_ARRAY);
+            }
+            JsonNode node = elements.readValue(parser);
             return Row.of(row, node);
         } catch (JacksonException e) {
+            CountingInputStream.rethrowIfLimit(e);
             done = true;
-            row++;
+            row = next;
             var loc = e.getLocation();
             fatal = "the body is not well-formed JSON at row " + row
                     + (loc == null ? "" : " (line " + loc.getLineNr() + ", column " + loc.getColumnNr() + ")")

@@ -11,11 +11,21 @@ import utdigit.web.common.ProblemType;
 
 /**
  * Rows of an application/x-ndjson body: one JSON object per line (LF or CRLF); blank lines are not
- * rows. A line that is not JSON is an INVALID row; the next line is read as usual.
+ * rows. A line that is not JSON is an INVALID row; the next line is read as usual. A line longer
+ * than {@link #MAX_LINE_CHARS} (a JSON array sent as NDJSON is one such line) is read to its end
+ * without being kept and is an INVALID row: memory stays flat whatever the body.
  */
 final class NdjsonSource implements RowSource {
+    /** Longest line kept, in characters: far above any request object, far below the heap. */
+    static final int MAX_LINE_CHARS = 1 << 20;
+
     private final BufferedReader reader;
     private final JsonMapper mapper;
+    private final char[] buffer = new char[1 << 13];
+    private final StringBuilder line = new StringBuilder();
+    private int position;
+    private int limit;
+    private boolean tooLong;
     private long row;
 
     NdjsonSource(JsonMapper mapper, BufferedReader reader) {
@@ -26,16 +36,20 @@ final class NdjsonSource implements RowSource {
     @Override
     public Row next() {
         try {
-            String line;
+            String text;
             do {
-                line = reader.readLine();
-                if (line == null) {
+                text = nextLine();
+                if (text == null) {
                     return null;
                 }
-            } while (line.isBlank());
+            } while (!tooLong && text.isBlank());
             row++;
+            if (tooLong) {
+                String detail = "the line is longer than " + MAX_LINE_CHARS + " characters; one JSON object per line";
+                return Row.unreadable(row, ProblemType.MALFORMED_BODY, detail, List.of(new FieldError("", detail)));
+            }
             try {
-                return Row.of(row, mapper.readTree(line));
+                return Row.of(row, mapper.readTree(text));
             } catch (JacksonException e) {
                 String detail = e.getOriginalMessage() != null && e.getOriginalMessage().startsWith("Duplicate")
                         ? "a key appears more than once in the same object" : "the line is not well-formed JSON";
@@ -44,6 +58,54 @@ final class NdjsonSource implements RowSource {
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /**
+     * The next line without its LF or CRLF, or null at the end of the body. Past MAX_LINE_CHARS the
+     * rest of the line is skipped and {@link #tooLong} set.
+     */
+    private String nextLine() throws IOException {
+        line.setLength(0);
+        tooLong = false;
+        boolean any = false;
+        while (true) {
+            if (position == limit) {
+                limit = Math.max(0, reader.read(buffer, 0, buffer.length));
+                position = 0;
+                if (limit == 0) {
+                    return any ? endLine() : null;
+                }
+            }
+            any = true;
+            int start = position;
+            while (position < limit && buffer[position] != '\n') {
+                position++;
+            }
+            if (!tooLong) {
+                if (line.length() + (position - start) > MAX_LINE_CHARS + 1) { // + 1: room for the CR of CRLF
+                    tooLong = true;
+                    line.setLength(0);
+                } else {
+                    line.append(buffer, start, position - start);
+                }
+            }
+            if (position < limit) {
+                position++;
+                return endLine();
+            }
+        }
+    }
+
+    private String endLine() {
+        int n = line.length();
+        if (n > 0 && line.charAt(n - 1) == '\r') {
+            line.setLength(n - 1);
+        }
+        if (line.length() > MAX_LINE_CHARS) {
+            tooLong = true;
+            line.setLength(0);
+        }
+        return line.toString();
     }
 
     @Override

@@ -19,6 +19,11 @@ record Row(long number, JsonNode body, ProblemType readProblem, String readDetai
         return new Row(number, null, type, detail, errors);
     }
 
+    /** A row read in part (a CSV row with a bad cell): the fields read still give its id. */
+    static Row unreadable(long number, JsonNode partialBody, ProblemType type, String detail, List<FieldError> errors) {
+        return new Row(number, partialBody, type, detail, errors);
+    }
+
     boolean readable() {
         return readProblem == null;
     }

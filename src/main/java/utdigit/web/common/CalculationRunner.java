@@ -24,6 +24,7 @@ import utdigit.web.stamp.Stamper;
  */
 @Component
 public class CalculationRunner {
+    private static final org.slf4j.Logger log = org.slf4j.LoggerFactory.getLogger(CalculationRunner.class);
     private final Map<String, Calculation<?>> byName = new LinkedHashMap<>();
     private final Validator validator;
     private final JsonMapper mapper;
@@ -95,6 +96,13 @@ public class CalculationRunner {
                 errors.add(new FieldError(c.pointer(field, request), e.getMessage()));
             }
             throw new InputProblem(ProblemAdvice.typeOf(e), e.getMessage(), errors);
+        } catch (ArithmeticException | IllegalArgumentException e) {
+            // Inputs valid one by one can still lie where a formula has no finite answer (a diameter or a
+            // tolerance of the smallest positive double): a typed refusal, never a 500. Logged to be fixed.
+            log.warn("calculation {} refused numerically extreme inputs: {}", c.name(), e.toString());
+            throw new InputProblem(ProblemType.IMPOSSIBLE_COMBINATION, "the inputs lie outside the range where "
+                    + "this calculation has a finite answer (values at the limits of floating point); check the "
+                    + "units and magnitudes of the inputs", List.of(new FieldError("", "numerically extreme inputs")));
         }
         ObjectNode tree = mapper.valueToTree(answer);
         List<String> nonFinite = new ArrayList<>();

@@ -16,7 +16,8 @@ import org.springframework.stereotype.Component;
 /**
  * Writes exclusive Bean Validation bounds ({@code @DecimalMin(value = "0", inclusive = false)}) of
  * every request record as OpenAPI 3.1 {@code exclusiveMinimum} / {@code exclusiveMaximum} numbers,
- * so the document states the same range the service enforces ("> 0", not ">= 0").
+ * so the document states the same range the service enforces ("> 0", not ">= 0"); and marks the
+ * results that can be null as such.
  */
 @Component
 class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
@@ -33,8 +34,48 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
         }
         Map<String, Schema> schemas = openApi.getComponents().getSchemas();
         Set<Class<?>> seen = new HashSet<>();
+        Set<Class<?>> seenAnswers = new HashSet<>();
         for (Calculation<?> c : calculations) {
             apply(c.requestType(), schemas, seen);
+            for (var m : c.getClass().getMethods()) {
+                if (m.getName().equals("answer") && m.getParameterCount() == 1 && m.getReturnType().isRecord()) {
+                    nullableOptionals(m.getReturnType(), schemas, seenAnswers);
+                }
+            }
+        }
+    }
+
+    /**
+     * An {@code Optional} result is written as null when the value cannot exist: its schema type is
+     * [number, null] (the annotation's {@code types} is not carried over by the generator).
+     */
+    @SuppressWarnings({"rawtypes", "unchecked"})
+    private static void nullableOptionals(Class<?> type, Map<String, Schema> schemas, Set<Class<?>> seen) {
+        if (!type.isRecord() || !seen.add(type)) {
+            return;
+        }
+        io.swagger.v3.oas.annotations.media.Schema doc = type.getAnnotation(io.swagger.v3.oas.annotations.media.Schema.class);
+        Schema schema = schemas.get(doc != null && !doc.name().isEmpty() ? doc.name() : type.getSimpleName());
+        for (RecordComponent rc : type.getRecordComponents()) {
+            if (rc.getType().isRecord()) {
+                nullableOptionals(rc.getType(), schemas, seen);
+            }
+            if (schema == null || schema.getProperties() == null || rc.getType() != java.util.Optional.class) {
+                continue;
+            }
+            Schema property = (Schema) schema.getProperties().get(PropertyPointers.jsonName(rc.getName(), rc));
+            if (property != null) {
+                java.util.Set<String> types = new java.util.LinkedHashSet<>();
+                if (property.getTypes() != null) {
+                    types.addAll(property.getTypes());
+                } else if (property.getType() != null) {
+                    types.add(property.getType());
+                } else {
+                    types.add("number");
+                }
+                types.add("null");
+                property.setTypes(types);
+            }
         }
     }
 

@@ -121,4 +121,20 @@ public final class Mirrors {
         WaveMode mode = f.waveMode() == null ? WaveMode.LONGITUDINAL : f.waveMode();
         return VelocitySource.ofMaterial(material, mode, f.temperatureC());
     }
+
+    /** The pointer of a length the caller sent: "/base_in" when the inch form was sent, else "/base_mm". */
+    public static String lengthPointer(String base, Double inchValue) {
+        return JsonPointers.property(base + (inchValue != null ? "_in" : "_mm"));
+    }
+
+    /** The pointer of the velocity form the caller sent: velocity_in_per_us, material, else velocity_m_per_s. */
+    public static String velocityPointer(VelocityFields f) {
+        if (f.velocityInPerUs() != null) {
+            return JsonPointers.property("velocity_in_per_us");
+        }
+        if (f.material() != null) {
+            return JsonPointers.property("material");
+        }
+        return JsonPointers.property("velocity_m_per_s");
+    }
 }

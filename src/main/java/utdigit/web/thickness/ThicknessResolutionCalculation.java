@@ -97,31 +97,13 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
     @Override
     public String pointer(String coreField, ThicknessResolutionRequest q) {
         return switch (coreField) {
-            case "nominal_thickness" -> lengthPointer(coreField, q.nominalThicknessIn());
-            case "required_resolution" -> lengthPointer(coreField, q.requiredResolutionIn());
-            case "velocity" -> velocityPointer(q);
+            case "nominal_thickness" -> Mirrors.lengthPointer(coreField, q.nominalThicknessIn());
+            case "required_resolution" -> Mirrors.lengthPointer(coreField, q.requiredResolutionIn());
+            case "velocity" -> Mirrors.velocityPointer(q);
             default -> Calculation.super.pointer(coreField, q);
         };
     }
 
-    /** "/base_in" when the inch form was sent, else "/base_mm". */
-    static String lengthPointer(String base, Double inchValue) {
-        return JsonPointers.property(base + (inchValue != null ? "_in" : "_mm"));
-    }
-
-    /**
-     * The velocity form sent (the core is called only when exactly one was): velocity_in_per_us,
-     * material, else velocity_m_per_s.
-     */
-    static String velocityPointer(VelocityFields f) {
-        if (f.velocityInPerUs() != null) {
-            return JsonPointers.property("velocity_in_per_us");
-        }
-        if (f.material() != null) {
-            return JsonPointers.property("material");
-        }
-        return JsonPointers.property("velocity_m_per_s");
-    }
 
     private static String number(double value) {
         return value == StrictMath.rint(value) ? String.valueOf((long) value) : String.valueOf(value);

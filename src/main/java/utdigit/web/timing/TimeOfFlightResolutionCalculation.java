@@ -89,30 +89,12 @@ class TimeOfFlightResolutionCalculation implements Calculation<TimeOfFlightResol
     @Override
     public String pointer(String coreField, TimeOfFlightResolutionRequest q) {
         return switch (coreField) {
-            case "probe_centre_separation" -> lengthPointer(coreField, q.probeCentreSeparationIn());
-            case "depth" -> lengthPointer(coreField, q.depthIn());
-            case "thickness" -> lengthPointer(coreField, q.thicknessIn());
-            case "velocity" -> velocityPointer(q);
+            case "probe_centre_separation" -> Mirrors.lengthPointer(coreField, q.probeCentreSeparationIn());
+            case "depth" -> Mirrors.lengthPointer(coreField, q.depthIn());
+            case "thickness" -> Mirrors.lengthPointer(coreField, q.thicknessIn());
+            case "velocity" -> Mirrors.velocityPointer(q);
             default -> Calculation.super.pointer(coreField, q);
         };
     }
 
-    /** "/base_in" when the inch form was sent, else "/base_mm". */
-    static String lengthPointer(String base, Double inchValue) {
-        return JsonPointers.property(base + (inchValue != null ? "_in" : "_mm"));
-    }
-
-    /**
-     * The velocity form sent (the core is called only when exactly one was): velocity_in_per_us,
-     * material, else velocity_m_per_s.
-     */
-    static String velocityPointer(VelocityFields f) {
-        if (f.velocityInPerUs() != null) {
-            return JsonPointers.property("velocity_in_per_us");
-        }
-        if (f.material() != null) {
-            return JsonPointers.property("material");
-        }
-        return JsonPointers.property("velocity_m_per_s");
-    }
 }

@@ -1,0 +1,73 @@
+#!/usr/bin/env bash
+# Batch benchmark: rows per second of a CSV batch through POST /api/{calculation}/batch with the
+# service's heap capped at 256 MiB, rows in = rows out, and the heap seen by the GC log.
+# Targets (DESIGN "Non-functional targets"): 100,000 calculation rows/s and 20,000 sheets/s.
+#
+#   src/bench/batch-bench.sh                                   # quantization-assessments, 1,000,000 rows
+#   src/bench/batch-bench.sh sampling-assessments 1000000
+#   ROWS_WARMUP=50000 JAVA_OPTS='-Xmx256m' src/bench/batch-bench.sh technique-sheet-validations 1000000
+#
+# The CSV is generated into a temporary directory (never committed) and removed afterwards; the
+# answer (CSV, Accept text/csv) is counted as it streams, not stored.
+set -euo pipefail
+cd "$(dirname "$0")/../.."
+CALC="${1:-quantization-assessments}"
+ROWS="${2:-1000000}"
+ROWS_WARMUP="${ROWS_WARMUP:-100000}"
+JAVA_OPTS="${JAVA_OPTS:--Xmx256m}"
+PORT="$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1",0)); print(s.getsockname()[1])')"
+JAR="$(ls target/ut-digitization-service-*.jar 2>/dev/null | grep -v plain | head -1 || true)"
+if [[ -z "$JAR" || "${REBUILD:-0}" == 1 ]]; then
+  mvn -B -q -DskipTests package
+  JAR="$(ls target/ut-digitization-service-*.jar | grep -v plain | head -1)"
+fi
+WORK="$(mktemp -d)"
+URL="http://127.0.0.1:$PORT/api/$CALC/batch"
+
+python3 src/bench/batch-csv.py "$CALC" "$ROWS_WARMUP" >"$WORK/warmup.csv"
+python3 src/bench/batch-csv.py "$CALC" "$ROWS" >"$WORK/body.csv"
+
+# shellcheck disable=SC2086
+java $JAVA_OPTS -Xlog:gc:file="$WORK/gc.log" -jar "$JAR" --server.port="$PORT" --server.address=127.0.0.1 \
+  >"$WORK/service.log" 2>&1 &
+SERVICE=$!
+trap 'kill "$SERVICE" 2>/dev/null; wait "$SERVICE" 2>/dev/null; rm -rf "$WORK"; true' EXIT
+for _ in $(seq 1 240); do
+  curl -fsS -o /dev/null "http://127.0.0.1:$PORT/actuator/health/readiness" 2>/dev/null && break
+  kill -0 "$SERVICE" 2>/dev/null || { cat "$WORK/service.log"; exit 1; }
+  sleep 0.5
+done
+
+# Warm-up (JIT), not measured.
+curl -sS -X POST -H 'Content-Type: text/csv' -H 'Accept: text/csv' -T "$WORK/warmup.csv" "$URL" | tail -1 >/dev/null
+gc_lines_before=$(wc -l <"$WORK/gc.log")
+
+echo "$CALC: $ROWS rows, $(du -h "$WORK/body.csv" | cut -f1) of CSV, service $JAVA_OPTS, $(nproc) cores, load before: $(cut -d' ' -f1-3 /proc/loadavg)"
+start=$(date +%s.%N)
+curl -sS -X POST -H 'Content-Type: text/csv' -H 'Accept: text/csv' -T "$WORK/body.csv" "$URL" \
+  | tee >(wc -l >"$WORK/lines") | LC_ALL=C grep -cF ',OK,' >"$WORK/ok" || true
+end=$(date +%s.%N)
+sleep 0.5
+lines=$(cat "$WORK/lines"); ok=$(cat "$WORK/ok")
+out=$((lines - 1))
+python3 - "$start" "$end" "$ROWS" "$out" "$ok" "$WORK/gc.log" "$gc_lines_before" "$SERVICE" <<'PY'
+import re, sys
+start, end, rows, out, ok, gclog, skip, pid = sys.argv[1:]
+seconds = float(end) - float(start)
+rows, out, ok, skip = int(rows), int(out), int(ok), int(skip)
+print(f"rows in {rows:,}, rows out {out:,}, OK {ok:,}; {seconds:.1f} s: {rows / seconds:,.0f} rows/s")
+before, after, total, pauses = [], [], [], []
+for line in open(gclog).read().splitlines()[skip:]:
+    m = re.search(r"Pause.* (\d+)M->(\d+)M\((\d+)M\) ([\d.]+)ms", line)
+    if m:
+        before.append(int(m[1])); after.append(int(m[2])); total.append(int(m[3])); pauses.append(float(m[4]))
+if before:
+    n = len(after)
+    print(f"GC during the batch: {n} pauses, heap before GC max {max(before)} MiB, after GC max {max(after)} MiB "
+          f"(first {after[0]}, last {after[-1]}), committed max {max(total)} MiB, pause max {max(pauses):.1f} ms")
+try:
+    hwm = [l for l in open(f"/proc/{pid}/status") if l.startswith("VmHWM")][0].split()[1]
+    print(f"process peak RSS {int(hwm) / 1024:.0f} MiB")
+except OSError:
+    pass
+PY

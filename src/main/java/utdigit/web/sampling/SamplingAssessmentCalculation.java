@@ -1,0 +1,105 @@
+package utdigit.web.sampling;
+
+import org.springframework.stereotype.Component;
+import utdigit.core.common.CalculationException;
+import utdigit.core.materials.VelocitySource;
+import utdigit.core.sampling.SamplingCalculator;
+import utdigit.core.sampling.SamplingInput;
+import utdigit.core.sampling.SamplingResult;
+import utdigit.web.common.Calculation;
+import utdigit.web.common.FieldErrors;
+import utdigit.web.common.Mirrors;
+import utdigit.web.common.ResultNotes;
+import utdigit.web.common.VelocitySourceView;
+
+/**
+ * Request to core input, core result to answer, for sampling assessments. The inch mirrors of the
+ * TFM lengths and the velocity's three forms are resolved here, so that the core sees lengths in mm
+ * and a velocity in m/s; a failure the core reports on a millimetre input the caller gave in inches
+ * is pointed at the inch input.
+ */
+@Component
+class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentRequest> {
+    static final String NAME = "sampling-assessments";
+
+    /** Said when a velocity comes without a TFM figure that uses it (as the core says it). */
+    private static final String VELOCITY_NOT_APPLICABLE = "a velocity applies only to the TFM grid figures "
+            + "(tfm_grid_spacing, or tfm_lateral_grid_spacing with tfm_aperture and tfm_depth)";
+
+    @Override
+    public String name() {
+        return NAME;
+    }
+
+    @Override
+    public Class<SamplingAssessmentRequest> requestType() {
+        return SamplingAssessmentRequest.class;
+    }
+
+    /**
+     * A core input named in mm (tfm_grid_spacing_mm) or by its base name points at the form the
+     * caller sent (tfm_grid_spacing_in when given in inches); a velocity at its source.
+     */
+    @Override
+    public String pointer(String coreField, SamplingAssessmentRequest q) {
+        String base = coreField.endsWith("_mm") ? coreField.substring(0, coreField.length() - 3) : coreField;
+        return switch (base) {
+            case "tfm_grid_spacing" -> Mirrors.lengthPointer(base, q.tfmGridSpacingIn());
+            case "tfm_lateral_grid_spacing" -> Mirrors.lengthPointer(base, q.tfmLateralGridSpacingIn());
+            case "tfm_aperture" -> Mirrors.lengthPointer(base, q.tfmApertureIn());
+            case "tfm_depth" -> Mirrors.lengthPointer(base, q.tfmDepthIn());
+            case "velocity", "velocity_m_per_s" -> Mirrors.velocityPointer(q);
+            default -> Calculation.super.pointer(coreField, q);
+        };
+    }
+
+    @Override
+    public SamplingAssessmentResponse answer(SamplingAssessmentRequest q) {
+        FieldErrors errors = FieldErrors.create();
+        Double gridMm = Mirrors.lengthMm(errors, "tfm_grid_spacing", q.tfmGridSpacingMm(), q.tfmGridSpacingIn(), false);
+        Double lateralMm = Mirrors.lengthMm(errors, "tfm_lateral_grid_spacing", q.tfmLateralGridSpacingMm(),
+                q.tfmLateralGridSpacingIn(), false);
+        Double apertureMm = Mirrors.lengthMm(errors, "tfm_aperture", q.tfmApertureMm(), q.tfmApertureIn(), false);
+        Double depthMm = Mirrors.lengthMm(errors, "tfm_depth", q.tfmDepthMm(), q.tfmDepthIn(), false);
+        VelocitySource velocity = null;
+        CalculationException velocityImpossible = null;
+        try {
+            velocity = Mirrors.velocity(errors, q, false);
+        } catch (CalculationException e) {
+            velocityImpossible = e; // a 422 (water with SHEAR) waits for the 400s of the other fields
+        }
+        errors.throwIfAny();
+        if (velocityImpossible != null) {
+            boolean tfmGiven = q.tfmGridSpacingMm() != null || q.tfmGridSpacingIn() != null
+                    || q.tfmLateralGridSpacingMm() != null || q.tfmLateralGridSpacingIn() != null
+                    || q.tfmApertureMm() != null || q.tfmApertureIn() != null
+                    || q.tfmDepthMm() != null || q.tfmDepthIn() != null;
+            throw tfmGiven ? velocityImpossible : CalculationException.notApplicable("velocity", VELOCITY_NOT_APPLICABLE);
+        }
+        Double velocityMPerS = velocity == null ? null : velocity.velocityMPerS();
+
+        SamplingResult r = SamplingCalculator.compute(SamplingInput.of(q.samplingFrequencyMhz(), q.frequencyMhz())
+                .withDecimation(q.decimationFactor(), q.decimationMode())
+                .withBandwidthPercent(q.bandwidthPercent())
+                .withCentreFrequencyConvention(q.centreFrequencyConvention())
+                .withSignal(q.signal())
+                .withPeakReading(q.peakReading())
+                .withAmplitudeToleranceDb(q.amplitudeToleranceDb())
+                .withTfmGridSpacingMm(gridMm)
+                .withVelocityMPerS(velocityMPerS)
+                .withTfmImage(q.tfmImage())
+                .withTfmLateral(lateralMm, apertureMm, depthMm));
+
+        SamplingAssessmentRequest inputs = new SamplingAssessmentRequest(q.samplingFrequencyMhz(), q.frequencyMhz(),
+                r.decimationFactor(), r.decimationMode(), q.bandwidthPercent(), r.centreFrequencyConvention(),
+                r.signal(), r.peakReading(), q.amplitudeToleranceDb(), gridMm, null, velocityMPerS, null, null, null,
+                null, r.tfmImage(), lateralMm, null, apertureMm, null, depthMm, null);
+        return new SamplingAssessmentResponse(r.effectiveSamplingFrequencyMhz(), r.samplingIntervalNs(),
+                r.samplesPerPeriod(), r.samplesPerPeriodUpper(), r.nyquistFrequencyMhz(), r.spectralLevelAtNyquistDb(),
+                r.energyAboveNyquistFraction(), r.sineAmplitudeLossDb(), r.pulseAmplitudeLossDb(), r.timingErrorNs(),
+                r.timingStandardUncertaintyNs(), r.requiredSamplesPerPeriod(), r.requiredSamplingFrequencyMhz(),
+                r.requiredSamplingFrequencyPulseMhz(), r.tfmGridAmplitudeLossDb(), r.tfmMaxGridSpacingMm(),
+                r.tfmLateralAmplitudeLossDb(), inputs, VelocitySourceView.of(velocity),
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+    }
+}

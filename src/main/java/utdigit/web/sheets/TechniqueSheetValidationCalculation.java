@@ -1,0 +1,181 @@
+package utdigit.web.sheets;
+
+import java.util.Map;
+import org.springframework.stereotype.Component;
+import utdigit.core.materials.VelocitySource;
+import utdigit.core.rules.Finding;
+import utdigit.core.rules.RequirementProfile;
+import utdigit.core.sheets.SheetEvaluator;
+import utdigit.core.sheets.SheetInput;
+import utdigit.core.sheets.SheetResult;
+import utdigit.web.common.Calculation;
+import utdigit.web.common.FieldErrors;
+import utdigit.web.common.InputProblem;
+import utdigit.web.common.Mirrors;
+import utdigit.web.common.ResultNotes;
+import utdigit.web.common.VelocitySourceView;
+import utdigit.web.rules.ProfileCatalog;
+
+/**
+ * A technique sheet to its verdict: the sections' mirrors resolved, the profile looked up, every
+ * metric computed by the core calculators through {@link SheetEvaluator}, the rules checked.
+ */
+@Component
+class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetRequest> {
+    static final String NAME = "technique-sheet-validations";
+    static final String DEFAULT_PROFILE = "common-practice";
+
+    /** Where each input the core calculators name lives in a sheet. */
+    private static final Map<String, String> SHEET_POINTERS = Map.ofEntries(
+            Map.entry("frequency_mhz", "/probe/frequency_mhz"),
+            Map.entry("bandwidth_percent", "/probe/bandwidth_percent"),
+            Map.entry("element_diameter_mm", "/probe/element_diameter_mm"),
+            Map.entry("velocity_m_per_s", "/material/velocity_m_per_s"),
+            Map.entry("velocity", "/material/velocity_m_per_s"),
+            Map.entry("wave_mode", "/material/wave_mode"),
+            Map.entry("material", "/material/material"),
+            Map.entry("velocity_uncertainty_m_per_s", "/material/velocity_uncertainty_m_per_s"),
+            Map.entry("velocity_uncertainty_percent", "/material/velocity_uncertainty_percent"),
+            Map.entry("thickness", "/material/thickness_mm"),
+            Map.entry("nominal_thickness", "/material/thickness_mm"),
+            Map.entry("refracted_angle_deg", "/material/refracted_angle_deg"),
+            Map.entry("required_resolution", "/evaluation/thickness_tolerance_mm"),
+            Map.entry("probe_centre_separation", "/tofd/probe_centre_separation_mm"),
+            Map.entry("depth", "/tofd/depth_of_interest_mm"),
+            Map.entry("tfm_grid_spacing_mm", "/tfm/grid_spacing_mm"),
+            Map.entry("tfm_lateral_grid_spacing_mm", "/tfm/lateral_grid_spacing_mm"),
+            Map.entry("tfm_aperture_mm", "/tfm/aperture_mm"),
+            Map.entry("tfm_depth_mm", "/tfm/depth_mm"),
+            Map.entry("tfm_image", "/tfm/image"),
+            Map.entry("reference_height_percent_fsh", "/evaluation/reference_height_percent_fsh"),
+            Map.entry("evaluation_level_db", "/evaluation/evaluation_level_db"),
+            Map.entry("amplitude_tolerance_db", "/evaluation/amplitude_tolerance_db"));
+
+    private static final java.util.Set<String> DIGITIZATION = java.util.Set.of("sampling_frequency_mhz",
+            "decimation_factor", "bit_depth", "digitized_signal", "quantizer", "code_mapping", "decimation_mode",
+            "signal", "peak_reading");
+
+    private final ProfileCatalog profiles;
+
+    TechniqueSheetValidationCalculation(ProfileCatalog profiles) {
+        this.profiles = profiles;
+    }
+
+    @Override
+    public String name() {
+        return NAME;
+    }
+
+    @Override
+    public Class<TechniqueSheetRequest> requestType() {
+        return TechniqueSheetRequest.class;
+    }
+
+    @Override
+    public String pointer(String coreField, TechniqueSheetRequest q) {
+        String p = SHEET_POINTERS.get(coreField);
+        if (p != null) {
+            return p;
+        }
+        if (DIGITIZATION.contains(coreField)) {
+            return "/digitization/" + coreField;
+        }
+        if (coreField.startsWith("gate_length") ) {
+            return "/acquisition/" + (q.acquisition() != null && q.acquisition().gateLengthUs() != null
+                    ? "gate_length_us" : "gate_length_mm");
+        }
+        return "/acquisition/" + coreField;
+    }
+
+    @Override
+    public TechniqueSheetValidationResponse answer(TechniqueSheetRequest q) {
+        String profileId = q.profileId() == null ? DEFAULT_PROFILE : q.profileId();
+        RequirementProfile profile = profiles.find(profileId).orElseThrow(() -> InputProblem.invalid("/profile_id",
+                "unknown requirement profile '" + profileId + "'; see GET /api/requirement-profiles"));
+
+        FieldErrors errors = FieldErrors.create();
+        TechniqueSheetRequest.Probe p = q.probe() == null ? new TechniqueSheetRequest.Probe(null, null, null, null, null)
+                : q.probe();
+        TechniqueSheetRequest.Material m = q.material() == null ? new TechniqueSheetRequest.Material(null, null, null,
+                null, null, null, null, null, null, null) : q.material();
+        TechniqueSheetRequest.Acquisition a = q.acquisition() == null ? new TechniqueSheetRequest.Acquisition(null, null,
+                null, null, null, null, null, null, null, null, null, null, null, null, null, null, null) : q.acquisition();
+        TechniqueSheetRequest.Tofd t = q.tofd() == null ? new TechniqueSheetRequest.Tofd(null, null, null, null) : q.tofd();
+
+        FieldErrors probeErrors = errors.section("probe");
+        Double diameterMm = Mirrors.lengthMm(probeErrors, "element_diameter", p.elementDiameterMm(), p.elementDiameterIn(), false);
+        FieldErrors materialErrors = errors.section("material");
+        VelocitySource velocity = Mirrors.velocity(materialErrors, m, false);
+        Double thicknessMm = Mirrors.lengthMm(materialErrors, "thickness", m.thicknessMm(), m.thicknessIn(), false);
+        if (m.velocityUncertaintyMPerS() != null && m.velocityUncertaintyPercent() != null) {
+            String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s or velocity_uncertainty_percent";
+            materialErrors.add("velocity_uncertainty_m_per_s", detail).add("velocity_uncertainty_percent", detail);
+        }
+        FieldErrors acqErrors = errors.section("acquisition");
+        Double incrementMm = Mirrors.lengthMm(acqErrors, "scan_increment", a.scanIncrementMm(), a.scanIncrementIn(), false);
+        Double lengthMm = Mirrors.lengthMm(acqErrors, "scan_length", a.scanLengthMm(), a.scanLengthIn(), false);
+        Double gateMm = Mirrors.lengthMm(acqErrors, "gate_length", a.gateLengthMm(), a.gateLengthIn(), false);
+        if (a.gateLengthUs() != null && gateMm != null) {
+            String detail = "give the gate once: gate_length_us or gate_length_mm/_in";
+            acqErrors.add("gate_length_us", detail).add(a.gateLengthMm() != null ? "gate_length_mm" : "gate_length_in", detail);
+        }
+        Double soundPathMm = Mirrors.lengthMm(acqErrors, "max_sound_path", a.maxSoundPathMm(), a.maxSoundPathIn(), false);
+        FieldErrors tofdErrors = errors.section("tofd");
+        Double pcsMm = Mirrors.lengthMm(tofdErrors, "probe_centre_separation", t.probeCentreSeparationMm(),
+                t.probeCentreSeparationIn(), false);
+        Double depthMm = Mirrors.lengthMm(tofdErrors, "depth_of_interest", t.depthOfInterestMm(), t.depthOfInterestIn(), false);
+        if (velocity == null && (gateMm != null || soundPathMm != null)) {
+            materialErrors.add("velocity_m_per_s", "a gate or sound path in mm needs the part's velocity: give "
+                    + "velocity_m_per_s, velocity_in_per_us or material");
+        }
+        errors.throwIfAny();
+
+        Double c = velocity == null ? null : velocity.velocityMPerS();
+        TechniqueSheetRequest.Digitization d = q.digitization();
+        TechniqueSheetRequest.Tfm tfm = q.tfm();
+        TechniqueSheetRequest.Evaluation e = q.evaluation();
+        SheetInput sheet = new SheetInput(q.sheetId(), q.revision(), q.technique(),
+                new SheetInput.Probe(p.frequencyMhz(), p.bandwidthPercent(), diameterMm, p.elementCount()),
+                new SheetInput.Part(c, m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm,
+                        m.refractedAngleDeg()),
+                d == null ? null : new SheetInput.Digitization(d.samplingFrequencyMhz(), d.decimationFactor(),
+                        d.bitDepth(), d.digitizedSignal(), d.quantizer(), d.codeMapping(), d.decimationMode(), d.signal()),
+                new SheetInput.Acquisition(a.pulseRepetitionFrequencyHz(), a.focalLaws(), a.fmcElementCount(),
+                        a.capture(), a.averaging(), incrementMm, lengthMm, a.plannedScanSpeedMmPerS(), a.gateLengthUs(),
+                        gateMm, soundPathMm, a.maxRoundTripUs(), a.wraparoundDecayFactor()),
+                new SheetInput.Tofd(pcsMm, depthMm),
+                tfm == null ? null : new SheetInput.Tfm(tfm.gridSpacingMm(), tfm.lateralGridSpacingMm(),
+                        tfm.apertureMm(), tfm.depthMm(), tfm.image()),
+                e == null ? null : new SheetInput.Evaluation(e.referenceHeightPercentFsh(), e.evaluationLevelDb(),
+                        e.amplitudeToleranceDb(), e.thicknessToleranceMm()));
+
+        SheetResult r = SheetEvaluator.evaluate(sheet, profile);
+
+        TechniqueSheetRequest inputs = new TechniqueSheetRequest(q.sheetId(), q.revision(), q.technique(), profileId,
+                q.probe() == null ? null : new TechniqueSheetRequest.Probe(p.frequencyMhz(), p.bandwidthPercent(),
+                        diameterMm, null, p.elementCount()),
+                q.material() == null ? null : new TechniqueSheetRequest.Material(null, null, null, c, null,
+                        m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm, null,
+                        m.refractedAngleDeg()),
+                d,
+                q.acquisition() == null ? null : new TechniqueSheetRequest.Acquisition(a.pulseRepetitionFrequencyHz(),
+                        a.focalLaws(), a.fmcElementCount(), a.capture(), a.averaging(), incrementMm, null, lengthMm,
+                        null, a.plannedScanSpeedMmPerS(), a.gateLengthUs(), gateMm, null, soundPathMm, null,
+                        a.maxRoundTripUs(), a.wraparoundDecayFactor()),
+                q.tofd() == null ? null : new TechniqueSheetRequest.Tofd(pcsMm, null, depthMm, null),
+                tfm, e);
+
+        return new TechniqueSheetValidationResponse(q.sheetId(), q.revision(),
+                new TechniqueSheetValidationResponse.ProfileRef(profile.id(), profile.version(), profile.sha256(),
+                        profile.verificationStatus()),
+                r.verdict(), r.findings().stream().map(TechniqueSheetValidationCalculation::view).toList(),
+                r.values(), r.cautions(), inputs, VelocitySourceView.of(velocity),
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+    }
+
+    private static TechniqueSheetValidationResponse.FindingView view(Finding f) {
+        return new TechniqueSheetValidationResponse.FindingView(f.ruleId(), f.title(), f.metric(), f.actual(),
+                f.limit(), f.limitMetric(), f.comparison(), f.verdict(), f.source(),
+                f.missing().isEmpty() ? null : f.missing());
+    }
+}

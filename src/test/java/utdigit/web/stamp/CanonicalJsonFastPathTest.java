@@ -1,0 +1,112 @@
+package utdigit.web.stamp;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.SplittableRandom;
+import java.util.function.DoubleSupplier;
+import org.junit.jupiter.api.DisplayName;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/**
+ * The fast path of {@link CanonicalJson#number} gives the same text as the BigDecimal reference
+ * path (the definition: the exact value rounded half-even at precision 1..17, the first that reads
+ * back), on a million seeded doubles and on values where Java 17's Double.toString is not the
+ * shortest form.
+ */
+class CanonicalJsonFastPathTest {
+    private static final long SEED = 20261201L;
+
+    @Test
+    @DisplayName("fast path equals the reference path on 1,000,000 seeded random doubles")
+    void fastPathEqualsReferenceOnAMillionDoubles() {
+        SplittableRandom random = new SplittableRandom(SEED);
+        List<String> mismatches = new ArrayList<>();
+        // every finite bit pattern, both signs
+        check(250_000, () -> finiteBits(random), mismatches);
+        // magnitudes of typical answers, log-uniform over 1e-7..1e9
+        check(400_000, () -> sign(random) * StrictMath.pow(10.0, -7.0 + 16.0 * random.nextDouble()), mismatches);
+        // short decimals such as inputs and their mirrors (5920, 0.2, 25.4, 1.5e-3)
+        check(200_000, () -> sign(random) * random.nextLong(1, 10_000_000) / StrictMath.pow(10.0, random.nextInt(0, 12)),
+                mismatches);
+        // neighbours of short decimals and of powers of two (asymmetric gaps, near ties)
+        check(150_000, () -> {
+            double base = random.nextBoolean()
+                    ? random.nextLong(1, 100_000) / StrictMath.pow(10.0, random.nextInt(0, 8))
+                    : StrictMath.scalb(1.0, random.nextInt(-60, 80));
+            long steps = random.nextLong(-3, 4);
+            return Double.longBitsToDouble(Double.doubleToRawLongBits(base) + steps);
+        }, mismatches);
+        assertThat(mismatches).isEmpty();
+    }
+
+    @Test
+    @DisplayName("the fast path answers (does not hand over) nearly all answer-like numbers")
+    void fastPathAnswersTypicalNumbers() {
+        // Not a correctness check (the reference would be right anyway) but a check that the fast
+        // path is in use: without it, the test above would pass with a fast path that never answers.
+        SplittableRandom random = new SplittableRandom(SEED + 1);
+        int answered = 0;
+        int total = 100_000;
+        for (int i = 0; i < total; i++) {
+            double x = StrictMath.pow(10.0, -7.0 + 16.0 * random.nextDouble());
+            CanonicalJson.Digits fast = CanonicalJson.fastDigits(x);
+            if (fast != null) {
+                answered++;
+                assertThat(fast).isEqualTo(CanonicalJson.referenceDigits(x));
+            }
+        }
+        assertThat(answered).isGreaterThan(total * 99 / 100);
+    }
+
+    @ParameterizedTest
+    @ValueSource(doubles = {
+        // Java 17 writes these with more digits than the shortest (found by comparing the paths):
+        1e23, 2e23, 8.41e21, 4.35e-6, 2.82879384806159e17, 1.387364135037754e18, 1.45800632428665e17,
+        1.9400994884341945e25, 3.160701594026542e17, 2.4393383966365738e17, 2.2770711729136488e16,
+        // limits of the double range and of the fast path, subnormals
+        Double.MIN_VALUE, Double.MIN_NORMAL, Double.MAX_VALUE, 1e-300, 1e300, 9.999999999999999e299,
+        // plain/exponent switch points of ECMA-262 (1e-7, 1e21) and their neighbours
+        1e-7, 9.999999999999999e-8, 1e21, 9.999999999999999e20, 1.0000000000000001e21,
+        // powers of two and their neighbours
+        0.5, 1.0, 2.0, 1024.0, 9007199254740992.0, 9007199254740994.0, 0.1, 0.2, 0.30000000000000004,
+        5920.0, 25.4, 1.184, 0.046614173228346455, 333333333.3333333})
+    void fastPathEqualsReferenceOnHardCases(double x) {
+        for (double y : new double[] {x, -x, Math.nextUp(x), Math.nextDown(x)}) {
+            if (Double.isFinite(y)) {
+                assertThat(CanonicalJson.number(y)).as("%s", y).isEqualTo(CanonicalJson.referenceNumber(y));
+            }
+        }
+    }
+
+    private static void check(int count, DoubleSupplier values, List<String> mismatches) {
+        for (int i = 0; i < count; i++) {
+            double x = values.getAsDouble();
+            if (!Double.isFinite(x)) {
+                continue;
+            }
+            String fast = CanonicalJson.number(x);
+            String reference = CanonicalJson.referenceNumber(x);
+            if (!fast.equals(reference) && mismatches.size() < 20) {
+                mismatches.add(Double.toString(x) + " (bits " + Long.toHexString(Double.doubleToRawLongBits(x))
+                        + "): fast " + fast + ", reference " + reference);
+            }
+        }
+    }
+
+    private static double finiteBits(SplittableRandom random) {
+        while (true) {
+            double x = Double.longBitsToDouble(random.nextLong());
+            if (Double.isFinite(x)) {
+                return x;
+            }
+        }
+    }
+
+    private static double sign(SplittableRandom random) {
+        return random.nextBoolean() ? 1.0 : -1.0;
+    }
+}
