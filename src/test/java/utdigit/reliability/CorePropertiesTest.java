@@ -50,17 +50,7 @@ class CorePropertiesTest extends ApiTest {
      * Failures already reported, each with its reproduction; printed on every run and not counted,
      * so that any other failure fails the test. Remove an entry when its defect is fixed.
      */
-    static final Map<String, String> KNOWN_DEFECTS = Map.of(
-            "pulse-parameters: java.lang.NumberFormatException: Infinite or NaN",
-            "PulseCalculator.fmt formats k lambda / D = Infinity with new BigDecimal(x) when element_diameter is "
-                    + "the smallest positive double (element_diameter_in 4.9E-324): a 500 instead of an answer "
-                    + "with the beam-spread warning",
-            "acquisition-budgets: java.lang.NumberFormatException: Infinite or NaN",
-            "AcquisitionCalculator.fmt formats an infinite value with new BigDecimal(x) when scan_increment_mm is "
-                    + "4.9E-324: a 500",
-            "pulse-parameters: org.apache.commons.math3.exception.NumberIsTooLargeException: endpoints do not "
-                    + "specify an interval: [0, 0]",
-            "frequency_mhz 4.9E-324 with bandwidth_percent: the band-edge solver gets the interval [0, 0]: a 500");
+    static final Map<String, String> KNOWN_DEFECTS = Map.of();
 
     @Test
     void validFiniteInputsGiveFiniteAnswersOrATypedRefusal() throws Exception {
