@@ -19,8 +19,7 @@ class BadProfileStartupTest {
 
     private static Throwable startWith(Path directory) {
         return catchThrowable(() -> new SpringApplicationBuilder(UtDigitizationApplication.class)
-                .properties("server.port=0", "utdigit.profiles.directory=" + directory)
-                .run().close());
+                .run("--server.port=0", "--utdigit.profiles.directory=" + directory).close());
     }
 
     private static ProfileException profileProblem(Throwable failure) {
