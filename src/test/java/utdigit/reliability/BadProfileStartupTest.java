@@ -18,9 +18,9 @@ import utdigit.web.rules.ProfileException;
 class BadProfileStartupTest {
 
     private static Throwable startWith(Path directory) {
+        // Command-line arguments: they take precedence over application.yml (default properties do not).
         return catchThrowable(() -> new SpringApplicationBuilder(UtDigitizationApplication.class)
-                .properties("server.port=0", "utdigit.profiles.directory=" + directory)
-                .run().close());
+                .run("--server.port=0", "--utdigit.profiles.directory=" + directory).close());
     }
 
     private static ProfileException profileProblem(Throwable failure) {

@@ -65,7 +65,7 @@ class RestartAndShutdownTest extends ApiTest {
         List<String[]> requests = requests();
         List<String> serving = stamps(port, requests);
         ConfigurableApplicationContext fresh = new SpringApplicationBuilder(UtDigitizationApplication.class)
-                .properties("server.port=0").run();
+                .run("--server.port=0");
         int freshPort = ((WebServerApplicationContext) fresh).getWebServer().getPort();
         try {
             List<String> restarted = stamps(freshPort, requests);
