@@ -25,6 +25,7 @@ import utdigit.web.common.FieldError;
 import utdigit.web.common.InputProblem;
 import utdigit.web.common.Problems;
 import utdigit.web.common.ProblemType;
+import utdigit.web.metrics.ServiceMetrics;
 
 /**
  * The one streaming component behind every batch endpoint: reads rows one at a time in the body's
@@ -53,14 +54,16 @@ class BatchProcessor {
     private final JsonMapper mapper;
     private final CsvMapper csv;
     private final BatchLimits limits;
+    private final ServiceMetrics metrics;
     private final Map<String, RecordShape> requestShapes = new ConcurrentHashMap<>();
     private final Map<String, List<String>> answerColumns = new ConcurrentHashMap<>();
 
-    BatchProcessor(CalculationRunner runner, JsonMapper mapper, BatchLimits limits) {
+    BatchProcessor(CalculationRunner runner, JsonMapper mapper, BatchLimits limits, ServiceMetrics metrics) {
         this.runner = runner;
         this.mapper = mapper;
         this.csv = CsvMapper.builder().build();
         this.limits = limits;
+        this.metrics = metrics;
     }
 
     BatchLimits limits() {
@@ -93,7 +96,8 @@ class BatchProcessor {
     }
 
     /** Answers every row of {@code rows} into {@code sink}, in order. */
-    long process(String calculation, RowSource rows, RowSink sink, OutputStream flushTarget) throws IOException {
+    long process(String calculation, RowSource rows, RowSink answers, OutputStream flushTarget) throws IOException {
+        RowSink sink = counted(calculation, answers);
         long answered = 0;
         try (rows) {
             while (true) {
@@ -132,6 +136,22 @@ class BatchProcessor {
         }
         sink.finish();
         return answered;
+    }
+
+    /** {@code sink}, counting every row it writes by its status ({@link ServiceMetrics#BATCH_ROWS}). */
+    private RowSink counted(String calculation, RowSink sink) {
+        return new RowSink() {
+            @Override
+            public void write(ObjectNode outputRow) throws IOException {
+                sink.write(outputRow);
+                metrics.batchRow(calculation, outputRow.path("status").asString());
+            }
+
+            @Override
+            public void finish() throws IOException {
+                sink.finish();
+            }
+        };
     }
 
     private static Row nextOrLimit(RowSource rows) {

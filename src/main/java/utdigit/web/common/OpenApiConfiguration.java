@@ -37,7 +37,8 @@ class OpenApiConfiguration {
                 .title("UT digitization calculation service")
                 .version(version)
                 .description(DESCRIPTION)
-                .license(new License().name("Apache-2.0").identifier("Apache-2.0")));
+                .license(new License().name("Apache-2.0").identifier("Apache-2.0")))
+                .servers(java.util.List.of(new io.swagger.v3.oas.models.servers.Server().url("/")));
     }
 
     @Bean
