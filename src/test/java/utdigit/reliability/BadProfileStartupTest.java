@@ -18,6 +18,7 @@ import utdigit.web.rules.ProfileException;
 class BadProfileStartupTest {
 
     private static Throwable startWith(Path directory) {
+        // Command-line arguments: they take precedence over application.yml (default properties do not).
         return catchThrowable(() -> new SpringApplicationBuilder(UtDigitizationApplication.class)
                 .run("--server.port=0", "--utdigit.profiles.directory=" + directory).close());
     }
@@ -36,11 +37,11 @@ class BadProfileStartupTest {
         Path file = dir.resolve("site-rules.yaml");
         Files.writeString(file, """
                 id: site-rules
-                title: Site rules
+                title: "Site rules
                 rules:
                   - id: r1
                     metric: samples_per_period
-                    at_least: [5
+                    at_least: 5
                 """);
         Throwable failure = startWith(dir);
         ProfileException p = profileProblem(failure);
@@ -48,6 +49,20 @@ class BadProfileStartupTest {
         assertThat(p.line()).isPositive();
         assertThat(p.getMessage()).contains("site-rules.yaml");
         System.out.println("Bad profile start-up: failed with \"" + p.getMessage() + "\"");
+    }
+
+    @Test
+    void profileThatIsValidYamlButNotAProfileStopsStartUpToo(@TempDir Path dir) throws Exception {
+        Files.writeString(dir.resolve("numbers.yaml"), """
+                id: numbers
+                title: Numbers
+                rules:
+                  - id: r1
+                    metric: samples_per_period
+                    at_least: [5, 6]
+                """);
+        ProfileException p = profileProblem(startWith(dir));
+        assertThat(p.getMessage()).contains("numbers.yaml").contains("line 6, column 15");
     }
 
     @Test
