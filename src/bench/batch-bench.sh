@@ -31,7 +31,8 @@ python3 src/bench/batch-csv.py "$CALC" "$ROWS" >"$WORK/body.csv"
 java $JAVA_OPTS -Xlog:gc:file="$WORK/gc.log" -jar "$JAR" --server.port="$PORT" --server.address=127.0.0.1 \
   >"$WORK/service.log" 2>&1 &
 SERVICE=$!
-trap 'kill "$SERVICE" 2>/dev/null; wait "$SERVICE" 2>/dev/null; rm -rf "$WORK"; true' EXIT
+cleanup() { local rc=$?; kill "$SERVICE" 2>/dev/null || true; wait "$SERVICE" 2>/dev/null || true; rm -rf "$WORK"; exit "$rc"; }
+trap cleanup EXIT
 for _ in $(seq 1 240); do
   curl -fsS -o /dev/null "http://127.0.0.1:$PORT/actuator/health/readiness" 2>/dev/null && break
   kill -0 "$SERVICE" 2>/dev/null || { cat "$WORK/service.log"; exit 1; }

@@ -33,6 +33,19 @@ def sampling(r):
     return f"{r.choice((50, 62.5, 100, 125, 200))},{r.choice((2.25, 5, 7.5, 10))},{r.uniform(30, 90):.1f}"
 
 
+@generator("technique-sheet-validations",
+           "sheet_id,technique,profile_id,probe.frequency_mhz,probe.bandwidth_percent,probe.element_diameter_mm,"
+           "material.velocity_m_per_s,material.thickness_mm,digitization.sampling_frequency_mhz,"
+           "digitization.bit_depth,acquisition.pulse_repetition_frequency_hz,acquisition.scan_increment_mm,"
+           "acquisition.gate_length_us,evaluation.reference_height_percent_fsh,evaluation.evaluation_level_db,"
+           "evaluation.amplitude_tolerance_db")
+def sheet(r):
+    # a pulse-echo sheet with every section the common-practice profile reads
+    return (f"S-{r.randrange(10**9)},PULSE_ECHO,common-practice,{r.choice((2.25, 5, 7.5))},{r.uniform(40, 80):.0f},"
+            f"{r.choice((6, 10, 12.7))},5920,{r.uniform(6, 60):.1f},{r.choice((50, 100, 125))},"
+            f"{r.choice((8, 12, 14))},{r.choice((500, 1000, 2000))},1,{r.choice((20, 30, 40))},80,-6,2")
+
+
 def main():
     name, rows = sys.argv[1], int(sys.argv[2])
     header, row = GENERATORS[name]

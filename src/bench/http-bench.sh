@@ -28,7 +28,8 @@ LOG="$WORK/service.log"
 # shellcheck disable=SC2086
 java ${JAVA_OPTS:-} -jar "$JAR" --server.port="$PORT" --server.address=127.0.0.1 >"$LOG" 2>&1 &
 SERVICE=$!
-trap 'kill "$SERVICE" 2>/dev/null; wait "$SERVICE" 2>/dev/null; rm -rf "$WORK"; true' EXIT
+cleanup() { local rc=$?; kill "$SERVICE" 2>/dev/null || true; wait "$SERVICE" 2>/dev/null || true; rm -rf "$WORK"; exit "$rc"; }
+trap cleanup EXIT
 for _ in $(seq 1 240); do
   curl -fsS -o /dev/null "$BASE/actuator/health/readiness" 2>/dev/null && break
   kill -0 "$SERVICE" 2>/dev/null || { cat "$LOG"; echo "the service did not start" >&2; exit 1; }

@@ -20,7 +20,8 @@ WORK="$(mktemp -d)"
 java -XX:FlightRecorderOptions=stackdepth=512 -XX:StartFlightRecording=settings=profile,filename="$JFR",dumponexit=true \
   -jar "$JAR" --server.port="$PORT" --server.address=127.0.0.1 >"$WORK/log" 2>&1 &
 SERVICE=$!
-trap 'kill "$SERVICE" 2>/dev/null; wait "$SERVICE" 2>/dev/null; rm -rf "$WORK"; true' EXIT
+cleanup() { local rc=$?; kill "$SERVICE" 2>/dev/null || true; wait "$SERVICE" 2>/dev/null || true; rm -rf "$WORK"; exit "$rc"; }
+trap cleanup EXIT
 for _ in $(seq 1 240); do
   curl -fsS -o /dev/null "http://127.0.0.1:$PORT/actuator/health/readiness" 2>/dev/null && break
   sleep 0.5

@@ -46,51 +46,84 @@ class CorePropertiesTest extends ApiTest {
     @Autowired
     JsonMapper mapper;
 
+    /**
+     * Failures already reported, each with its reproduction; printed on every run and not counted,
+     * so that any other failure fails the test. Remove an entry when its defect is fixed.
+     */
+    static final Map<String, String> KNOWN_DEFECTS = Map.of();
+
     @Test
-    void validFiniteInputsGiveFiniteAnswersOrATypedRefusal() {
+    void validFiniteInputsGiveFiniteAnswersOrATypedRefusal() throws Exception {
         List<String> failures = new ArrayList<>();
+        Map<String, Integer> known = new java.util.TreeMap<>();
         StringBuilder figures = new StringBuilder();
         int total = 0;
         for (Calculation<?> c : calculations) {
-            int[] counts = run(c, new RequestGenerator(SEED ^ c.name().hashCode()), failures);
+            int[] counts = run(c, new RequestGenerator(SEED ^ c.name().hashCode()), failures, known);
             total += counts[0];
-            figures.append(String.format("%n  %-28s %5d generated, %5d valid, %5d answered finite, %5d refused typed",
-                    c.name(), counts[0], counts[1], counts[2], counts[3]));
+            figures.append(String.format("%n  %-28s %5d generated (half varied from an accepted request), "
+                            + "%5d answered, %5d refused typed, %4d answers with a non-finite value replaced at "
+                            + "the boundary", c.name(), counts[0], counts[1], counts[2], counts[3]));
         }
-        System.out.println("Finite-output property: " + total + " requests, " + failures.size() + " failures" + figures);
+        System.out.println("Finite-output property: " + total + " valid requests through the service path, "
+                + failures.size() + " failures, known defects " + known + figures);
+        known.keySet().forEach(k -> System.out.println("  KNOWN DEFECT " + k + ": " + KNOWN_DEFECTS.get(k)));
         assertThat(failures).isEmpty();
     }
 
-    private <Q> int[] run(Calculation<Q> c, RequestGenerator generator, List<String> failures) {
-        int valid = 0;
+    private <Q> int[] run(Calculation<Q> c, RequestGenerator generator, List<String> failures,
+                          Map<String, Integer> known) throws Exception {
+        Q base = base(c);
         int answered = 0;
         int refused = 0;
+        int replaced = 0;
         for (int i = 0; i < REQUESTS_PER_CALCULATION; i++) {
-            Q request = generator.next(c.requestType());
+            Q request = base != null && i % 2 == 1 ? generator.vary(base) : generator.next(c.requestType());
             try {
                 runner.validate(request);
-            } catch (InputProblem invalid) {
+            } catch (InputProblem outOfRange) {
+                failures.add(c.name() + " generator drew an invalid request " + request + ": " + outOfRange.getMessage());
                 continue;
             }
-            valid++;
             try {
-                Object answer = c.answer(request);
+                ObjectNode answer = runner.run(c.name(), request);
                 List<String> nonFinite = new ArrayList<>();
-                nonFinite(answer, "", nonFinite);
-                if (nonFinite.isEmpty()) {
-                    answered++;
-                } else if (failures.size() < 20) {
-                    failures.add(c.name() + " " + request + " -> non-finite " + nonFinite);
+                nonFinite(mapper.treeToValue(answer, Object.class), "", nonFinite);
+                if (!nonFinite.isEmpty()) {
+                    failures.add(c.name() + " " + request + " -> non-finite in the answer " + nonFinite);
                 }
-            } catch (CalculationException | InputProblem typed) {
+                boolean warned = answer.path("warnings").toString().contains("RESULT_NOT_REPRESENTABLE");
+                List<String> raw = new ArrayList<>();
+                nonFinite(c.answer(request), "", raw);
+                if (!raw.isEmpty()) {
+                    replaced++;
+                    if (!warned) {
+                        failures.add(c.name() + " " + request + " -> " + raw + " replaced without a warning");
+                    }
+                }
+                answered++;
+            } catch (InputProblem typed) {
                 refused++;
             } catch (RuntimeException e) {
-                if (failures.size() < 20) {
+                String key = c.name() + ": " + e;
+                if (KNOWN_DEFECTS.containsKey(key)) {
+                    known.merge(key, 1, Integer::sum);
+                } else if (failures.size() < 20) {
                     failures.add(c.name() + " " + request + " -> " + e);
                 }
             }
         }
-        return new int[] {REQUESTS_PER_CALCULATION, valid, answered, refused};
+        return new int[] {REQUESTS_PER_CALCULATION, answered, refused, replaced};
+    }
+
+    /** The endpoint's example request (api-examples), read into its record, or null. */
+    private <Q> Q base(Calculation<Q> c) throws Exception {
+        Path example = Path.of("api-examples", c.name() + ".json");
+        String json = Files.exists(example) ? Files.readString(example)
+                : c.name().equals("quantization-assessments") ? "{\"bit_depth\": 12, \"signal_height_percent_fsh\": 40, "
+                        + "\"amplitude_tolerance_db\": 1, \"reference_height_percent_fsh\": 80, \"evaluation_level_db\": -14, "
+                        + "\"averaging\": 4}" : null;
+        return json == null ? null : mapper.readValue(json, c.requestType());
     }
 
     /** Every double reachable from an answer record: finite, or absent (null / empty Optional). */
@@ -213,12 +246,14 @@ class CorePropertiesTest extends ApiTest {
     }
 
     @Test
-    void parallelAndSequentialAnswersAreIdenticalBitForBit() {
+    void parallelAndSequentialAnswersAreIdenticalBitForBit() throws Exception {
         List<String[]> requests = new ArrayList<>();
         RequestGenerator generator = new RequestGenerator(SEED);
         for (Calculation<?> c : calculations) {
+            Object base = base(c);
             for (int i = 0; i < 150; i++) {
-                requests.add(new String[] {c.name(), mapper.writeValueAsString(generator.next(c.requestType()))});
+                Object request = base != null ? generator.vary(base) : generator.next(c.requestType());
+                requests.add(new String[] {c.name(), mapper.writeValueAsString(request)});
             }
         }
         List<String> sequential = requests.stream().map(this::stampOrProblem).toList();
@@ -237,6 +272,8 @@ class CorePropertiesTest extends ApiTest {
             return runner.runTree(request[0], mapper.readTree(request[1])).path("stamp").path("sha256").asString();
         } catch (InputProblem p) {
             return "problem " + p.type() + " " + p.getMessage();
+        } catch (RuntimeException e) {
+            return "failure " + e;
         }
     }
 

@@ -31,6 +31,34 @@ final class RequestGenerator {
         return type.cast(record(type));
     }
 
+    /**
+     * A variation of a request the endpoint accepts: each given field is kept or redrawn inside its
+     * range; fields not given stay absent, so the request keeps its shape (technique, mirrors).
+     */
+    <Q> Q vary(Q base) {
+        @SuppressWarnings("unchecked")
+        Class<Q> type = (Class<Q>) base.getClass();
+        RecordComponent[] components = type.getRecordComponents();
+        Object[] values = new Object[components.length];
+        Class<?>[] types = new Class<?>[components.length];
+        try {
+            for (int i = 0; i < components.length; i++) {
+                RecordComponent c = components[i];
+                types[i] = c.getType();
+                var accessor = c.getAccessor();
+                accessor.setAccessible(true);
+                Object v = accessor.invoke(base);
+                boolean redraw = v != null && !(v instanceof String) && random.nextBoolean();
+                values[i] = redraw ? (c.getType().isRecord() ? vary(v) : value(c, field(type, c.getName()))) : v;
+            }
+            var constructor = type.getDeclaredConstructor(types);
+            constructor.setAccessible(true);
+            return constructor.newInstance(values);
+        } catch (ReflectiveOperationException e) {
+            throw new IllegalStateException("cannot vary " + type.getSimpleName(), e);
+        }
+    }
+
     private Object record(Class<?> type) {
         RecordComponent[] components = type.getRecordComponents();
         Map<String, String> chosenOfGroup = new HashMap<>();

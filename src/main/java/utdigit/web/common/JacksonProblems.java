@@ -38,7 +38,7 @@ final class JacksonProblems {
         if (e instanceof StreamConstraintsException) {
             return new InputProblem(ProblemType.INVALID_INPUT, "the body exceeds a read limit of the service "
                     + "(nesting depth, number, string or name length)",
-                    List.of(new FieldError(streamPointer(e), "exceeds a read limit")));
+                    List.of(new FieldError(pointer(e), "exceeds a read limit")));
         }
         if (e instanceof StreamReadException s && s.getOriginalMessage() != null
                 && s.getOriginalMessage().startsWith("Duplicate Object property")) {

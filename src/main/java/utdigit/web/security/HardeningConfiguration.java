@@ -9,7 +9,9 @@ import org.springframework.boot.web.server.WebServerFactoryCustomizer;
 import org.springframework.boot.web.servlet.FilterRegistrationBean;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
+import org.apache.catalina.valves.ErrorReportValve;
 import org.springframework.core.Ordered;
+import tools.jackson.databind.json.JsonMapper;
 
 /**
  * Registers the protections that sit in front of every feature: the security headers filter
@@ -57,9 +59,55 @@ class HardeningConfiguration {
         return registration;
     }
 
-    /** Lets filters close a connection without draining a body they answered early (Tomcat). */
+    /**
+     * Tomcat: lets filters close a connection without draining a body they answered early, and
+     * answers the container's own refusals as problems. Runs after Boot's customizer, which puts an
+     * HTML error report valve on the host; that valve is replaced.
+     */
     @Bean
-    WebServerFactoryCustomizer<TomcatServletWebServerFactory> earlyCloseValve() {
-        return factory -> factory.addContextValves(new EarlyClose.TomcatValve());
+    WebServerFactoryCustomizer<TomcatServletWebServerFactory> tomcatHardening(JsonMapper mapper) {
+        return new TomcatHardening(mapper);
+    }
+
+    @org.springframework.core.annotation.Order(Ordered.LOWEST_PRECEDENCE)
+    record TomcatHardening(JsonMapper mapper) implements WebServerFactoryCustomizer<TomcatServletWebServerFactory>,
+            Ordered {
+        @Override
+        public void customize(TomcatServletWebServerFactory factory) {
+            factory.addContextValves(new EarlyClose.TomcatValve());
+            factory.addContextCustomizers(context -> {
+                var host = context.getParent();
+                if (host == null) {
+                    return;
+                }
+                for (var valve : host.getPipeline().getValves()) {
+                    if (valve instanceof ErrorReportValve) {
+                        host.getPipeline().removeValve(valve);
+                    }
+                }
+                host.getPipeline().addValve(new ProblemReportValve(mapper));
+                if (host instanceof org.apache.catalina.core.StandardHost standard) {
+                    standard.setErrorReportValveClass(NoErrorReport.class.getName());
+                }
+            });
+        }
+
+        @Override
+        public int getOrder() {
+            return Ordered.LOWEST_PRECEDENCE;
+        }
+    }
+
+    /** Stands in for the host's default error report valve: the problem valve does the reporting. */
+    public static final class NoErrorReport extends org.apache.catalina.valves.ValveBase {
+        public NoErrorReport() {
+            super(true);
+        }
+
+        @Override
+        public void invoke(org.apache.catalina.connector.Request request, org.apache.catalina.connector.Response response)
+                throws java.io.IOException, jakarta.servlet.ServletException {
+            getNext().invoke(request, response);
+        }
     }
 }

@@ -1,0 +1,63 @@
+package utdigit.web.security;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import org.apache.catalina.connector.Request;
+import org.apache.catalina.connector.Response;
+import org.apache.catalina.valves.ErrorReportValve;
+import tools.jackson.databind.json.JsonMapper;
+import utdigit.web.common.Problems;
+import utdigit.web.common.ProblemType;
+
+/**
+ * Tomcat's own error answers (a request refused before it reaches the application: an invalid
+ * URI, a malformed request line, headers too large) as problems too, with the security headers,
+ * in place of the container's HTML page. Answers the application wrote itself are left alone.
+ */
+final class ProblemReportValve extends ErrorReportValve {
+    private final JsonMapper mapper;
+
+    ProblemReportValve(JsonMapper mapper) {
+        this.mapper = mapper;
+        setShowReport(false);
+        setShowServerInfo(false);
+    }
+
+    @Override
+    protected void report(Request request, Response response, Throwable throwable) {
+        int status = response.getStatus();
+        if (status < 400 || response.getContentWritten() > 0 || !response.setErrorReported()) {
+            return;
+        }
+        ProblemType type = switch (status) {
+            case 404 -> ProblemType.NOT_FOUND;
+            case 405 -> ProblemType.METHOD_NOT_ALLOWED;
+            case 406 -> ProblemType.NOT_ACCEPTABLE;
+            case 408 -> ProblemType.REQUEST_TIMEOUT;
+            case 413 -> ProblemType.PAYLOAD_TOO_LARGE;
+            case 415 -> ProblemType.UNSUPPORTED_MEDIA_TYPE;
+            case 401 -> ProblemType.UNAUTHORIZED;
+            case 503 -> ProblemType.SERVICE_BUSY;
+            default -> status < 500 ? ProblemType.INVALID_INPUT : ProblemType.INTERNAL_ERROR;
+        };
+        String detail = status < 500 ? "the request is not well-formed HTTP (request line, URI or headers) and "
+                + "was refused before it reached the service" : "the service could not answer this request";
+        try {
+            var body = Problems.body(type, detail, List.of(), null);
+            body.setStatus(status);
+            byte[] bytes = mapper.writeValueAsBytes(body);
+            response.setContentType("application/problem+json");
+            response.setCharacterEncoding(StandardCharsets.UTF_8.name());
+            response.setHeader("X-Content-Type-Options", "nosniff");
+            response.setHeader("Cache-Control", "no-store");
+            response.setHeader("X-Frame-Options", "DENY");
+            response.setHeader("Content-Security-Policy", SecurityHeadersFilter.API_POLICY);
+            response.setContentLength(bytes.length);
+            response.getOutputStream().write(bytes);
+            response.finishResponse();
+        } catch (IOException | IllegalStateException e) {
+            // the client is gone or the answer has started: nothing more to say
+        }
+    }
+}
