@@ -61,10 +61,11 @@ else
   ENDPOINTS+=("POST /api/pulse-parameters|POST|/api/pulse-parameters|$WORK/pulse.json")
 fi
 
-run() { # method path body duration -> RESULT line
-  BENCH_METHOD="$1" BENCH_BODY_FILE="$3" wrk -t"$THREADS" -c"$CONNECTIONS" -d"$4" --timeout 5s \
-    -s "$BENCH/wrk-report.lua" "$BASE$2" | grep '^RESULT'
+run() { # method path body duration -> RESULT line; wrk's own CPU seconds in $WORK/wrk-cpu
+  BENCH_METHOD="$1" BENCH_BODY_FILE="$3" /usr/bin/time -f '%U %S' -o "$WORK/wrk-cpu" \
+    wrk -t"$THREADS" -c"$CONNECTIONS" -d"$4" --timeout 5s -s "$BENCH/wrk-report.lua" "$BASE$2" | grep '^RESULT'
 }
+service_cpu_ticks() { awk '{print $14 + $15}' "/proc/$SERVICE/stat"; }  # user + system, 1/100 s
 
 for e in "${ENDPOINTS[@]}"; do
   IFS='|' read -r _ method path body <<<"$e"
@@ -74,13 +75,29 @@ for e in "${ENDPOINTS[@]}"; do
 done
 
 echo "wrk -t$THREADS -c$CONNECTIONS -d$DURATION on $BASE ($(nproc) cores, load before: $(cut -d' ' -f1-3 /proc/loadavg))"
-printf '%-38s %10s %9s %9s %9s %7s\n' endpoint 'req/s' 'p50 ms' 'p99 ms' 'vs trivial' errors
-trivial=""
+printf '%-38s %9s %8s %8s %8s %8s %9s %9s\n' endpoint 'req/s' 'p50 ms' 'p99 ms' 'ratio' errors 'svc us/r' 'wrk us/r'
+trivial=""; trivial_cpu=""
 for e in "${ENDPOINTS[@]}"; do
   IFS='|' read -r label method path body <<<"$e"
-  read -r _ rps p50 p99 _ sock status <<<"$(run "$method" "$path" "$body" "$DURATION")"
-  [[ -z "$trivial" ]] && trivial="$rps"
-  ratio=$(python3 -c "print(f'{100*$rps/$trivial:.0f} %')")
-  printf '%-38s %10.0f %9.2f %9.2f %9s %7s\n' "$label" "$rps" "$p50" "$p99" "$ratio" "$((sock + status))"
+  before=$(service_cpu_ticks)
+  read -r _ rps p50 p99 requests sock status <<<"$(run "$method" "$path" "$body" "$DURATION")"
+  after=$(service_cpu_ticks)
+  read -r wu ws <"$WORK/wrk-cpu"
+  svc=$(python3 -c "print(f'{($after - $before) * 1e4 / $requests:.0f}')")
+  wrk_us=$(python3 -c "print(f'{($wu + $ws) * 1e6 / $requests:.0f}')")
+  [[ -z "$trivial" ]] && { trivial="$rps"; trivial_cpu="$svc"; }
+  ratio=$(python3 -c "print(f'{100 * $rps / $trivial:.0f} %')")
+  printf '%-38s %9.0f %8.2f %8.2f %8s %8s %9s %9s\n' "$label" "$rps" "$p50" "$p99" "$ratio" "$((sock + status))" "$svc" "$wrk_us"
+  echo "$label|$rps|$svc" >>"$WORK/summary"
 done
-echo "(the ratio is to the first line; target: calculations >= 80 %, p99 < 50 ms)"
+echo "load after: $(cut -d' ' -f1-3 /proc/loadavg)"
+python3 - "$WORK/summary" <<'PY'
+import sys
+rows = [l.strip().split("|") for l in open(sys.argv[1])]
+label0, rps0, cpu0 = rows[0][0], float(rows[0][1]), float(rows[0][2])
+print(f"ratio: throughput to the first line ({label0}); svc us/r: the service's CPU (user + system) per request,")
+print("which a loaded machine does not inflate the way it does wall-clock figures. By CPU per request:")
+for label, rps, cpu in rows[1:]:
+    print(f"  {label}: {100 * cpu0 / float(cpu):.0f} % of the trivial endpoint's requests per CPU-second")
+print("targets: a calculation at >= 80 % of the trivial endpoint; p99 < 50 ms at 32 connections")
+PY
