@@ -6,6 +6,7 @@
 #   src/bench/batch-bench.sh                                   # quantization-assessments, 1,000,000 rows
 #   src/bench/batch-bench.sh sampling-assessments 1000000
 #   ROWS_WARMUP=50000 JAVA_OPTS='-Xmx256m' src/bench/batch-bench.sh technique-sheet-validations 1000000
+#   JFR=1 src/bench/batch-bench.sh quantization-assessments 100000   # + a JFR profile of the measured batch
 #
 # The CSV is generated into a temporary directory (never committed) and removed afterwards; the
 # answer (CSV, Accept text/csv) is counted as it streams, not stored.
@@ -28,7 +29,7 @@ python3 src/bench/batch-csv.py "$CALC" "$ROWS_WARMUP" >"$WORK/warmup.csv"
 python3 src/bench/batch-csv.py "$CALC" "$ROWS" >"$WORK/body.csv"
 
 # shellcheck disable=SC2086
-java $JAVA_OPTS -Xlog:gc:file="$WORK/gc.log" -jar "$JAR" --server.port="$PORT" --server.address=127.0.0.1 \
+java $JAVA_OPTS ${JFR:+-XX:FlightRecorderOptions=stackdepth=512} -Xlog:gc:file="$WORK/gc.log" -jar "$JAR" --server.port="$PORT" --server.address=127.0.0.1 \
   >"$WORK/service.log" 2>&1 &
 SERVICE=$!
 cleanup() { local rc=$?; kill "$SERVICE" 2>/dev/null || true; wait "$SERVICE" 2>/dev/null || true; rm -rf "$WORK"; exit "$rc"; }
@@ -42,21 +43,36 @@ done
 # Warm-up (JIT), not measured.
 curl -sS -X POST -H 'Content-Type: text/csv' -H 'Accept: text/csv' -T "$WORK/warmup.csv" "$URL" | tail -1 >/dev/null
 gc_lines_before=$(wc -l <"$WORK/gc.log")
+if [[ "${JFR:-0}" == 1 ]]; then
+  mkdir -p target/jfr
+  jcmd "$SERVICE" JFR.start name=batch settings=profile >/dev/null
+fi
 
 echo "$CALC: $ROWS rows, $(du -h "$WORK/body.csv" | cut -f1) of CSV, service $JAVA_OPTS, $(nproc) cores, load before: $(cut -d' ' -f1-3 /proc/loadavg)"
+cpu_before=$(awk '{print $14 + $15}' "/proc/$SERVICE/stat")
 start=$(date +%s.%N)
 curl -sS -X POST -H 'Content-Type: text/csv' -H 'Accept: text/csv' -T "$WORK/body.csv" "$URL" \
   | tee >(wc -l >"$WORK/lines") | LC_ALL=C grep -cF ',OK,' >"$WORK/ok" || true
 end=$(date +%s.%N)
+cpu_after=$(awk '{print $14 + $15}' "/proc/$SERVICE/stat")
 sleep 0.5
+if [[ "${JFR:-0}" == 1 ]]; then
+  jcmd "$SERVICE" JFR.stop name=batch filename="$PWD/target/jfr/batch-$CALC.jfr" >/dev/null
+  jfr print --json --stack-depth 512 --events jdk.ExecutionSample "target/jfr/batch-$CALC.jfr" >"$WORK/samples.json"
+  python3 src/bench/jfr-top.py "$WORK/samples.json" >"target/jfr/batch-$CALC.txt"
+fi
 lines=$(cat "$WORK/lines"); ok=$(cat "$WORK/ok")
 out=$((lines - 1))
-python3 - "$start" "$end" "$ROWS" "$out" "$ok" "$WORK/gc.log" "$gc_lines_before" "$SERVICE" <<'PY'
+python3 - "$start" "$end" "$ROWS" "$out" "$ok" "$WORK/gc.log" "$gc_lines_before" "$SERVICE" \
+  "$cpu_before" "$cpu_after" <<'PY'
 import re, sys
-start, end, rows, out, ok, gclog, skip, pid = sys.argv[1:]
+start, end, rows, out, ok, gclog, skip, pid, cpu0, cpu1 = sys.argv[1:]
 seconds = float(end) - float(start)
 rows, out, ok, skip = int(rows), int(out), int(ok), int(skip)
+cpu = (float(cpu1) - float(cpu0)) / 100.0
 print(f"rows in {rows:,}, rows out {out:,}, OK {ok:,}; {seconds:.1f} s: {rows / seconds:,.0f} rows/s")
+print(f"service CPU {cpu:.1f} s (user + system, all threads): {cpu * 1e6 / rows:.1f} us per row, "
+      f"{rows / cpu:,.0f} rows per CPU-second")
 before, after, total, pauses = [], [], [], []
 for line in open(gclog).read().splitlines()[skip:]:
     m = re.search(r"Pause.* (\d+)M->(\d+)M\((\d+)M\) ([\d.]+)ms", line)

@@ -11,5 +11,7 @@ set -euo pipefail
 cd "$(dirname "$0")/../.."
 args="${JMH_ARGS:--f 1 -wi 3 -w 1s -i 5 -r 1s}"
 mvn -B -q -Pjmh -DskipTests test-compile
+echo "load average before: $(cut -d" " -f1-3 /proc/loadavg)"
 mvn -B -q -Pjmh exec:exec -Djmh.args="$args -rf json -rff target/jmh-result.json ${*:-}"
 python3 src/bench/jmh-table.py target/jmh-result.json
+echo "($(nproc) cores; load average at the end: $(cut -d" " -f1-3 /proc/loadavg))"

@@ -27,7 +27,7 @@ JAR="$TMP/service-aot.jar"
 
 # --- the empty application of the same stack
 EMPTY="$TMP/empty-app"
-if [[ ! -f "$EMPTY/target/empty-app.jar" || "${REBUILD:-0}" == 1 ]]; then
+if [[ ! -f "$EMPTY/.aot-built" || "${REBUILD:-0}" == 1 ]]; then
   rm -rf "$EMPTY"
   mkdir -p "$EMPTY/src/main/java/empty" "$EMPTY/src/main/resources"
   sed -e 's|<artifactId>ut-digitization-service</artifactId>|<artifactId>empty-app</artifactId>|' \
@@ -48,6 +48,7 @@ JAVA
   printf 'management:\n  endpoint:\n    health:\n      probes:\n        enabled: true\n' \
     >"$EMPTY/src/main/resources/application.yml"
   (cd "$EMPTY" && mvn -B -q -o -Paot -DskipTests package >/dev/null)
+  touch "$EMPTY/.aot-built"
 fi
 
 # --- extracted layouts and CDS archives (Spring Boot's jarmode tools; one training run each)

@@ -26,7 +26,7 @@ public final class CanonicalJson {
 
     /** The canonical text of {@code node}. */
     public static String text(JsonNode node) {
-        StringBuilder out = new StringBuilder(256);
+        StringBuilder out = new StringBuilder(4096); // an answer is a few kB: no regrowth
         write(node, out);
         return out.toString();
     }
@@ -63,7 +63,7 @@ public final class CanonicalJson {
         } else if (node.isBoolean()) {
             out.append(node.booleanValue() ? "true" : "false");
         } else if (node.isNumber()) {
-            out.append(number(node.doubleValue()));
+            appendNumber(node.doubleValue(), out);
         } else {
             throw new IllegalArgumentException("not a JSON value: " + node.getNodeType());
         }
@@ -111,15 +111,23 @@ public final class CanonicalJson {
      * A test checks that both agree on a million seeded doubles.
      */
     public static String number(double value) {
+        StringBuilder out = new StringBuilder(24);
+        appendNumber(value, out);
+        return out.toString();
+    }
+
+    /** {@link #number} appended to {@code out}. */
+    static void appendNumber(double value, StringBuilder out) {
         checkFinite(value);
         if (value == 0.0) {
-            return "0";
+            out.append('0');
+            return;
         }
         Digits d = fastDigits(Math.abs(value));
         if (d == null) {
             d = referenceDigits(Math.abs(value));
         }
-        return format(value < 0, d);
+        format(value < 0, d, out);
     }
 
     /** The reference path alone: {@link #number} computed with BigDecimal only. */
@@ -128,7 +136,9 @@ public final class CanonicalJson {
         if (value == 0.0) {
             return "0";
         }
-        return format(value < 0, referenceDigits(Math.abs(value)));
+        StringBuilder out = new StringBuilder(24);
+        format(value < 0, referenceDigits(Math.abs(value)), out);
+        return out.toString();
     }
 
     private static void checkFinite(double value) {
@@ -372,8 +382,7 @@ public final class CanonicalJson {
         return Long.toString(digits);
     }
 
-    private static String format(boolean negative, Digits d) {
-        StringBuilder out = new StringBuilder(24);
+    private static void format(boolean negative, Digits d, StringBuilder out) {
         if (negative) {
             out.append('-');
         }
@@ -382,11 +391,17 @@ public final class CanonicalJson {
         int n = d.n();
         if (k <= n && n <= 21) {
             out.append(digits);
-            out.append("0".repeat(n - k));
+            for (int i = k; i < n; i++) {
+                out.append('0');
+            }
         } else if (0 < n && n <= 21) {
             out.append(digits, 0, n).append('.').append(digits, n, k);
         } else if (-6 < n && n <= 0) {
-            out.append("0.").append("0".repeat(-n)).append(digits);
+            out.append("0.");
+            for (int i = n; i < 0; i++) {
+                out.append('0');
+            }
+            out.append(digits);
         } else {
             int e = n - 1;
             out.append(digits.charAt(0));
@@ -395,6 +410,5 @@ public final class CanonicalJson {
             }
             out.append('e').append(e < 0 ? '-' : '+').append(Math.abs(e));
         }
-        return out.toString();
     }
 }
