@@ -35,7 +35,11 @@ import utdigit.web.support.ApiTest;
 class RestartAndShutdownTest extends ApiTest {
     static final String QUANTIZATION = "/api/quantization-assessments";
 
-    static List<String[]> requests() throws IOException {
+    @org.springframework.beans.factory.annotation.Autowired
+    utdigit.web.common.CalculationRunner runner;
+
+    /** The example request of every calculation (api-examples/<calculation>.json), and some of ours. */
+    List<String[]> requests() throws IOException {
         List<String[]> requests = new ArrayList<>();
         try (Stream<Path> files = Files.list(Path.of("api-examples"))) {
             // the request examples of the stamped calculations, named after their endpoint (the OpenAPI
@@ -45,7 +49,9 @@ class RestartAndShutdownTest extends ApiTest {
                             && !p.getFileName().toString().equals("stamp-verifications.json"))
                     .sorted().toList()) {
                 String name = f.getFileName().toString().replace(".json", "");
-                requests.add(new String[] {"/api/" + name, Files.readString(f)});
+                if (runner.names().contains(name)) {
+                    requests.add(new String[] {"/api/" + name, Files.readString(f)});
+                }
             }
         }
         for (int bits = 1; bits <= 32; bits++) {
@@ -107,7 +113,7 @@ class RestartAndShutdownTest extends ApiTest {
         ExecutorService pool = Executors.newFixedThreadPool(16);
         try {
             List<Future<String>> futures = new ArrayList<>();
-            for (int round = 0; round < 10; round++) {
+            for (int round = 0; round < 5; round++) {
                 for (String[] r : requests) {
                     futures.add(pool.submit(() -> given().port(port).contentType(ContentType.JSON).body(r[1]).post(r[0])
                             .then().statusCode(200).extract().<String>path("stamp.sha256")));
