@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import tools.jackson.core.io.NumberOutput;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -100,15 +101,15 @@ public final class CanonicalJson {
 
     /**
      * ECMAScript Number::toString of a finite double (ECMA-262 7.1.12.1, as RFC 8785 3.2.2.3
-     * requires). The digits are the shortest that round-trip, chosen closest to the exact value:
-     * for precision 1, 2, ... 17 the exact value rounded half-even to that many digits, the first
-     * that reads back as {@code value}.
+     * requires): the fewest significant digits k of any decimal s x 10^(n - k) that reads back as
+     * {@code value}; among several such s, the one closest to the exact value; of two equally close,
+     * the even one.
      *
-     * <p>Two paths give that answer: {@link #referenceDigits} rounds the exact binary value with
-     * BigDecimal at every precision (the definition; a few microseconds per number), and
-     * {@link #fastDigits} derives the same digits from {@link Double#toString(double)} with only
-     * long arithmetic and proves each step, handing every case it cannot prove to the reference.
-     * A test checks that both agree on a million seeded doubles.
+     * <p>Two paths give that answer: {@link #referenceDigits} applies the definition with
+     * BigDecimal (a few microseconds per number), and {@link #shortestDigits} takes the digits of
+     * Jackson's port of the Schubfach algorithm (the algorithm of Java 19's Double.toString), which
+     * differs from ECMA-262 in one case only, corrected there. A test checks that both paths agree
+     * on a million seeded doubles.
      */
     public static String number(double value) {
         StringBuilder out = new StringBuilder(24);
@@ -123,11 +124,7 @@ public final class CanonicalJson {
             out.append('0');
             return;
         }
-        Digits d = fastDigits(Math.abs(value));
-        if (d == null) {
-            d = referenceDigits(Math.abs(value));
-        }
-        format(value < 0, d, out);
+        format(value < 0, shortestDigits(Math.abs(value)), out);
     }
 
     /** The reference path alone: {@link #number} computed with BigDecimal only. */
@@ -153,87 +150,57 @@ public final class CanonicalJson {
      */
     record Digits(String digits, int n) {}
 
-    /** The definition: the exact value rounded half-even at precision 1..17, the first that round-trips. */
+    /**
+     * The definition, for a positive finite double: for k = 1, 2, ... the two k-digit decimals
+     * around the exact value (the exact value rounded down and up to k significant digits); the
+     * first k where one of them reads back (correctly rounded parsing, BigDecimal.doubleValue) gives
+     * the answer, the closer of the two if both do, the even one if they are equally close. No other
+     * k-digit decimal need be tried: the decimals that read back form an interval around the exact
+     * value, so if any k-digit one does, the nearer one on its side does too.
+     */
     static Digits referenceDigits(double value) {
         BigDecimal exact = new BigDecimal(value);
-        BigDecimal shortest = null;
-        for (int precision = 1; precision <= 17; precision++) {
-            BigDecimal candidate = exact.round(new MathContext(precision, RoundingMode.HALF_EVEN));
-            if (candidate.doubleValue() == value) {
-                shortest = candidate;
-                break;
+        for (int k = 1; k <= 17; k++) {
+            BigDecimal down = exact.round(new MathContext(k, RoundingMode.FLOOR));
+            BigDecimal up = exact.round(new MathContext(k, RoundingMode.CEILING));
+            boolean downReads = down.signum() > 0 && down.doubleValue() == value;
+            boolean upReads = up.doubleValue() == value;
+            BigDecimal chosen;
+            if (downReads && upReads && down.compareTo(up) != 0) {
+                int closer = exact.subtract(down).compareTo(up.subtract(exact));
+                if (closer != 0) {
+                    chosen = closer < 0 ? down : up;
+                } else {
+                    chosen = down.unscaledValue().testBit(0) ? up : down;
+                }
+            } else if (downReads) {
+                chosen = down;
+            } else if (upReads) {
+                chosen = up;
+            } else {
+                continue;
             }
+            BigDecimal stripped = chosen.stripTrailingZeros();
+            String digits = stripped.unscaledValue().toString();
+            return new Digits(digits, digits.length() - stripped.scale());
         }
-        if (shortest == null) {
-            throw new IllegalStateException("no 17-digit form for " + value);
-        }
-        BigDecimal stripped = shortest.stripTrailingZeros();
-        String digits = stripped.unscaledValue().toString();
-        return new Digits(digits, digits.length() - stripped.scale());
+        throw new IllegalStateException("no 17-digit form for " + value);
     }
-
-    private static final long[] POW10 = new long[19];
-    private static final long[] POW5 = new long[28];
-
-    static {
-        POW10[0] = 1;
-        for (int i = 1; i < POW10.length; i++) {
-            POW10[i] = POW10[i - 1] * 10;
-        }
-        POW5[0] = 1;
-        for (int i = 1; i < POW5.length; i++) {
-            POW5[i] = POW5[i - 1] * 5;
-        }
-    }
-
-    /** A comparison that the fast path's 128-bit arithmetic cannot make. */
-    private static final int UNKNOWN = 2;
 
     /**
-     * The reference's digits computed another way, or null where this way cannot answer (then the
-     * caller uses the reference). The same definition, with exact integer comparisons in place of
-     * BigDecimal rounding:
-     *
-     * <ol>
-     *   <li>S = s x 10^(n - L), the digits of {@link Double#toString(double)}: they read back as
-     *       {@code value} (checked here), but on Java 17 are not always the shortest nor the
-     *       closest, so they only seed the search.
-     *   <li>For p = 1 .. L: the p-digit decimal R nearest the exact value, half-even (the
-     *       reference's candidate): S rounded to p digits, moved by one grid step while the exact
-     *       value lies beyond the midpoint to the neighbour (the exact value is within half a gap
-     *       between doubles of S). The first R that reads back as {@code value} is the answer.
-     *   <li>A precision p is skipped without work when S is more than 2u from every p-digit
-     *       decimal, u being the larger gap between {@code value} and a neighbouring double in units
-     *       of S's last digit: then every p-digit decimal is more than 1.5u from the exact value and
-     *       none reads back (a decimal reads back only within u/2). The factor of two covers the
-     *       rounding of the double arithmetic of u.
-     * </ol>
-     *
-     * <p>"Reads back" is decided exactly as correctly rounded parsing (Double.parseDouble,
-     * BigDecimal.doubleValue) decides it: strictly inside the interval between the midpoints to the
-     * neighbouring doubles, or on a midpoint when {@code value}'s significand is even (ties to
-     * even). Every comparison of a decimal d x 10^q with a binary m x 2^e is exact in 128-bit
-     * integers for |q| <= 27; values that need more (below about 1e-10 or above 1e27 with many
-     * digits), subnormals and 18-digit forms of Double.toString are left to the reference.
+     * The definition's digits the fast way, for a positive finite double. Schubfach (Jackson's
+     * {@link NumberOutput#toString(double, boolean)}) returns the decimal closest to the exact value
+     * among the shortest that read back, even on a tie, as ECMA-262 asks, except where one digit
+     * would do: it then chooses among the one- and two-digit decimals that read back, and can return
+     * two digits (Double.MIN_VALUE: 4.9E-324, where ECMA-262 writes 5e-324). A two-digit answer is
+     * therefore checked against the one-digit decimals around it.
      */
-    static Digits fastDigits(double value) {
-        if (!(value >= Double.MIN_NORMAL && value <= Double.MAX_VALUE)) {
-            return null;
-        }
-        long bits = Double.doubleToRawLongBits(value);
-        int biased = (int) (bits >>> 52);
-        long m = (bits & 0x000F_FFFF_FFFF_FFFFL) | 0x0010_0000_0000_0000L; // value = m x 2^e exactly
-        int e = biased - 1075;
-        boolean narrowBelow = m == 0x0010_0000_0000_0000L && biased > 1; // the gap below is half the gap above
-
-        String text = Double.toString(value); // "ddd.ddd" or "d.dddE[-]x"
+    static Digits shortestDigits(double value) {
+        String text = NumberOutput.toString(value, true); // "ddd.ddd" or "d.dddE[-]x"
         int end = text.indexOf('E');
         int exponent = end < 0 ? 0 : Integer.parseInt(text, end + 1, text.length(), 10);
         end = end < 0 ? text.length() : end;
         int dot = text.indexOf('.');
-        if (dot < 0 || dot > end) {
-            return null;
-        }
         int first = 0; // the first significant digit
         while (first < end && (text.charAt(first) == '0' || text.charAt(first) == '.')) {
             first++;
@@ -242,144 +209,35 @@ public final class CanonicalJson {
         while (last > first && (text.charAt(last) == '0' || text.charAt(last) == '.')) {
             last--;
         }
-        long s = 0;
-        int length = 0;
+        StringBuilder digits = new StringBuilder(17);
         for (int i = first; i <= last; i++) {
             char c = text.charAt(i);
             if (c != '.') {
-                if (length == 17) {
-                    return null;
-                }
-                s = s * 10 + (c - '0');
-                length++;
+                digits.append(c);
             }
         }
-        int n = (first < dot ? dot - first : -(first - dot - 1)) + exponent; // digits before the point
-        if (s <= 0 || readsBack(s, n - length, m, e, narrowBelow) != 1) {
-            return null;
-        }
-        double u = s * Math.ulp(value) / value;
-
-        for (int p = 1; p <= length; p++) {
-            int k = length - p;
-            long cell = POW10[k];
-            long tail = s % cell;
-            if (Math.min(tail, cell - tail) > 2.0 * u) {
-                continue;
+        int point = dot < 0 ? end : dot;
+        int n = (first < point ? point - first : -(first - point - 1)) + exponent; // digits before the point
+        if (digits.length() == 2) {
+            int lead = digits.charAt(0) - '0';
+            boolean downReads = readsBack(lead, n - 1, value);
+            boolean upReads = lead < 9 ? readsBack(lead + 1, n - 1, value) : readsBack(1, n, value);
+            if (downReads && upReads) {
+                return referenceDigits(value); // both one-digit neighbours read back: subnormals only
             }
-            int q = n - p; // R = g x 10^q
-            long g = s / cell + (2 * tail >= cell ? 1 : 0);
-            // move g to the p-digit decimal nearest the exact value; midpoints are (2g +/- 1) x 5 x 10^(q - 1)
-            while (true) {
-                int above = compare((2 * g + 1) * 5, q - 1, m, e);
-                if (above == UNKNOWN) {
-                    return null;
-                }
-                if (above < 0 || (above == 0 && g % 2 == 1)) {
-                    g++;
-                    continue;
-                }
-                int below = g == 0 ? -1 : compare((2 * g - 1) * 5, q - 1, m, e);
-                if (below == UNKNOWN) {
-                    return null;
-                }
-                if (below > 0 || (below == 0 && g % 2 == 1)) {
-                    g--;
-                    continue;
-                }
-                break;
+            if (downReads) {
+                return new Digits(Integer.toString(lead), n);
             }
-            if (g < POW10[p - 1] || g > POW10[p]) {
-                return null; // the exact value and S on two sides of a power of ten: left to the reference
-            }
-            int back = readsBack(g, q, m, e, narrowBelow);
-            if (back == UNKNOWN) {
-                return null;
-            }
-            if (back == 1) {
-                return g == POW10[p] ? new Digits("1", n + 1) : new Digits(stripZeros(g), n);
+            if (upReads) {
+                return lead < 9 ? new Digits(Integer.toString(lead + 1), n) : new Digits("1", n + 1);
             }
         }
-        return null; // no precision up to L reads back: the reference goes on to L + 1 and beyond
+        return new Digits(digits.toString(), n);
     }
 
-    /**
-     * 1 when d x 10^q reads back as the double m x 2^e (strictly between the midpoints to its
-     * neighbours, or on one with m even), 0 when it does not, {@link #UNKNOWN} when not decidable here.
-     */
-    private static int readsBack(long d, int q, long m, int e, boolean narrowBelow) {
-        int upper = compare(d, q, 2 * m + 1, e - 1);
-        int lower = narrowBelow ? compare(d, q, 4 * m - 1, e - 2) : compare(d, q, 2 * m - 1, e - 1);
-        if (upper == UNKNOWN || lower == UNKNOWN) {
-            return UNKNOWN;
-        }
-        boolean even = (m & 1) == 0;
-        boolean inside = (lower > 0 || (lower == 0 && even)) && (upper < 0 || (upper == 0 && even));
-        return inside ? 1 : 0;
-    }
-
-    /**
-     * The sign of d x 10^q - b x 2^e, exact, for 0 <= d < 2^63, 0 < b < 2^62 and |q| <= 27
-     * ({@link #UNKNOWN} otherwise): 5^q and the products fit in 128 bits.
-     */
-    static int compare(long d, int q, long b, int e) {
-        if (q > 27 || q < -27 || d < 0 || b <= 0) {
-            return UNKNOWN;
-        }
-        if (q >= 0) { // d 5^q 2^q against b 2^e
-            long five = POW5[q];
-            return compareShifted(Math.multiplyHigh(d, five), d * five, q, 0L, b, e);
-        }
-        // divide both by 10^q: d 2^q against b 5^-q 2^e
-        long five = POW5[-q];
-        return compareShifted(0L, d, q, Math.multiplyHigh(b, five), b * five, e);
-    }
-
-    /** The sign of X 2^x - Y 2^y for unsigned 128-bit X = (xHi, xLo) and Y = (yHi, yLo). */
-    private static int compareShifted(long xHi, long xLo, int x, long yHi, long yLo, int y) {
-        if (x >= y) {
-            return compareShiftedLeft(xHi, xLo, x - y, yHi, yLo);
-        }
-        return -compareShiftedLeft(yHi, yLo, y - x, xHi, xLo);
-    }
-
-    /** The sign of X 2^c - Y, c >= 0. */
-    private static int compareShiftedLeft(long xHi, long xLo, int c, long yHi, long yLo) {
-        int xBits = bitLength(xHi, xLo);
-        int yBits = bitLength(yHi, yLo);
-        if (xBits == 0) {
-            return yBits == 0 ? 0 : -1;
-        }
-        long xb = (long) xBits + c;
-        if (xb != yBits) {
-            return xb > yBits ? 1 : -1;
-        }
-        // same bit length, at most 128: the shift fits
-        long hi;
-        long lo;
-        if (c == 0) {
-            hi = xHi;
-            lo = xLo;
-        } else if (c >= 64) {
-            hi = xLo << (c - 64);
-            lo = 0L;
-        } else {
-            hi = (xHi << c) | (xLo >>> (64 - c));
-            lo = xLo << c;
-        }
-        int byHigh = Long.compareUnsigned(hi, yHi);
-        return byHigh != 0 ? Integer.signum(byHigh) : Integer.signum(Long.compareUnsigned(lo, yLo));
-    }
-
-    private static int bitLength(long hi, long lo) {
-        return hi != 0 ? 128 - Long.numberOfLeadingZeros(hi) : 64 - Long.numberOfLeadingZeros(lo);
-    }
-
-    private static String stripZeros(long digits) {
-        while (digits % 10 == 0) {
-            digits /= 10;
-        }
-        return Long.toString(digits);
+    /** Whether the one-digit decimal d x 10^q reads back as {@code value} (correctly rounded parsing). */
+    private static boolean readsBack(int d, int q, double value) {
+        return Double.parseDouble(d + "E" + q) == value;
     }
 
     private static void format(boolean negative, Digits d, StringBuilder out) {
