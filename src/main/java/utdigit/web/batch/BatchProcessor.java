@@ -9,11 +9,18 @@ import java.io.OutputStream;
 import java.io.PushbackInputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.util.ArrayDeque;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.ThreadFactory;
+import java.util.concurrent.atomic.AtomicInteger;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.beans.factory.DisposableBean;
 import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
@@ -29,14 +36,15 @@ import utdigit.web.metrics.ServiceMetrics;
 
 /**
  * The one streaming component behind every batch endpoint: reads rows one at a time in the body's
- * format, answers each through the same {@link CalculationRunner} path as the single endpoint, and
- * writes each answer as soon as it is computed, in input order. Memory stays flat whatever the
+ * format, answers each through the same {@link CalculationRunner} path as the single endpoint (on
+ * the shared worker threads, utdigit.batch.workers), and writes each answer as soon as it and every
+ * row before it are computed, in input order. Memory stays flat whatever the
  * number of rows. A bad row is answered INVALID with its problem and never stops the batch; a
  * limit reached mid-way ends the stream with one LIMIT_REACHED row naming the first row not
  * processed.
  */
 @Component
-class BatchProcessor {
+class BatchProcessor implements DisposableBean {
     private static final Logger log = LoggerFactory.getLogger(BatchProcessor.class);
 
     /** The formats of a batch body and of its answer. */
@@ -57,6 +65,8 @@ class BatchProcessor {
     private final ServiceMetrics metrics;
     private final Map<String, RecordShape> requestShapes = new ConcurrentHashMap<>();
     private final Map<String, List<String>> answerColumns = new ConcurrentHashMap<>();
+    /** The threads that answer rows, shared by every batch; null: rows are answered on the request's thread. */
+    private final ExecutorService workers;
 
     BatchProcessor(CalculationRunner runner, JsonMapper mapper, BatchLimits limits, ServiceMetrics metrics) {
         this.runner = runner;
@@ -64,6 +74,23 @@ class BatchProcessor {
         this.csv = CsvMapper.builder().build();
         this.limits = limits;
         this.metrics = metrics;
+        this.workers = limits.workers() <= 1 ? null : Executors.newFixedThreadPool(limits.workers(), new ThreadFactory() {
+            private final AtomicInteger count = new AtomicInteger();
+
+            @Override
+            public Thread newThread(Runnable r) {
+                Thread t = new Thread(r, "batch-worker-" + count.incrementAndGet());
+                t.setDaemon(true);
+                return t;
+            }
+        });
+    }
+
+    @Override
+    public void destroy() {
+        if (workers != null) {
+            workers.shutdownNow();
+        }
     }
 
     BatchLimits limits() {
@@ -95,16 +122,20 @@ class BatchProcessor {
         };
     }
 
-    /** Answers every row of {@code rows} into {@code sink}, in order. */
+    /**
+     * Answers every row of {@code rows} into {@code sink}, in order. This thread reads the rows and
+     * writes the answers; with workers configured, the rows in between are answered on the worker
+     * threads, at most {@link #WINDOW} rows ahead of the one being written, so memory stays flat.
+     */
     long process(String calculation, RowSource rows, RowSink answers, OutputStream flushTarget) throws IOException {
-        RowSink sink = counted(calculation, answers);
+        InOrder pending = new InOrder(counted(calculation, answers), flushTarget);
         long answered = 0;
         try (rows) {
             while (true) {
                 if (answered >= limits.maxRows()) {
                     Row next = nextOrLimit(rows);
                     if (next != null) {
-                        sink.write(limitRow(answered + 1, "the batch row limit (" + limits.maxRows()
+                        pending.add(limitRow(answered + 1, "the batch row limit (" + limits.maxRows()
                                 + ") is reached"));
                     }
                     break;
@@ -114,7 +145,7 @@ class BatchProcessor {
                     row = rows.next();
                 } catch (RuntimeException e) {
                     if (hasLimitCause(e)) {
-                        sink.write(limitRow(answered + 1, "the batch body limit (" + limits.maxBodyBytes()
+                        pending.add(limitRow(answered + 1, "the batch body limit (" + limits.maxBodyBytes()
                                 + " bytes) is reached"));
                         break;
                     }
@@ -122,20 +153,72 @@ class BatchProcessor {
                 }
                 if (row == null) {
                     if (rows.fatal() != null) {
-                        sink.write(problemRow(answered + 1, null, ProblemType.MALFORMED_BODY, rows.fatal(),
+                        pending.add(problemRow(answered + 1, null, ProblemType.MALFORMED_BODY, rows.fatal(),
                                 List.of(new FieldError("", rows.fatal()))));
                     }
                     break;
                 }
-                sink.write(answer(calculation, row));
-                answered++;
-                if (answered % limits.flushEveryRows() == 0) {
-                    flushTarget.flush();
+                if (workers == null) {
+                    pending.add(answer(calculation, row));
+                } else {
+                    pending.add(CompletableFuture.supplyAsync(() -> answer(calculation, row), workers));
                 }
+                answered++;
+            }
+            pending.drain();
+        } catch (IOException | RuntimeException | Error e) {
+            pending.cancel();
+            throw e;
+        }
+        answers.finish();
+        return answered;
+    }
+
+    /** Rows answered ahead of the one being written, at most. */
+    static final int WINDOW = 256;
+
+    /** The answers not yet written, oldest first; written in input order as they complete. */
+    private final class InOrder {
+        private final ArrayDeque<CompletableFuture<ObjectNode>> queue = new ArrayDeque<>();
+        private final RowSink sink;
+        private final OutputStream flushTarget;
+        private long written;
+
+        InOrder(RowSink sink, OutputStream flushTarget) {
+            this.sink = sink;
+            this.flushTarget = flushTarget;
+        }
+
+        void add(ObjectNode done) throws IOException {
+            add(CompletableFuture.completedFuture(done));
+        }
+
+        void add(CompletableFuture<ObjectNode> answer) throws IOException {
+            queue.add(answer);
+            // write what is already done; wait for the oldest only when the window is full
+            while (!queue.isEmpty() && (queue.size() > WINDOW || queue.peek().isDone())) {
+                write(queue.poll().join());
             }
         }
-        sink.finish();
-        return answered;
+
+        void drain() throws IOException {
+            while (!queue.isEmpty()) {
+                write(queue.poll().join());
+            }
+        }
+
+        void cancel() {
+            queue.forEach(f -> f.cancel(false));
+            queue.clear();
+        }
+
+        private void write(ObjectNode row) throws IOException {
+            sink.write(row);
+            if (++written % limits.flushEveryRows() == 0) {
+                sink.flush();
+                flushTarget.flush();
+            }
+        }
     }
 
     /** {@code sink}, counting every row it writes by its status ({@link ServiceMetrics#BATCH_ROWS}). */
@@ -145,6 +228,11 @@ class BatchProcessor {
             public void write(ObjectNode outputRow) throws IOException {
                 sink.write(outputRow);
                 metrics.batchRow(calculation, outputRow.path("status").asString());
+            }
+
+            @Override
+            public void flush() throws IOException {
+                sink.flush();
             }
 
             @Override

@@ -5,8 +5,10 @@ import java.io.OutputStream;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import tools.jackson.core.io.NumberOutput;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.SequenceWriter;
+import tools.jackson.databind.SerializationFeature;
 import tools.jackson.databind.node.ObjectNode;
 import tools.jackson.dataformat.csv.CsvMapper;
 import tools.jackson.dataformat.csv.CsvSchema;
@@ -19,10 +21,12 @@ import tools.jackson.dataformat.csv.CsvSchema;
  */
 final class CsvSink implements RowSink {
     private final List<String> resultColumns;
+    private final String[][] resultPaths;
     private final SequenceWriter writer;
 
     CsvSink(CsvMapper csv, OutputStream out, List<String> resultColumns) throws IOException {
         this.resultColumns = resultColumns;
+        this.resultPaths = resultColumns.stream().map(c -> c.split("\\.")).toArray(String[][]::new);
         List<String> header = new ArrayList<>();
         header.add("row");
         header.add("id");
@@ -37,7 +41,9 @@ final class CsvSink implements RowSink {
         header.forEach(schema::addColumn);
         // The header is written as the first record, not by the schema: Jackson writes a schema's header
         // only with the first row, and an answer of zero rows must still carry it.
-        this.writer = csv.writerFor(List.class).with(schema.build().withoutHeader()).writeValues(out);
+        // No flush after each row (Jackson's default for a sequence): the batch flushes every few hundred rows.
+        this.writer = csv.writerFor(List.class).with(schema.build().withoutHeader())
+                .without(SerializationFeature.FLUSH_AFTER_WRITE_VALUE).writeValues(out);
         writer.write(header);
     }
 
@@ -48,8 +54,8 @@ final class CsvSink implements RowSink {
         cells.add(row.has("id") ? row.get("id").asString() : "");
         cells.add(row.get("status").asString());
         JsonNode result = row.get("result");
-        for (String column : resultColumns) {
-            cells.add(result == null ? "" : cell(result, column));
+        for (String[] path : resultPaths) {
+            cells.add(result == null ? "" : cell(result, path));
         }
         JsonNode problem = row.get("problem");
         if (problem == null) {
@@ -68,9 +74,9 @@ final class CsvSink implements RowSink {
         writer.write(cells);
     }
 
-    private static String cell(JsonNode result, String dotted) {
+    private static String cell(JsonNode result, String[] path) {
         JsonNode node = result;
-        for (String part : dotted.split("\\.")) {
+        for (String part : path) {
             node = node == null ? null : node.get(part);
         }
         if (node == null || node.isNull()) {
@@ -92,7 +98,15 @@ final class CsvSink implements RowSink {
         if (node.isObject()) {
             return node.toString();
         }
+        if (node.isDouble()) {
+            return NumberOutput.toString(node.doubleValue(), true); // as the JSON answer writes it
+        }
         return node.asString();
+    }
+
+    @Override
+    public void flush() throws IOException {
+        writer.flush();
     }
 
     @Override

@@ -10,6 +10,9 @@ interface RowSink extends Closeable {
     /** Writes one output row: {row, id?, status, result | problem}. */
     void write(ObjectNode outputRow) throws IOException;
 
+    /** Hands the rows written so far to the output stream (the caller then flushes that to the client). */
+    default void flush() throws IOException {}
+
     /** Ends the output (closing bracket of a JSON array) and flushes. */
     void finish() throws IOException;
 
