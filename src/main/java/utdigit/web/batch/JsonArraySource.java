@@ -1,22 +1,33 @@
 package utdigit.web.batch;
 
 import java.io.InputStream;
+import java.util.List;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
+import tools.jackson.core.SerializableString;
+import tools.jackson.core.sym.PropertyNameMatcher;
+import tools.jackson.core.util.JsonParserDelegate;
 import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
+import utdigit.web.common.FieldError;
+import utdigit.web.common.ProblemType;
 
 /**
  * Rows of an application/json body: one JSON array of request objects, read element by element.
  * A syntax error inside the array cannot be resynchronised: the rows before it are answered and
- * the batch ends with a row that says where the body broke.
+ * the batch ends with a row that says where the body broke. An element larger than
+ * {@link #MAX_ELEMENT_BYTES} (the limit of an NDJSON line) is not built: it is skipped token by
+ * token and answered INVALID, so one huge element cannot fill the heap.
  */
 final class JsonArraySource implements RowSource {
     private static final JsonNode EMPTY_ARRAY = JsonNodeFactory.instance.arrayNode();
+    static final long MAX_ELEMENT_BYTES = NdjsonSource.MAX_LINE_CHARS;
+    /** Tokens read between two checks of an element's size (each token is at most one 10,000-character string). */
+    private static final int CHECK_EVERY_TOKENS = 64;
 
     private final JsonParser parser;
     private final ObjectReader elements;
@@ -68,8 +79,21 @@ final class JsonArraySource implements RowSource {
                 parser.skipChildren();
                 return Row.of(row, EMPTY_ARRAY);
             }
-            JsonNode node = elements.readValue(parser);
-            return Row.of(row, node);
+            SizeCapped capped = new SizeCapped(parser, parser.currentTokenLocation().getByteOffset());
+            try {
+                return Row.of(row, elements.readValue(capped));
+            } catch (ElementTooLarge e) {
+                while (parser.streamReadContext().getNestingDepth() > 1) { // back to the array's level
+                    if (parser.nextToken() == null) {
+                        done = true;
+                        fatal = "the array is not closed: the body ended inside row " + row;
+                        return null;
+                    }
+                }
+                String detail = "the element is larger than " + MAX_ELEMENT_BYTES + " bytes; one request object per "
+                        + "element";
+                return Row.unreadable(row, ProblemType.MALFORMED_BODY, detail, List.of(new FieldError("", detail)));
+            }
         } catch (JacksonException e) {
             CountingInputStream.rethrowIfLimit(e);
             done = true;
@@ -79,6 +103,66 @@ final class JsonArraySource implements RowSource {
                     + (loc == null ? "" : " (line " + loc.getLineNr() + ", column " + loc.getColumnNr() + ")")
                     + "; rows from here on were not read";
             return null;
+        }
+    }
+
+    /** Thrown while an element is read, once it has grown past {@link #MAX_ELEMENT_BYTES}. */
+    private static final class ElementTooLarge extends RuntimeException {
+        ElementTooLarge() {
+            super(null, null, false, false);
+        }
+    }
+
+    /** The parser, counting the tokens of one element and checking its size as it is read. */
+    private static final class SizeCapped extends JsonParserDelegate {
+        private final long start;
+        private int tokens;
+
+        SizeCapped(JsonParser parser, long start) {
+            super(parser);
+            this.start = start;
+        }
+
+        private void counted() {
+            if (++tokens % CHECK_EVERY_TOKENS == 0 && start >= 0
+                    && delegate.currentLocation().getByteOffset() - start > MAX_ELEMENT_BYTES) {
+                throw new ElementTooLarge();
+            }
+        }
+
+        @Override
+        public JsonToken nextToken() {
+            JsonToken t = super.nextToken();
+            counted();
+            return t;
+        }
+
+        @Override
+        public JsonToken nextValue() {
+            JsonToken t = super.nextValue();
+            counted();
+            return t;
+        }
+
+        @Override
+        public String nextName() {
+            String name = super.nextName();
+            counted();
+            return name;
+        }
+
+        @Override
+        public boolean nextName(SerializableString name) {
+            boolean matched = super.nextName(name);
+            counted();
+            return matched;
+        }
+
+        @Override
+        public int nextNameMatch(PropertyNameMatcher matcher) {
+            int match = super.nextNameMatch(matcher);
+            counted();
+            return match;
         }
     }
 

@@ -82,6 +82,33 @@ class BatchJsonBodyApiTest extends BatchApiTest {
     }
 
     @Test
+    void anElementOverTheLineLimitIsOneInvalidRowNotBuiltAndTheNextElementIsRead() {
+        // One object of about 1.6 MB (an array of 800,000 numbers inside it, nested two deep), over
+        // the 1 MiB an NDJSON line may have: skipped token by token, never built as a tree.
+        StringBuilder huge = new StringBuilder("{\"bit_depth\": 8, \"extra\": {\"numbers\": [");
+        for (int i = 0; i < 800_000; i++) {
+            huge.append(i % 10).append(',');
+        }
+        huge.append("0]}}");
+        assertThat(huge.length()).isGreaterThan((int) JsonArraySource.MAX_ELEMENT_BYTES);
+        List<JsonNode> rows = ndjsonRows(QUANTIZATION, JSON, "[{\"bit_depth\": 8}, " + huge + ", {\"bit_depth\": 10}]");
+        assertThat(rowNumbers(rows)).containsExactly(1L, 2L, 3L);
+        assertThat(statuses(rows)).containsExactly("OK", "INVALID", "OK");
+        assertThat(rows.get(1).path("problem").path("type").asString()).isEqualTo("/problems/malformed-body");
+        assertThat(rows.get(1).path("problem").path("detail").asString()).contains("larger than 1048576 bytes");
+        assertThat(rows.get(2).path("result").path("levels").asLong()).isEqualTo(1024);
+        // just under the limit an element is read as usual (and refused for its unknown field)
+        StringBuilder large = new StringBuilder("{\"bit_depth\": 8, \"extra\": [");
+        for (int i = 0; i < 400_000; i++) {
+            large.append(i % 10).append(',');
+        }
+        large.append("0]}");
+        List<JsonNode> underLimit = ndjsonRows(QUANTIZATION, JSON, "[" + large + "]");
+        assertThat(statuses(underLimit)).containsExactly("INVALID");
+        assertThat(pointers(underLimit.get(0))).containsExactly("/extra");
+    }
+
+    @Test
     void aDuplicateKeyInAnElementIsMalformed() {
         List<JsonNode> rows = ndjsonRows(QUANTIZATION, JSON, "[{\"bit_depth\": 8}, {\"bit_depth\": 8, \"bit_depth\": 9}]");
         assertThat(statuses(rows)).containsExactly("OK", "INVALID");
