@@ -2,14 +2,21 @@ package utdigit.web.common;
 
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
+import tools.jackson.databind.BeanDescription;
+import tools.jackson.databind.DeserializationConfig;
 import tools.jackson.databind.DeserializationContext;
+import tools.jackson.databind.JavaType;
+import tools.jackson.databind.ValueDeserializer;
+import tools.jackson.databind.deser.ValueDeserializerModifier;
+import tools.jackson.databind.deser.std.DelegatingDeserializer;
 import tools.jackson.databind.deser.std.StdScalarDeserializer;
 import tools.jackson.databind.module.SimpleModule;
 
 /**
  * Deserializers that read numbers and strings exactly as written: a number must be a JSON number
  * (not a quoted string), finite (1e400 overflows and is rejected), and an integer field accepts an
- * integral value such as 2.0 but not 2.5. A string field accepts only a JSON string.
+ * integral value such as 2.0 but not 2.5. A string field accepts only a JSON string. An enum
+ * value is its exact name: the library's own reader would trim white space around it.
  */
 final class StrictScalars {
     private StrictScalars() {}
@@ -21,6 +28,14 @@ final class StrictScalars {
         module.addDeserializer(Integer.class, new WholeInteger());
         module.addDeserializer(int.class, new WholeInteger());
         module.addDeserializer(String.class, new TextOnly());
+        module.setDeserializerModifier(new ValueDeserializerModifier() {
+            @Override
+            public ValueDeserializer<?> modifyEnumDeserializer(DeserializationConfig config, JavaType type,
+                                                               BeanDescription.Supplier beanDescRef,
+                                                               ValueDeserializer<?> deserializer) {
+                return new ExactEnum(deserializer, type.getRawClass());
+            }
+        });
         return module;
     }
 
@@ -60,6 +75,32 @@ final class StrictScalars {
                 return (int) v;
             }
             return (Integer) ctxt.handleUnexpectedToken(Integer.class, p);
+        }
+    }
+
+    /** An enum read by the library's reader, but only from a string without white space around it. */
+    static final class ExactEnum extends DelegatingDeserializer {
+        private final Class<?> enumType;
+
+        ExactEnum(ValueDeserializer<?> delegate, Class<?> enumType) {
+            super(delegate);
+            this.enumType = enumType;
+        }
+
+        @Override
+        protected ValueDeserializer<?> newDelegatingInstance(ValueDeserializer<?> delegate) {
+            return new ExactEnum(delegate, enumType);
+        }
+
+        @Override
+        public Object deserialize(JsonParser p, DeserializationContext ctxt) {
+            if (p.currentToken() == JsonToken.VALUE_STRING) {
+                String text = p.getString();
+                if (!text.equals(text.strip()) || !text.equals(text.trim())) {
+                    return ctxt.handleWeirdStringValue(enumType, text, "white space around an enum value");
+                }
+            }
+            return super.deserialize(p, ctxt);
         }
     }
 

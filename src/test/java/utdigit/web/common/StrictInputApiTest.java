@@ -30,6 +30,9 @@ class StrictInputApiTest extends ApiTest {
             fraction into integer       | {"bit_depth": 8.5}                               | /bit_depth
             number for enum             | {"bit_depth": 8, "quantizer": 0}                 | /quantizer
             lower-case enum             | {"bit_depth": 8, "quantizer": "rounding"}        | /quantizer
+            enum with a leading space   | {"bit_depth": 8, "quantizer": " ROUNDING"}       | /quantizer
+            enum with a trailing space  | {"bit_depth": 8, "quantizer": "ROUNDING "}       | /quantizer
+            enum with a trailing tab    | {"bit_depth": 8, "quantizer": "ROUNDING\\t"}     | /quantizer
             boolean for number          | {"bit_depth": true}                              | /bit_depth
             object for number           | {"bit_depth": {"value": 8}}                      | /bit_depth
             number for string enum      | {"bit_depth": 8, "digitized_signal": 1}          | /digitized_signal
