@@ -27,7 +27,7 @@ class JsonConfiguration {
     @Bean
     JsonMapper jsonMapper(
             @Value("${utdigit.json.max-nesting-depth:32}") int maxNestingDepth,
-            @Value("${utdigit.json.max-number-length:64}") int maxNumberLength,
+            @Value("${utdigit.json.max-number-length:1000}") int maxNumberLength,
             @Value("${utdigit.json.max-string-length:10000}") int maxStringLength,
             @Value("${utdigit.json.max-name-length:200}") int maxNameLength,
             @Value("${utdigit.json.max-document-length:${utdigit.batch.max-body-bytes:2147483648}}")
