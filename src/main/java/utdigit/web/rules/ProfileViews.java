@@ -93,7 +93,7 @@ final class ProfileViews {
             String title,
             @Schema(description = "The snake_case name of a sheet input or computed value", example = "samples_per_period")
             String metric,
-            @Schema(description = "How the metric is compared with the limit",
+            @Schema(description = "How the metric is compared with the limit", implementation = String.class,
                     allowableValues = {"AT_LEAST", "AT_MOST", "EQUALS"})
             Comparison comparison,
             @Schema(description = "The limit when it is a number; omitted when it is a metric", format = "double",
@@ -120,7 +120,7 @@ final class ProfileViews {
     record ConditionView(
             @Schema(description = "The metric the condition is on", example = "thickness_mm")
             String metric,
-            @Schema(description = "How the metric is compared with the value",
+            @Schema(description = "How the metric is compared with the value", implementation = String.class,
                     allowableValues = {"AT_LEAST", "AT_MOST", "ABOVE", "BELOW", "EQUALS"})
             Comparison comparison,
             @Schema(description = "The value", format = "double", example = "75")
