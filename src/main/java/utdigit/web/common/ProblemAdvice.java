@@ -3,6 +3,7 @@ package utdigit.web.common;
 import jakarta.servlet.http.HttpServletRequest;
 import java.util.ArrayList;
 import java.util.List;
+import org.apache.catalina.connector.ClientAbortException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.http.HttpHeaders;
@@ -15,6 +16,7 @@ import org.springframework.web.HttpMediaTypeNotSupportedException;
 import org.springframework.web.HttpRequestMethodNotSupportedException;
 import org.springframework.web.bind.MissingServletRequestParameterException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
+import org.springframework.web.context.request.async.AsyncRequestNotUsableException;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
 import org.springframework.web.multipart.MaxUploadSizeExceededException;
@@ -120,9 +122,42 @@ class ProblemAdvice {
 
     @ExceptionHandler(Exception.class)
     ResponseEntity<ProblemDetail> unexpected(Exception e, HttpServletRequest request) {
+        if (clientWentAway(e)) {
+            // The caller closed the connection while its answer was being written (a batch stream cut
+            // off): nobody is left to answer and the service did not fail. Logged, not as an error.
+            log.info("client closed the connection during {} {}: {}", request.getMethod(), request.getRequestURI(),
+                    rootMessage(e));
+            return null;
+        }
         log.error("unexpected failure on {} {}", request.getMethod(), request.getRequestURI(), e);
         return problem(ProblemType.INTERNAL_ERROR, "the service could not answer this request; "
                 + "the failure is logged", List.of(), request);
+    }
+
+    /** Whether {@code e} is the connection to the client failing under a write (reset, broken pipe, aborted). */
+    static boolean clientWentAway(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof ClientAbortException || t instanceof AsyncRequestNotUsableException) {
+                return true;
+            }
+            String message = t.getMessage();
+            if (t instanceof java.io.IOException && message != null
+                    && (message.contains("Broken pipe") || message.contains("Connection reset"))) {
+                return true;
+            }
+            if (t.getCause() == t) {
+                break;
+            }
+        }
+        return false;
+    }
+
+    private static String rootMessage(Throwable e) {
+        Throwable t = e;
+        while (t.getCause() != null && t.getCause() != t) {
+            t = t.getCause();
+        }
+        return t.getClass().getSimpleName() + ": " + t.getMessage();
     }
 
     /** A core failure as a problem; {@code pointerPrefix} locates the fields (e.g. "/probe"). */
