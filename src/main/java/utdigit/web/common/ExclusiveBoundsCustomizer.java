@@ -34,9 +34,12 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
         }
         Map<String, Schema> schemas = openApi.getComponents().getSchemas();
         Set<Class<?>> seen = new HashSet<>();
-        Set<Class<?>> seenAnswers = new HashSet<>();
         for (Calculation<?> c : calculations) {
             apply(c.requestType(), schemas, seen);
+        }
+        // the request records (also echoed as an answer's inputs) are never marked nullable
+        Set<Class<?>> seenAnswers = new HashSet<>(seen);
+        for (Calculation<?> c : calculations) {
             for (var m : c.getClass().getMethods()) {
                 if (m.getName().equals("answer") && m.getParameterCount() == 1 && m.getReturnType().isRecord()) {
                     nullableOptionals(m.getReturnType(), schemas, seenAnswers);
@@ -46,8 +49,10 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
     }
 
     /**
-     * An {@code Optional} result is written as null when the value cannot exist: its schema type is
-     * [number, null] (the annotation's {@code types} is not carried over by the generator).
+     * A result can be written as null: an {@code Optional} when the value cannot exist, and any
+     * number of an answer that has no finite value with these inputs (the runner replaces it by
+     * null with a RESULT_NOT_REPRESENTABLE warning). Their schema type is [number, null] (the
+     * annotation's {@code types} is not carried over by the generator).
      */
     @SuppressWarnings({"rawtypes", "unchecked"})
     private static void nullableOptionals(Class<?> type, Map<String, Schema> schemas, Set<Class<?>> seen) {
@@ -60,7 +65,16 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
             if (rc.getType().isRecord()) {
                 nullableOptionals(rc.getType(), schemas, seen);
             }
-            if (schema == null || schema.getProperties() == null || rc.getType() != java.util.Optional.class) {
+            if (rc.getGenericType() instanceof java.lang.reflect.ParameterizedType list) { // List<FindingView>
+                for (java.lang.reflect.Type argument : list.getActualTypeArguments()) {
+                    if (argument instanceof Class<?> element && element.isRecord()) {
+                        nullableOptionals(element, schemas, seen);
+                    }
+                }
+            }
+            boolean nullable = rc.getType() == java.util.Optional.class || rc.getType() == Double.class
+                    || rc.getType() == double.class;
+            if (schema == null || schema.getProperties() == null || !nullable) {
                 continue;
             }
             Schema property = (Schema) schema.getProperties().get(PropertyPointers.jsonName(rc.getName(), rc));
