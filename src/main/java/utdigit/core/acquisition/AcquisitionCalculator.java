@@ -1,6 +1,5 @@
 package utdigit.core.acquisition;
 
-import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.ArrayList;
@@ -8,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Units;
@@ -321,14 +321,11 @@ public final class AcquisitionCalculator {
     }
 
     /** A number for a message: six significant digits, no trailing zeros, no exponent. */
-    private static String fmt(double x) {
-        if (!Double.isFinite(x)) {
-            return x > 0 ? "infinity" : x < 0 ? "-infinity" : "not a number";
-        }
-        return new BigDecimal(x).round(MESSAGE_DIGITS).stripTrailingZeros().toPlainString();
-    }
-
     private static final MathContext MESSAGE_DIGITS = new MathContext(6, RoundingMode.HALF_EVEN);
+
+    private static String fmt(double x) {
+        return MessageNumbers.plain(x, MESSAGE_DIGITS);
+    }
 
     private static Double checkVelocity(AcquisitionInput in) {
         boolean needed = in.gateLengthMm() != null || in.maxSoundPathMm() != null;

@@ -1,12 +1,12 @@
 package utdigit.core.pulse;
 
-import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Units;
 import utdigit.core.common.Warning;
@@ -71,8 +71,6 @@ public final class PulseCalculator {
      * {@link RealPulseSpectrum#estimatedLowerEdgeShiftFraction}).
      */
     private static final double REAL_LOWER_EDGE_SOLVE_FRACTION = REAL_LOWER_EDGE_TOLERANCE_FRACTION / 2.0;
-
-    private static final MathContext MESSAGE_DIGITS = new MathContext(4);
 
     /**
      * Computes every result whose inputs are given.
@@ -366,10 +364,9 @@ public final class PulseCalculator {
     }
 
     /** A number for a message: 4 significant digits, no exponent. */
+    private static final MathContext MESSAGE_DIGITS = new MathContext(4);
+
     private static String fmt(double x) {
-        if (!Double.isFinite(x)) {
-            return x > 0 ? "infinity" : x < 0 ? "-infinity" : "not a number";
-        }
-        return new BigDecimal(x).round(MESSAGE_DIGITS).stripTrailingZeros().toPlainString();
+        return MessageNumbers.plain(x, MESSAGE_DIGITS);
     }
 }

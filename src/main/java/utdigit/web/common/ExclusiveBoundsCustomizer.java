@@ -42,7 +42,7 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
         for (Calculation<?> c : calculations) {
             for (var m : c.getClass().getMethods()) {
                 if (m.getName().equals("answer") && m.getParameterCount() == 1 && m.getReturnType().isRecord()) {
-                    nullableOptionals(m.getReturnType(), schemas, seenAnswers);
+                    nullableResults(m.getReturnType(), schemas, seenAnswers);
                 }
             }
         }
@@ -55,7 +55,7 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
      * annotation's {@code types} is not carried over by the generator).
      */
     @SuppressWarnings({"rawtypes", "unchecked"})
-    private static void nullableOptionals(Class<?> type, Map<String, Schema> schemas, Set<Class<?>> seen) {
+    private static void nullableResults(Class<?> type, Map<String, Schema> schemas, Set<Class<?>> seen) {
         if (!type.isRecord() || !seen.add(type)) {
             return;
         }
@@ -63,12 +63,12 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
         Schema schema = schemas.get(doc != null && !doc.name().isEmpty() ? doc.name() : type.getSimpleName());
         for (RecordComponent rc : type.getRecordComponents()) {
             if (rc.getType().isRecord()) {
-                nullableOptionals(rc.getType(), schemas, seen);
+                nullableResults(rc.getType(), schemas, seen);
             }
             if (rc.getGenericType() instanceof java.lang.reflect.ParameterizedType list) { // List<FindingView>
                 for (java.lang.reflect.Type argument : list.getActualTypeArguments()) {
                     if (argument instanceof Class<?> element && element.isRecord()) {
-                        nullableOptionals(element, schemas, seen);
+                        nullableResults(element, schemas, seen);
                     }
                 }
             }

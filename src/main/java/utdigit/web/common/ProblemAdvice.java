@@ -145,16 +145,13 @@ class ProblemAdvice {
                     && (message.contains("Broken pipe") || message.contains("Connection reset"))) {
                 return true;
             }
-            if (t.getCause() == t) {
-                break;
-            }
         }
         return false;
     }
 
     private static String rootMessage(Throwable e) {
         Throwable t = e;
-        while (t.getCause() != null && t.getCause() != t) {
+        while (t.getCause() != null) {
             t = t.getCause();
         }
         return t.getClass().getSimpleName() + ": " + t.getMessage();

@@ -49,10 +49,7 @@ final class ProblemReportValve extends ErrorReportValve {
             byte[] bytes = mapper.writeValueAsBytes(body);
             response.setContentType("application/problem+json");
             response.setCharacterEncoding(StandardCharsets.UTF_8.name());
-            response.setHeader("X-Content-Type-Options", "nosniff");
-            response.setHeader("Cache-Control", "no-store");
-            response.setHeader("X-Frame-Options", "DENY");
-            response.setHeader("Content-Security-Policy", SecurityHeadersFilter.API_POLICY);
+            SecurityHeadersFilter.API_HEADERS.forEach(response::setHeader);
             response.setContentLength(bytes.length);
             response.getOutputStream().write(bytes);
             response.finishResponse();

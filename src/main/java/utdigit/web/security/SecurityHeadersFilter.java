@@ -6,7 +6,10 @@ import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import jakarta.servlet.http.HttpServletResponseWrapper;
 import java.io.IOException;
+import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
+import java.util.stream.Collectors;
 import org.springframework.web.filter.OncePerRequestFilter;
 
 /**
@@ -24,6 +27,13 @@ final class SecurityHeadersFilter extends OncePerRequestFilter {
     static final String API_POLICY = "default-src 'none'; frame-ancestors 'none'";
     static final String UI_POLICY = "default-src 'self'; img-src 'self' data:; style-src 'self' 'unsafe-inline'; "
             + "frame-ancestors 'none'";
+
+    /** The headers of every answer but the Swagger UI's (also written by {@link ProblemReportValve}). */
+    static final Map<String, String> API_HEADERS = headers(API_POLICY);
+    private static final Map<String, String> UI_HEADERS = headers(UI_POLICY);
+    /** Their names in lower case, for the case-insensitive checks of {@link PinnedHeaders}. */
+    private static final Set<String> PINNED = API_HEADERS.keySet().stream()
+            .map(h -> h.toLowerCase(Locale.ROOT)).collect(Collectors.toUnmodifiableSet());
 
     private final String uiPath;
 
@@ -45,14 +55,17 @@ final class SecurityHeadersFilter extends OncePerRequestFilter {
     @Override
     protected void doFilterInternal(HttpServletRequest request, HttpServletResponse response, FilterChain chain)
             throws ServletException, IOException {
-        Map<String, String> headers = Map.of(
+        PinnedHeaders pinned = new PinnedHeaders(response, isUi(request) ? UI_HEADERS : API_HEADERS);
+        pinned.apply();
+        chain.doFilter(request, pinned);
+    }
+
+    private static Map<String, String> headers(String contentSecurityPolicy) {
+        return Map.of(
                 "X-Content-Type-Options", "nosniff",
                 "Cache-Control", "no-store",
                 "X-Frame-Options", "DENY",
-                "Content-Security-Policy", isUi(request) ? UI_POLICY : API_POLICY);
-        PinnedHeaders pinned = new PinnedHeaders(response, headers);
-        pinned.apply();
-        chain.doFilter(request, pinned);
+                "Content-Security-Policy", contentSecurityPolicy);
     }
 
     private boolean isUi(HttpServletRequest request) {
@@ -73,8 +86,8 @@ final class SecurityHeadersFilter extends OncePerRequestFilter {
             headers.forEach(super::setHeader);
         }
 
-        private boolean pinned(String name) {
-            return name != null && headers.keySet().stream().anyMatch(h -> h.equalsIgnoreCase(name.trim()));
+        private static boolean pinned(String name) {
+            return name != null && PINNED.contains(name.trim().toLowerCase(Locale.ROOT));
         }
 
         @Override
