@@ -36,13 +36,14 @@ public final class PistonBeam {
      *
      * @param elementDiameterMm element diameter D, mm, > 0
      * @param wavelengthMm wavelength lambda in the part, mm, > 0
-     * @return the distance in mm, >= 0; empty when D < lambda (the on-axis pressure then has no
-     *     maximum in front of the element)
+     * @return the distance in mm, > 0; empty when D <= lambda (the on-axis pressure then has no
+     *     maximum in front of the element: at D = lambda the formula's 0 is the face itself, not a
+     *     maximum in front of it)
      */
     public static Optional<Double> exactNearFieldLengthMm(double elementDiameterMm, double wavelengthMm) {
         Checks.positive("element_diameter_mm", elementDiameterMm);
         Checks.positive("wavelength_mm", wavelengthMm);
-        if (elementDiameterMm < wavelengthMm) {
+        if (!(elementDiameterMm > wavelengthMm)) {
             return Optional.empty();
         }
         double numeratorMm2 = (elementDiameterMm - wavelengthMm) * (elementDiameterMm + wavelengthMm);

@@ -116,7 +116,7 @@ public final class PulseCalculator {
                             + "Fundamentals of Acoustics (from memory)"));
             if (nearFieldLengthExactMm.isEmpty()) {
                 warnings.add(Warning.of(NO_EXACT_NEAR_FIELD, "element_diameter_mm " + fmt(diameterMm)
-                        + " is smaller than the wavelength " + fmt(wavelengthMm)
+                        + " is not larger than the wavelength " + fmt(wavelengthMm)
                         + " mm: the on-axis pressure has no maximum in front of the element, so "
                         + "near_field_length_exact_mm does not exist"));
             }
@@ -152,23 +152,27 @@ public final class PulseCalculator {
 
             if (in.distanceMm() != null) {
                 double distanceMm = in.distanceMm();
+                double nearFieldAheadMm = nearFieldInPartMm != null ? nearFieldInPartMm : nearFieldLengthMm;
+                references.add(Reference.of("beam diameter",
+                        "2 z tan(theta) with the pulse-echo -6 dB half-angle: far-field beam geometry, "
+                                + "common practice; not given inside the near field, where it does not hold"));
                 if (beamSpread6dbDeg.isEmpty()) {
                     beamDiameter6dbMm = Optional.empty();
                     warnings.add(Warning.of(NO_BEAM_DIAMETER_6DB, "without a pulse-echo -6 dB beam-spread "
                             + "angle the far-field beam does not narrow to a -6 dB width: "
                             + "beam_diameter_6db_mm does not exist"));
+                } else if (distanceMm < nearFieldAheadMm) {
+                    beamDiameter6dbMm = Optional.empty();
                 } else {
                     beamDiameter6dbMm = Optional.of(PistonBeam.beamDiameterMm(distanceMm, beamSpread6dbDeg.get()));
                 }
-                references.add(Reference.of("beam diameter",
-                        "2 z tan(theta) with the pulse-echo -6 dB half-angle: far-field beam geometry, "
-                                + "common practice"));
-                double nearFieldAheadMm = nearFieldInPartMm != null ? nearFieldInPartMm : nearFieldLengthMm;
                 if (distanceMm < nearFieldAheadMm) {
                     warnings.add(Warning.of(DISTANCE_IN_NEAR_FIELD, "distance_mm " + fmt(distanceMm)
                             + " lies inside the near field (" + fmt(nearFieldAheadMm) + " mm"
                             + (nearFieldInPartMm != null ? " left in the part" : "")
-                            + "): the far-field beam_diameter_6db_mm does not hold there"));
+                            + "): the far-field cone 2 z tan(theta) does not hold there, so beam_diameter_6db_mm "
+                            + "is null (there the beam is of the order of the element's diameter and narrows towards "
+                            + "the end of the near field)"));
                 }
             }
         }

@@ -29,11 +29,12 @@ import utdigit.core.common.Warning;
  * @param spatialPulseLengthMm v times the -6 dB duration, mm
  * @param axialResolutionMm half the spatial pulse length (pulse-echo), mm
  * @param nearFieldLengthMm D^2 / (4 lambda), mm
- * @param nearFieldLengthExactMm (D^2 - lambda^2) / (4 lambda), mm; empty when D < lambda
+ * @param nearFieldLengthExactMm (D^2 - lambda^2) / (4 lambda), mm; empty when D <= lambda
  * @param beamSpread6dbDeg pulse-echo -6 dB half-angle, degrees; empty when it does not exist
  * @param beamSpread20dbDeg pulse-echo -20 dB half-angle, degrees; empty when it does not exist
  * @param beamSpreadNullDeg half-angle of the first null, degrees; empty when it does not exist
- * @param beamDiameter6dbMm -6 dB beam diameter at the distance, mm; empty without a -6 dB angle
+ * @param beamDiameter6dbMm -6 dB beam diameter at the distance, mm; empty without a -6 dB angle and
+ *     inside the near field (the far-field cone does not hold there)
  * @param nearFieldInPartMm near field left in the part behind the wedge, mm (negative: none)
  * @param refractedAngleDeg refracted angle in the part, degrees; empty past the critical angle
  * @param warnings conditions the caller should know about

@@ -110,8 +110,9 @@ public final class QuantizationCalculator {
 
         long levels = 1L << bitDepth;
         double gainRatio = Decibels.toRatio(gainDb);
-        double lsb = mapping.lsbPercentFsh(signal, bitDepth) * gainRatio;
-        double dynamicRangeDb = Decibels.fromRatio(FULL_SCREEN_PERCENT_FSH / lsb);
+        double converterLsb = mapping.lsbPercentFsh(signal, bitDepth);
+        double lsb = converterLsb * gainRatio;
+        double dynamicRangeDb = dynamicRangeDb(converterLsb, gainDb);
         double lowBoundPercentFsh = quantizer.lowBoundLsbFraction() * lsb;
         double highBoundPercentFsh = quantizer.highBoundLsbFraction(signal) * lsb;
         references.add(Reference.of("levels", "2^N codes of an N-bit converter (definition)"));
@@ -128,7 +129,9 @@ public final class QuantizationCalculator {
                             + " (derived)"));
         }
         references.add(Reference.of("dynamic range",
-                "full screen to one displayed LSB: 20 log10(100 %FSH / LSB) dB (definition)"));
+                "the largest reachable displayed height to one displayed LSB: 20 log10(100 %FSH / LSB) - max(G, 0) dB"
+                        + " with the converter's LSB (definition; a negative soft gain shrinks the largest reachable"
+                        + " height with the LSB, so it cannot add range)"));
 
         Optional<Double> idealSqnrDb = idealSqnrDb(signal, bitDepth);
         if (idealSqnrDb.isPresent()) {
@@ -252,6 +255,18 @@ public final class QuantizationCalculator {
             return Optional.empty();
         }
         return Optional.of(20.0 * StrictMath.log10((double) (1L << bitDepth)) + SINE_TO_UNIFORM_NOISE_DB);
+    }
+
+    /**
+     * Dynamic range of the displayed data: from the largest displayed height the converter can
+     * reach to one displayed LSB, 20 log10(100 / LSB) - max(G, 0) dB with the converter's LSB. A
+     * positive gain G pushes full scale off the screen (the screen's top stays the largest height)
+     * while the displayed LSB grows by G; a negative gain shrinks the largest reachable height and
+     * the LSB alike, so it leaves the converter's range. Soft gain never adds range. Reference:
+     * definition of dynamic range (derived for gain after digitizing).
+     */
+    static double dynamicRangeDb(double converterLsbPercentFsh, double gainDb) {
+        return Decibels.fromRatio(FULL_SCREEN_PERCENT_FSH / converterLsbPercentFsh) - StrictMath.max(gainDb, 0.0);
     }
 
     /**

@@ -17,7 +17,8 @@ import utdigit.core.common.Warning;
  * @param digitalGainDb the digital gain used, dB (default 0)
  * @param levels number of codes 2^N (4294967296 at 32 bits)
  * @param lsbPercentFsh one LSB in displayed %FSH: LSB 10^(G/20)
- * @param dynamicRangeDb full screen to one displayed LSB: 20 log10(100 / LSB_displayed), dB
+ * @param dynamicRangeDb the largest reachable displayed height to one displayed LSB:
+ *     20 log10(100 / LSB) - max(G, 0) with the converter's LSB, dB (soft gain never raises it)
  * @param idealSqnrDb ideal SQNR of a full-scale sine, dB; empty for RECTIFIED
  * @param amplitudeErrorOverDb worst reading above the signal height, dB (>= 0); null without height
  * @param amplitudeErrorUnderDb worst reading below the signal height, dB (< 0); null without height,

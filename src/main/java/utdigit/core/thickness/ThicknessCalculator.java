@@ -27,6 +27,9 @@ import utdigit.core.sampling.SampleClock;
 public final class ThicknessCalculator {
     private ThicknessCalculator() {}
 
+    /** The nominal thickness is below the axial resolution v tau(-6 dB)/2: wall echoes overlap. */
+    public static final String THICKNESS_BELOW_AXIAL_RESOLUTION = "THICKNESS_BELOW_AXIAL_RESOLUTION";
+
     /** Default decimation factor: no decimation. */
     public static final int DEFAULT_DECIMATION_FACTOR = 1;
     /** Default measurement. */
@@ -224,24 +227,29 @@ public final class ThicknessCalculator {
         }
     }
 
-    /** Warns when the nominal thickness is below one spatial pulse length v tau(-6 dB) of the model. */
+    /**
+     * Warns when the nominal thickness is below the axial resolution v tau(-6 dB) / 2 of the model:
+     * successive wall echoes are 2d/v apart, so they overlap (at their -6 dB points) when 2d/v is
+     * below tau, that is when d is below v tau / 2, not below v tau.
+     */
     private static void checkPulseLength(ThicknessInput in, double thicknessMm, double velocityMmPerUs,
             List<Warning> warnings, List<Reference> references) {
         double durationUs = PULSE_MODEL_CONVENTION
                 .pulseModel(in.frequencyMhz(), in.bandwidthPercent() / 100.0)
                 .envelopeDurationUs(PULSE_LENGTH_LEVEL_DB);
-        double spatialPulseLengthMm = velocityMmPerUs * durationUs;
-        references.add(Reference.of("spatial pulse length",
-                "v tau(-6 dB) (common practice, no published source) with tau the -6 dB envelope duration of"
-                        + " the Gaussian pulse model, centre frequency ARITHMETIC (scipy.signal.gausspulse"
-                        + " parameterisation): model value, real probes ring longer"));
-        if (thicknessMm < spatialPulseLengthMm) {
-            warnings.add(Warning.of("THICKNESS_BELOW_PULSE_LENGTH",
+        double axialResolutionMm = velocityMmPerUs * durationUs / 2.0;
+        references.add(Reference.of("wall-echo overlap",
+                "echoes of a wall d thick are 2d/v apart and overlap when that is below the -6 dB pulse duration"
+                        + " tau, i.e. when d is below the axial resolution v tau(-6 dB)/2 (common practice, no"
+                        + " published source); tau from the Gaussian pulse model, centre frequency ARITHMETIC"
+                        + " (scipy.signal.gausspulse parameterisation): model value, real probes ring longer"));
+        if (thicknessMm < axialResolutionMm) {
+            warnings.add(Warning.of(THICKNESS_BELOW_AXIAL_RESOLUTION,
                     String.format(Locale.ROOT,
-                            "nominal_thickness (%.4g mm) is below one spatial pulse length (%.4g mm, model value"
-                                    + " from frequency_mhz and bandwidth_percent): successive echoes overlap and"
-                                    + " the reading depends on how the instrument picks them",
-                            thicknessMm, spatialPulseLengthMm)));
+                            "nominal_thickness (%.4g mm) is below the axial resolution v tau(-6 dB)/2 (%.4g mm,"
+                                    + " model value from frequency_mhz and bandwidth_percent): successive wall echoes,"
+                                    + " 2d/v apart, overlap and the reading depends on how the instrument picks them",
+                            thicknessMm, axialResolutionMm)));
         }
     }
 

@@ -15,7 +15,9 @@ record QuantizationAssessmentResponse(
         @Schema(description = "One code step in displayed %FSH (grows with digital gain)", format = "double",
                 example = "0.78125")
         double lsbPercentFsh,
-        @Schema(description = "Full screen to one LSB, dB", format = "double", example = "42.14")
+        @Schema(description = "The largest displayed height the converter can reach to one displayed LSB, "
+                + "20 log10(100 / LSB) - max(G, 0) with the converter's LSB and the digital gain G, dB: soft gain "
+                + "never raises it", format = "double", example = "42.14")
         double dynamicRangeDb,
         @Schema(description = "Ideal SQNR of a full-scale sine, 20 log10(2^N) + 10 log10(1.5), dB; null for "
                 + "RECTIFIED", format = "double", example = "49.93", types = {"number", "null"})

@@ -100,13 +100,13 @@ public record ThicknessResolutionRequest(
 
         @Schema(description = "Optional, with bandwidth_percent (an input added to the endpoint's core list): "
                 + "nominal probe frequency, MHz (> 0, <= 1000), used only to warn when nominal_thickness is below "
-                + "one spatial pulse length of the Gaussian pulse model", format = "double", example = "5",
+                + "the axial resolution v tau(-6 dB)/2 of the Gaussian pulse model (the wall echoes overlap)", format = "double", example = "5",
                 exclusiveMinimumValue = 0, maximum = "1000")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
         @Schema(description = "Optional, with frequency_mhz (an input added to the endpoint's core list): -6 dB "
-                + "fractional bandwidth of the probe, % (0 to 200 exclusive), used only for the pulse-length warning",
+                + "fractional bandwidth of the probe, % (0 to 200 exclusive), used only for the wall-echo overlap warning",
                 format = "double", example = "60", exclusiveMinimumValue = 0, exclusiveMaximumValue = 200)
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
         Double bandwidthPercent) implements VelocityFields {

@@ -204,6 +204,19 @@ class PulseCalculatorTest {
         static final double WAVELENGTH_MM = 5.92 / 5.0;
 
         @Test
+        @DisplayName("an element exactly one wavelength across has no exact near field: null with a warning, never 0")
+        void elementOfOneWavelengthHasNoExactNearField() {
+            // (D^2 - lambda^2)/(4 lambda) is 0 at D = lambda: the face itself, not a maximum in front of it.
+            // 1 MHz in 1000 m/s: lambda = 1 mm exactly.
+            PulseResult r = compute(PulseInput.of(1.0, 1000.0).withElementDiameterMm(1.0));
+            assertThat(r.wavelengthMm()).isEqualTo(1.0);
+            assertThat(r.nearFieldLengthExactMm()).isEmpty();
+            assertThat(codes(r)).contains("NO_EXACT_NEAR_FIELD");
+            assertThat(PistonBeam.exactNearFieldLengthMm(1.0, 1.0)).isEmpty();
+            assertThat(PistonBeam.exactNearFieldLengthMm(1.0 + 1e-9, 1.0).orElseThrow()).isPositive();
+        }
+
+        @Test
         @DisplayName("beam-spread angles lie where the pulse-echo directivity (Commons Math BesselJ) is at -6 dB, -20 dB and the first null")
         void beamSpreadAnglesAreAtTheirLevels() {
             PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0));
@@ -257,10 +270,25 @@ class PulseCalculatorTest {
         }
 
         @Test
-        @DisplayName("a distance inside the near field still gives the beam diameter, with a warning")
+        @DisplayName("inside the near field the far-field beam diameter does not hold: null with a warning (10 mm, 5 MHz, z = 10 mm < N = 21.1 mm)")
+        void distanceInsideNearFieldHasNoBeamDiameter() {
+            // The far-field cone would give 2 x 10 x tan(3.49 deg) = 1.22 mm at 10 mm, an eighth of the element:
+            // inside the near field the beam is of the order of the element's diameter (Krautkraemer, from memory).
+            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withDistanceMm(10.0));
+            assertThat(r.nearFieldLengthMm()).isGreaterThan(10.0);
+            assertThat(r.beamDiameter6dbMm()).isEmpty();
+            assertThat(codes(r)).containsExactly("DISTANCE_IN_NEAR_FIELD");
+            assertThat(r.warnings().get(0).message()).contains("distance_mm", "beam_diameter_6db_mm is null");
+        }
+
+        @Test
+        @DisplayName("just inside the near field the beam diameter is null too; at the near-field end it exists")
         void distanceInsideNearFieldWarns() {
             PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withDistanceMm(15.0));
-            assertThat(r.beamDiameter6dbMm()).isPresent();
+            assertThat(r.beamDiameter6dbMm()).isEmpty();
+            PulseResult atEnd = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0)
+                    .withDistanceMm(100.0 / (4 * WAVELENGTH_MM)));
+            assertThat(atEnd.beamDiameter6dbMm()).isPresent();
             assertThat(codes(r)).containsExactly("DISTANCE_IN_NEAR_FIELD");
             assertThat(r.warnings().get(0).message()).contains("distance_mm");
         }

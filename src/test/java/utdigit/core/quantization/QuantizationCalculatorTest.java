@@ -341,6 +341,19 @@ class QuantizationCalculatorTest {
         }
 
         @Test
+        @DisplayName("soft gain below 0 dB cannot raise the dynamic range above the converter's 20 log10(128) (8-bit RF)")
+        void negativeGainDoesNotRaiseTheDynamicRange() {
+            // -12 dB shrinks the displayed LSB to a quarter, but also the largest reachable height to 25 %FSH:
+            // from there to one displayed LSB is still 128 LSB, 42.14 dB (derived from the definition).
+            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withDigitalGainDb(-12.0));
+            assertThat(r.lsbPercentFsh()).isCloseTo(LSB_8_BIT_RF_PERCENT_FSH * Math.pow(10, -12.0 / 20), within(1e-12));
+            double reachablePercentFsh = 100.0 * Math.pow(10, -12.0 / 20);
+            assertThat(r.dynamicRangeDb()).isCloseTo(20 * Math.log10(reachablePercentFsh / r.lsbPercentFsh()),
+                    within(ALLOWED_ERROR_DB));
+            assertThat(r.dynamicRangeDb()).isCloseTo(20 * Math.log10(128), within(ALLOWED_ERROR_DB));
+        }
+
+        @Test
         void displayedHeightAtTheConvertersFullScaleIsAccepted() {
             double gainDb = 6.0;
             double fullScaleDisplayed = 100 * Math.pow(10, gainDb / 20);

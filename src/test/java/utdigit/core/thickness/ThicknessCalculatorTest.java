@@ -238,19 +238,26 @@ class ThicknessCalculatorTest {
     }
 
     @Test
-    @DisplayName("thickness below one spatial pulse length v tau(-6 dB) = 1.7356 mm (5 MHz, 60 %, gausspulse model) is warned")
-    void thicknessBelowOnePulseLengthIsWarned() {
+    @DisplayName("wall echoes overlap below the axial resolution v tau(-6 dB)/2 = 0.8678 mm (5 MHz, 60 %), not below v tau")
+    void thicknessBelowAxialResolutionIsWarned() {
         // scipy.signal.gausspulse model: tau(-6 dB) = 2 sqrt(0.3 ln10 / a), a = (pi f bw)^2 / (1.2 ln 10),
-        // so tau = 1.2 ln 10 / (pi f bw) = 2.763102 / 9.424778 = 0.293175 us; v tau = 5.92 x 0.293175 = 1.73560 mm.
-        double spatialPulseLengthMm = 5.92 * 1.2 * Math.log(10.0) / (Math.PI * 5.0 * 0.6);
-        assertThat(spatialPulseLengthMm).isCloseTo(1.73560, within(1e-5));
-        ThicknessResult thin = ThicknessCalculator.compute(ThicknessInput.builder(100.0, V_M_PER_S, 1.7)
+        // so tau = 1.2 ln 10 / (pi f bw) = 2.763102 / 9.424778 = 0.293175 us. Echoes of a wall d thick are
+        // 2d/v apart: they overlap when 2d/v < tau, d < v tau / 2 = 5.92 x 0.293175 / 2 = 0.86780 mm.
+        double overlapThicknessMm = 5.92 * 1.2 * Math.log(10.0) / (Math.PI * 5.0 * 0.6) / 2.0;
+        assertThat(overlapThicknessMm).isCloseTo(0.86780, within(1e-5));
+        ThicknessResult thin = ThicknessCalculator.compute(ThicknessInput.builder(100.0, V_M_PER_S, 0.85)
                 .frequencyMhz(5.0).bandwidthPercent(60.0).build());
-        ThicknessResult thick = ThicknessCalculator.compute(ThicknessInput.builder(100.0, V_M_PER_S, 1.8)
+        // 1.7 mm lies between v tau/2 and v tau: the echoes are 2 x 1.7 / 5.92 = 0.574 us apart, about two
+        // pulse durations, and do not overlap; the former threshold v tau warned here.
+        ThicknessResult between = ThicknessCalculator.compute(ThicknessInput.builder(100.0, V_M_PER_S, 1.7)
                 .frequencyMhz(5.0).bandwidthPercent(60.0).build());
-        assertThat(hasWarning(thin, "THICKNESS_BELOW_PULSE_LENGTH")).isTrue();
-        assertThat(warningMessage(thin, "THICKNESS_BELOW_PULSE_LENGTH")).contains("1.736 mm");
-        assertThat(hasWarning(thick, "THICKNESS_BELOW_PULSE_LENGTH")).isFalse();
+        ThicknessResult justAbove = ThicknessCalculator.compute(ThicknessInput.builder(100.0, V_M_PER_S, 0.88)
+                .frequencyMhz(5.0).bandwidthPercent(60.0).build());
+        String code = ThicknessCalculator.THICKNESS_BELOW_AXIAL_RESOLUTION;
+        assertThat(hasWarning(thin, code)).isTrue();
+        assertThat(warningMessage(thin, code)).contains("0.8678 mm");
+        assertThat(hasWarning(between, code)).isFalse();
+        assertThat(hasWarning(justAbove, code)).isFalse();
     }
 
     @Test

@@ -173,26 +173,26 @@ class ThicknessResolutionApiTest extends ApiTest {
     }
 
     @Test
-    @DisplayName("a wall thinner than one spatial pulse length of the probe model is answered with a warning")
-    void thicknessBelowOnePulseLengthWarns() {
+    @DisplayName("a wall thinner than the probe model's axial resolution v tau(-6 dB)/2 is answered with a warning")
+    void thicknessBelowAxialResolutionWarns() {
         // Gaussian model, scipy.signal.gausspulse parameterisation: envelope exp(-a t^2) with
         // a = (pi f B)^2 / (4 L), L = ln 10^(6/20); it is down 6 dB at t = 2L / (pi f B), so the -6 dB
-        // duration is 4L / (pi f B) = 0.87952 us for 2 MHz and 50 %, a pulse length of 5.92 x 0.87952
-        // = 5.2068 mm: 4 mm is inside it, 6.5 mm outside.
-        double pulseLengthMm = 5.92 * 4 * Math.log(Math.pow(10, 6.0 / 20)) / (Math.PI * 2 * 0.5);
-        assertThat(pulseLengthMm).isBetween(4.0, 6.5);
+        // duration is 4L / (pi f B) = 0.87952 us for 2 MHz and 50 %; wall echoes 2d/v apart overlap below
+        // d = 5.92 x 0.87952 / 2 = 2.6034 mm: 2.5 mm is inside it, 4 mm (inside v tau = 5.21 mm) is not.
+        double axialResolutionMm = 5.92 * 4 * Math.log(Math.pow(10, 6.0 / 20)) / (Math.PI * 2 * 0.5) / 2;
+        assertThat(axialResolutionMm).isBetween(2.5, 4.0);
+        post(PATH, """
+                {"sampling_frequency_mhz": 100, "velocity_m_per_s": 5920, "nominal_thickness_mm": 2.5,
+                 "frequency_mhz": 2, "bandwidth_percent": 50}""")
+                .statusCode(200)
+                .body("warnings.code", hasItem("THICKNESS_BELOW_AXIAL_RESOLUTION"))
+                .body("inputs.frequency_mhz", closeTo(2.0, 0.0))
+                .body("inputs.bandwidth_percent", closeTo(50.0, 0.0));
         post(PATH, """
                 {"sampling_frequency_mhz": 100, "velocity_m_per_s": 5920, "nominal_thickness_mm": 4,
                  "frequency_mhz": 2, "bandwidth_percent": 50}""")
                 .statusCode(200)
-                .body("warnings.code", hasItem("THICKNESS_BELOW_PULSE_LENGTH"))
-                .body("inputs.frequency_mhz", closeTo(2.0, 0.0))
-                .body("inputs.bandwidth_percent", closeTo(50.0, 0.0));
-        post(PATH, """
-                {"sampling_frequency_mhz": 100, "velocity_m_per_s": 5920, "nominal_thickness_mm": 6.5,
-                 "frequency_mhz": 2, "bandwidth_percent": 50}""")
-                .statusCode(200)
-                .body("warnings.code", not(hasItem("THICKNESS_BELOW_PULSE_LENGTH")));
+                .body("warnings.code", not(hasItem("THICKNESS_BELOW_AXIAL_RESOLUTION")));
     }
 
     @Test
