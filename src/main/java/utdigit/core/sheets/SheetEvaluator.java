@@ -41,9 +41,9 @@ import utdigit.core.timing.TimeOfFlightResult;
  * frequency), quantization (bit depth), time of flight (sampling frequency and velocity; TOFD for a
  * TOFD sheet with a probe-centre separation, otherwise pulse-echo), thickness (sampling frequency,
  * velocity and thickness), acquisition (sampling frequency, bit depth, gate, increment and PRF).
- * {@code combined_amplitude_error_db} is the worst-case sum of the pulse's sampling loss and the
- * quantization error at the evaluation height, pulse_amplitude_loss_db + |evaluation_error_under_db|
- * (derived: both are worst cases of independent effects, so their dB add in the worst case).
+ * {@code combined_amplitude_error_db} is the worst case of the pulse's sampling loss and the
+ * quantization error at the evaluation height together: sampling first lowers the peak, then the
+ * quantizer errs at that lower height ({@link QuantizationCalculator#combinedErrorDb}).
  */
 public final class SheetEvaluator {
     private SheetEvaluator() {}
@@ -108,6 +108,7 @@ public final class SheetEvaluator {
             v.put("tfm_lateral_amplitude_loss_db", r.tfmLateralAmplitudeLossDb());
             v.notes("sampling", r.warnings(), r.references());
         }
+        QuantizationResult quantization = null;
         if (dig.bitDepth() != null) {
             QuantizationResult r = QuantizationCalculator.compute(new QuantizationInput(dig.bitDepth(),
                     dig.digitizedSignal(), dig.quantizer(), dig.codeMapping(), null, null,
@@ -119,6 +120,7 @@ public final class SheetEvaluator {
             v.put("evaluation_height_percent_fsh", r.evaluationHeightPercentFsh());
             v.put("evaluation_error_under_db", r.evaluationErrorUnderDb());
             v.notes("quantization", r.warnings(), r.references());
+            quantization = r;
         }
         if (fs != null && c != null) {
             TimeOfFlightInput.Builder b = TimeOfFlightInput.builder(fs, c).decimationFactor(dig.decimationFactor());
@@ -195,10 +197,14 @@ public final class SheetEvaluator {
             v.put("evaluation_error_magnitude_db", Math.abs(evaluationError));
         }
         if (pulseLoss != null && evaluationError != null) {
-            v.put("combined_amplitude_error_db", pulseLoss + Math.abs(evaluationError));
+            v.put("combined_amplitude_error_db", QuantizationCalculator.combinedErrorDb(pulseLoss,
+                    quantization.evaluationHeightPercentFsh(),
+                    quantization.quantizer().lowBoundLsbFraction() * quantization.lsbPercentFsh()));
             v.references.add(Reference.of("combined amplitude error",
-                    "worst-case sum pulse_amplitude_loss_db + |evaluation_error_under_db| of the sampling and "
-                            + "quantization errors at the evaluation height (derived)"));
+                    "worst case of sampling and quantization together: sampling lowers the peak of the evaluation "
+                            + "height h by r_s = 10^(-pulse_amplitude_loss_db/20), then the quantizer reads that lower "
+                            + "height up to b low (LSB/2 ROUNDING, LSB TRUNCATION): -20 log10(r_s - b/h) dB, more than "
+                            + "the sum of the two losses in dB (derived)"));
         }
 
         List<Finding> findings = RuleEvaluator.evaluate(profile, sheet.technique().name(), v.values);

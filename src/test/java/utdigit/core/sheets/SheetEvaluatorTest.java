@@ -1,6 +1,7 @@
 package utdigit.core.sheets;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.util.List;
 import java.util.Set;
@@ -57,8 +58,12 @@ class SheetEvaluatorTest {
         var acq = AcquisitionCalculator.compute(AcquisitionInput.builder(100, 12, 1.0, 5000.0).decimationFactor(2)
                 .gateLengthUs(30.0).focalLaws(61).scanLengthMm(500.0).plannedScanSpeedMmPerS(20.0).build());
         assertThat(r.values().get("max_scan_speed_mm_per_s")).isEqualTo(acq.maxScanSpeedMmPerS());
-        // combined = pulse sampling loss + |quantization error at the evaluation height| (derived worst case)
-        assertThat(r.values().get("combined_amplitude_error_db")).isEqualTo(
+        // combined: sampling lowers the peak by r_s, then the quantizer reads LSB/2 low at that lower height:
+        // -20 log10(r_s - (LSB/2)/h) (derived; brute-forced in QuantizationCalculatorTest), above the sum in dB
+        double rs = Math.pow(10, -sampling.pulseAmplitudeLossDb().orElseThrow() / 20);
+        double combined = -20 * Math.log10(rs - quantization.lsbPercentFsh() / 2 / quantization.evaluationHeightPercentFsh());
+        assertThat(r.values().get("combined_amplitude_error_db")).isCloseTo(combined, within(1e-12));
+        assertThat(r.values().get("combined_amplitude_error_db")).isGreaterThan(
                 sampling.pulseAmplitudeLossDb().orElseThrow() + Math.abs(quantization.evaluationErrorUnderDb().orElseThrow()));
     }
 
