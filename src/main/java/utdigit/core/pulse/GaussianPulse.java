@@ -84,8 +84,16 @@ public record GaussianPulse(double carrierMhz, double fractionalBandwidth, doubl
     }
 
     /**
-     * Standard deviation in MHz of the model's power spectrum (a Gaussian in f):
-     * sigma_f = sqrt(a) / (2 pi).
+     * Spectral level in dB (<= 0) of the model's envelope exp(-a t^2) at {@code frequencyMhz}: the
+     * detected envelope's spectrum is the carrier band moved to 0 Hz, -6 (f / (bw fc / 2))^2.
+     */
+    public double envelopeSpectralLevelDb(double frequencyMhz) {
+        return spectralLevelDb(carrierMhz + frequencyMhz);
+    }
+
+    /**
+     * Standard deviation in MHz of the model's power spectrum (a Gaussian in f about fc, and of the
+     * envelope's about 0 Hz): sigma_f = sqrt(a) / (2 pi).
      */
     public double powerSpectrumSigmaMhz() {
         return StrictMath.sqrt(envelopeRatePerUs2) / (2.0 * StrictMath.PI);

@@ -14,7 +14,8 @@ public enum DecimationMode {
     /**
      * Keeps the largest |sample| of each group of m (what "compression" of phased-array data
      * usually means): amplitude losses, the Nyquist frequency and the spectral figures follow the
-     * raw rate fs, since the kept sample is the largest of all raw samples.
+     * raw rate fs, since the kept sample is the largest of all raw samples. Processing of the
+     * compressed data (TFM, SAFT, filtering, FFT) still sees fs/m and aliases above fs/(2m).
      */
     PEAK_PRESERVING
 }

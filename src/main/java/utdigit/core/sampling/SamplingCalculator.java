@@ -36,6 +36,11 @@ public final class SamplingCalculator {
     public static final String PULSE_LOSS_NOT_DEFINED = "PULSE_LOSS_NOT_DEFINED";
     /** PEAK_PRESERVING with POSITIVE_PEAK: a positive peak can be displaced by a larger negative one. */
     public static final String PEAK_PRESERVING_POSITIVE_PEAK = "PEAK_PRESERVING_POSITIVE_PEAK";
+    /**
+     * PEAK_PRESERVING: processing of the compressed data sees fs/m, and the band reaches above
+     * fs/(2m).
+     */
+    public static final String COMPRESSED_DATA_ALIASING = "COMPRESSED_DATA_ALIASING";
     /** The pulse loss is not monotonic: slower rates than the required one also pass. */
     public static final String SLOWER_RATES_ALSO_PASS = "SLOWER_RATES_ALSO_PASS";
     /** RF TFM depth loss without a bandwidth: the envelope term is omitted. */
@@ -54,6 +59,16 @@ public final class SamplingCalculator {
 
     /** The spectral level at Nyquist above which a warning is issued, dB. */
     public static final double NYQUIST_LEVEL_WARNING_DB = -40.0;
+
+    /**
+     * What the carrier phase fixed at 0 leaves out, from a brute-force scan over the carrier phase
+     * (bandwidths 5-150 %, 2.2-10 samples per period; CarrierPhaseCostTest checks the figures).
+     */
+    static final String CARRIER_PHASE_NOTE = "The carrier phase is fixed at 0 (the model's: a carrier crest at the "
+            + "envelope's peak); an echo of another carrier phase can read lower against its own peak: by up to about "
+            + "0.05 dB for bandwidths of 40-100 % at 5 or more samples per period, up to about 0.3 dB for narrower or "
+            + "wider bands there, and up to about 0.8 dB below 5 samples per period (bandwidths up to 100 %; more "
+            + "above); from a brute-force scan over the carrier phase, which is not searched here (derived)";
 
     private static final String TFM_MODEL = "derived model; the code's own amplitude-fidelity check on a "
             + "reference reflector governs";
@@ -155,26 +170,56 @@ public final class SamplingCalculator {
                                 + "band edge of the one-sided model; pulse figures are less reliable"));
             }
             samplesPerPeriodUpper = effectiveMhz / upperMhz;
-            if (amplitudeMhz <= 2.0 * upperMhz) {
-                warnings.add(Warning.of(BAND_ALIASING, String.format(Locale.ROOT,
-                        "the rate that decides amplitude (%s MHz) is at or below twice the upper -6 dB band edge "
-                                + "(%s MHz): the probe's band aliases", num(amplitudeMhz), num(upperMhz))));
+            boolean envelope = signal == SampledSignal.ENVELOPE;
+            // The sampled spectrum: the carrier band for RF, the detected envelope's (centred at 0 Hz) for ENVELOPE.
+            double envelopeEdgeMhz = pulse.edgeOffsetMhz(-6.0);
+            double bandTopMhz = envelope ? envelopeEdgeMhz : upperMhz;
+            if (amplitudeMhz <= 2.0 * bandTopMhz) {
+                warnings.add(Warning.of(BAND_ALIASING, envelope
+                        ? String.format(Locale.ROOT,
+                                "the rate that decides amplitude (%s MHz) is at or below twice the -6 dB edge of the "
+                                        + "detected envelope's spectrum (%s MHz, centred at 0 Hz): the envelope aliases",
+                                num(amplitudeMhz), num(envelopeEdgeMhz))
+                        : String.format(Locale.ROOT,
+                                "the rate that decides amplitude (%s MHz) is at or below twice the upper -6 dB band edge "
+                                        + "(%s MHz): the probe's band aliases", num(amplitudeMhz), num(upperMhz))));
             }
-            spectralLevelAtNyquistDb = pulse.spectralLevelDb(nyquistMhz);
+            spectralLevelAtNyquistDb = envelope
+                    ? pulse.envelopeSpectralLevelDb(nyquistMhz)
+                    : pulse.spectralLevelDb(nyquistMhz);
             if (spectralLevelAtNyquistDb > NYQUIST_LEVEL_WARNING_DB) {
                 warnings.add(Warning.of(NYQUIST_LEVEL_ABOVE_MINUS_40_DB, String.format(Locale.ROOT,
-                        "spectral_level_at_nyquist_db is %s, above %s dB: the pulse model has significant energy "
+                        "spectral_level_at_nyquist_db is %s, above %s dB: the pulse model%s has significant energy "
                                 + "at the Nyquist frequency (a model value; the anti-alias filter decides)",
-                        num(spectralLevelAtNyquistDb), num(NYQUIST_LEVEL_WARNING_DB))));
+                        num(spectralLevelAtNyquistDb), num(NYQUIST_LEVEL_WARNING_DB),
+                        envelope ? "'s detected envelope" : "")));
             }
-            energyAboveNyquistFraction = energyAboveFraction(pulse, nyquistMhz);
-            references.add(Reference.of("spectral level at Nyquist",
-                    SPECTRAL_MODEL + ": -6 ((fs/2 - fc)/(bw fc/2))^2 dB of the Gaussian pulse model"));
-            references.add(Reference.of("energy above Nyquist",
-                    SPECTRAL_MODEL + ": 0.5 erfc((fs/2 - fc)/(sigma_f sqrt 2)) of the model's Gaussian power "
-                            + "spectrum, sigma_f = sqrt(a)/(2 pi); erfc from Apache Commons Math 3.6.1 Erf "
-                            + "(pure-Java arithmetic, platform-independent)"));
+            energyAboveNyquistFraction = envelope
+                    ? envelopeEnergyAboveFraction(pulse, nyquistMhz)
+                    : energyAboveFraction(pulse, nyquistMhz);
+            if (envelope) {
+                references.add(Reference.of("spectral level at Nyquist",
+                        SPECTRAL_MODEL + ": the detected envelope exp(-a t^2) is sampled, its spectrum centred at 0 Hz: "
+                                + "-6 ((fs/2)/(bw fc/2))^2 dB"));
+                references.add(Reference.of("energy above Nyquist",
+                        SPECTRAL_MODEL + ": erfc((fs/2)/(sigma_f sqrt 2)), both tails of the envelope's Gaussian power "
+                                + "spectrum about 0 Hz, sigma_f = sqrt(a)/(2 pi); erfc from Apache Commons Math 3.6.1 Erf "
+                                + "(pure-Java arithmetic, platform-independent)"));
+            } else {
+                references.add(Reference.of("spectral level at Nyquist",
+                        SPECTRAL_MODEL + ": -6 ((fs/2 - fc)/(bw fc/2))^2 dB of the Gaussian pulse model"));
+                references.add(Reference.of("energy above Nyquist",
+                        SPECTRAL_MODEL + ": 0.5 erfc((fs/2 - fc)/(sigma_f sqrt 2)) of the model's Gaussian power "
+                                + "spectrum, sigma_f = sqrt(a)/(2 pi); erfc from Apache Commons Math 3.6.1 Erf "
+                                + "(pure-Java arithmetic, platform-independent)"));
+            }
+            compressedDataAliasing(clock, bandTopMhz, envelope ? "the detected envelope's -6 dB edge"
+                    : "the upper -6 dB band edge", warnings);
             pulseLoss = pulseLoss(pulse, signal, reading, clock, warnings, references);
+        }
+
+        if (!withBandwidth && signal == SampledSignal.RF) {
+            compressedDataAliasing(clock, f, "frequency_mhz", warnings);
         }
 
         // With a tolerance: the required rates.
@@ -277,6 +322,34 @@ public final class SamplingCalculator {
         return 0.5 * Erf.erfc(z);
     }
 
+    /**
+     * Fraction of the energy of the model's detected envelope exp(-a t^2) at |f| above
+     * {@code frequencyMhz}: its power spectrum is a Gaussian of standard deviation
+     * sigma_f = sqrt(a)/(2 pi) about 0 Hz, so both tails together are erfc(f/(sigma_f sqrt 2)), in
+     * [0, 1]. Model value; reference: DOMAIN "Sampling adequacy" (ENVELOPE).
+     */
+    static double envelopeEnergyAboveFraction(GaussianPulse pulse, double frequencyMhz) {
+        return Erf.erfc(frequencyMhz / (pulse.powerSpectrumSigmaMhz() * StrictMath.sqrt(2.0)));
+    }
+
+    /**
+     * PEAK_PRESERVING keeps the amplitude figures at the raw rate, but whatever processes the
+     * compressed data (TFM, SAFT, filtering, FFT) sees fs/m and aliases above fs/(2m): warn when the
+     * band's top reaches it.
+     */
+    private static void compressedDataAliasing(SampleClock clock, double bandTopMhz, String what,
+                                               List<Warning> warnings) {
+        if (clock.decimationFactor() > 1 && clock.decimationMode() == DecimationMode.PEAK_PRESERVING
+                && clock.effectiveSamplingFrequencyMhz() <= 2.0 * bandTopMhz) {
+            warnings.add(Warning.of(COMPRESSED_DATA_ALIASING, String.format(Locale.ROOT,
+                    "decimation_mode PEAK_PRESERVING keeps each group's largest sample, so the amplitude figures follow "
+                            + "the raw rate; but processing of the compressed data (TFM, SAFT, filtering, FFT) sees "
+                            + "fs/m = %s MHz and aliases above fs/(2m) = %s MHz, at or below %s (%s MHz)",
+                    num(clock.effectiveSamplingFrequencyMhz()), num(clock.effectiveSamplingFrequencyMhz() / 2.0),
+                    what, num(bandTopMhz))));
+        }
+    }
+
     private static Optional<Double> pulseLoss(GaussianPulse pulse, SampledSignal signal, PeakReading reading,
                                               SampleClock clock, List<Warning> warnings,
                                               List<Reference> references) {
@@ -308,7 +381,8 @@ public final class SamplingCalculator {
                 "worst case over the sampling phase of the Gaussian pulse model, read as "
                         + (reading == PeakReading.ABSOLUTE ? "max |s|" : "the positive peak")
                         + "; exact search over the phase (split at carrier zeros and at crossings of the sample curves, "
-                        + "Brent's method to 1e-15 of dt), never above the closed form cos(pi/n) exp(-a dt^2/4) (derived)"));
+                        + "Brent's method to 1e-15 of dt), never above the closed form cos(pi/n) exp(-a dt^2/4) (derived). "
+                        + CARRIER_PHASE_NOTE));
         return Optional.of(PulseSamplingLoss.rfLossDb(pulse, intervalUs, reading));
     }
 

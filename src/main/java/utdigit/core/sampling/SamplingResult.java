@@ -24,9 +24,11 @@ import utdigit.core.pulse.CentreFrequencyConvention;
  * @param timingStandardUncertaintyNs dt/sqrt(12), ns
  * @param samplesPerPeriodUpper fs_eff / fu at the upper -6 dB band edge; null without a bandwidth
  * @param spectralLevelAtNyquistDb the pulse model's spectral level at the Nyquist frequency, dB
- *     (<= 0, model value); null without a bandwidth
+ *     (<= 0, model value; with the ENVELOPE signal the envelope's spectrum about 0 Hz); null without
+ *     a bandwidth
  * @param energyAboveNyquistFraction the fraction of the model's energy above the Nyquist frequency
- *     (model value); null without a bandwidth
+ *     (model value; with the ENVELOPE signal the envelope's energy at |f| above it); null without a
+ *     bandwidth
  * @param pulseAmplitudeLossDb worst case over the sampling phase for the Gaussian pulse model, dB;
  *     null without a bandwidth; empty for RF at or below 2 samples per period of the carrier
  * @param requiredSamplesPerPeriod samples per period for the sine bound to stay within the

@@ -37,7 +37,8 @@ public record SamplingAssessmentRequest(
 
         @Schema(description = "How the m samples become one: DROP keeps every m-th sample (amplitude figures at "
                 + "fs/m), PEAK_PRESERVING keeps the largest |sample| of each group (amplitude figures at the raw fs); "
-                + "timing and samples per period follow fs/m in both; default DROP")
+                + "timing and samples per period follow fs/m in both; processing of PEAK_PRESERVING data (TFM, SAFT, "
+                + "filtering, FFT) sees fs/m and aliases above fs/(2m), warned as COMPRESSED_DATA_ALIASING; default DROP")
         DecimationMode decimationMode,
 
         @Schema(description = "-6 dB fractional bandwidth of the probe, % (0 to 200 exclusive); gives the pulse "

@@ -35,13 +35,15 @@ record SamplingAssessmentResponse(
         double nyquistFrequencyMhz,
 
         @Schema(description = "Model value: the Gaussian pulse model's spectral level at the Nyquist frequency, "
-                + "-6 ((fs/2 - fc)/(bw fc/2))^2 dB; optimistic for real probes, the instrument's anti-alias filter "
+                + "-6 ((fs/2 - fc)/(bw fc/2))^2 dB; with signal ENVELOPE the detected envelope's spectrum, centred at "
+                + "0 Hz: -6 ((fs/2)/(bw fc/2))^2 dB; optimistic for real probes, the instrument's anti-alias filter "
                 + "decides what aliases; only with bandwidth_percent", format = "double", example = "-150")
         Double spectralLevelAtNyquistDb,
 
         @Schema(description = "Model value: the fraction (0 to 1) of the Gaussian pulse model's energy above the "
-                + "Nyquist frequency; optimistic for real probes, the instrument's anti-alias filter decides what "
-                + "aliases; only with bandwidth_percent", format = "double", example = "4.7e-17")
+                + "Nyquist frequency; with signal ENVELOPE of the detected envelope's energy at |f| above it (both "
+                + "tails of its spectrum about 0 Hz); optimistic for real probes, the instrument's anti-alias filter "
+                + "decides what aliases; only with bandwidth_percent", format = "double", example = "4.7e-17")
         Double energyAboveNyquistFraction,
 
         @Schema(description = "Classic sine bound: a peak sampled n times per period (at the rate that decides "
