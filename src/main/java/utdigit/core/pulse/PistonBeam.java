@@ -88,4 +88,53 @@ public final class PistonBeam {
         Checks.inRangeHalfOpen("half_angle_deg", halfAngleDeg, 0.0, 90.0);
         return 2.0 * distanceMm * StrictMath.tan(StrictMath.toRadians(halfAngleDeg));
     }
+
+    /**
+     * The aperture an angle beam's part sees in the incidence plane: the element's width D projected
+     * through the refracting interface, D_eff = D cos(beta) / cos(alpha) (alpha the incident angle in
+     * the wedge, beta the refracted angle in the part). The plane perpendicular to incidence keeps D.
+     *
+     * <p>Reference: Krautkraemer, Ultrasonic Testing of Materials (from memory): the virtual probe
+     * of an angle-beam probe.
+     *
+     * @param elementDiameterMm element diameter D, mm, > 0
+     * @param incidentAngleDeg alpha, degrees, in [0, 90)
+     * @param refractedAngleDeg beta, degrees, in [0, 90]
+     * @return D_eff in mm
+     */
+    public static double projectedApertureMm(double elementDiameterMm, double incidentAngleDeg,
+                                             double refractedAngleDeg) {
+        Checks.positive("element_diameter_mm", elementDiameterMm);
+        Checks.inRangeHalfOpen("incident_angle_deg", incidentAngleDeg, 0.0, 90.0);
+        return elementDiameterMm * StrictMath.cos(StrictMath.toRadians(refractedAngleDeg))
+                / StrictMath.cos(StrictMath.toRadians(incidentAngleDeg));
+    }
+
+    /**
+     * The part path equivalent, in the incidence plane, to a wedge path w: w (v_w / v) cos^2(beta) /
+     * cos^2(alpha). In the plane perpendicular to incidence it is w v_w / v, as at normal incidence.
+     * The factor is the tangential-plane transfer of a paraxial beam through a plane interface (its
+     * complex beam parameter scales by (v_w / v) cos^2(beta) / cos^2(alpha)); it makes the near field
+     * of the element in the wedge's material, carried into the part, equal the projected aperture's
+     * near field D_eff^2 / (4 lambda).
+     *
+     * <p>Reference: paraxial beam transfer through a tilted plane interface (H. Kogelnik and T. Li,
+     * Laser Beams and Resonators, Applied Optics 5 (1966); from memory), applied to sound (derived).
+     *
+     * @param wedgePathMm sound path w in the wedge, mm, > 0
+     * @param wedgeVelocityMPerS v_w, m/s, > 0
+     * @param partVelocityMPerS v of the refracted mode, m/s, > 0
+     * @param incidentAngleDeg alpha, degrees, in [0, 90)
+     * @param refractedAngleDeg beta, degrees, in [0, 90]
+     * @return the equivalent path in the part, mm
+     */
+    public static double incidencePlaneWedgePathInPartMm(double wedgePathMm, double wedgeVelocityMPerS,
+            double partVelocityMPerS, double incidentAngleDeg, double refractedAngleDeg) {
+        Checks.positive("wedge_path_mm", wedgePathMm);
+        Checks.positive("wedge_velocity_m_per_s", wedgeVelocityMPerS);
+        Checks.positive("velocity_m_per_s", partVelocityMPerS);
+        double ratio = StrictMath.cos(StrictMath.toRadians(refractedAngleDeg))
+                / StrictMath.cos(StrictMath.toRadians(incidentAngleDeg));
+        return wedgePathMm * wedgeVelocityMPerS / partVelocityMPerS * ratio * ratio;
+    }
 }

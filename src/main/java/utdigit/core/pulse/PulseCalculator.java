@@ -57,6 +57,8 @@ public final class PulseCalculator {
     public static final String NO_BEAM_DIAMETER_6DB = "NO_BEAM_DIAMETER_6DB";
     public static final String DISTANCE_IN_NEAR_FIELD = "DISTANCE_IN_NEAR_FIELD";
     public static final String PART_IN_FAR_FIELD_ONLY = "PART_IN_FAR_FIELD_ONLY";
+    public static final String DISTANCE_IN_INCIDENCE_PLANE_NEAR_FIELD = "DISTANCE_IN_INCIDENCE_PLANE_NEAR_FIELD";
+    public static final String NO_INCIDENCE_PLANE_BEAM_DIAMETER_6DB = "NO_INCIDENCE_PLANE_BEAM_DIAMETER_6DB";
     public static final String PAST_CRITICAL_ANGLE = "PAST_CRITICAL_ANGLE";
 
     /**
@@ -190,8 +192,14 @@ public final class PulseCalculator {
                 warnings.add(Warning.of(PAST_CRITICAL_ANGLE, "incident_angle_deg " + fmt(incidentDeg)
                         + " is at or past the critical angle " + fmt(criticalDeg) + " deg (wedge_velocity_m_per_s "
                         + fmt(wedgeVelocityMPerS) + " into velocity_m_per_s " + fmt(velocityMPerS)
-                        + "): no refracted wave of this mode enters the part, refracted_angle_deg does not exist"));
+                        + "): no refracted wave of this mode enters the part, refracted_angle_deg does not exist"
+                        + (in.elementDiameterMm() != null ? ", nor do the incidence_plane_* figures" : "")));
             }
+        }
+
+        PulseResult.IncidencePlane incidencePlane = null;
+        if (in.incidentAngleDeg() != null && in.elementDiameterMm() != null) {
+            incidencePlane = incidencePlane(in, wavelengthMm, refractedAngleDeg, warnings, references);
         }
 
         return new PulseResult(
@@ -218,8 +226,69 @@ public final class PulseCalculator {
                 beamDiameter6dbMm,
                 nearFieldInPartMm,
                 refractedAngleDeg,
+                incidencePlane,
                 warnings,
                 references);
+    }
+
+    /**
+     * The angle beam's figures in the incidence plane from the projected aperture D_eff =
+     * D cos(beta)/cos(alpha): near field, near field left in the part, beam spread and beam width.
+     * All empty past the critical angle (PAST_CRITICAL_ANGLE says why).
+     */
+    private static PulseResult.IncidencePlane incidencePlane(PulseInput in, double wavelengthMm,
+            Optional<Double> refractedAngleDeg, List<Warning> warnings, List<Reference> references) {
+        if (refractedAngleDeg.isEmpty()) {
+            Optional<Double> none = Optional.empty();
+            return new PulseResult.IncidencePlane(none, none, in.wedgePathMm() == null ? null : none, none, none,
+                    in.distanceMm() == null ? null : none);
+        }
+        double alphaDeg = in.incidentAngleDeg();
+        double betaDeg = refractedAngleDeg.get();
+        double apertureMm = PistonBeam.projectedApertureMm(in.elementDiameterMm(), alphaDeg, betaDeg);
+        double nearFieldMm = PistonBeam.nearFieldLengthMm(apertureMm, wavelengthMm);
+        references.add(Reference.of("incidence plane of an angle beam",
+                "the part sees the projected aperture D_eff = D cos(beta)/cos(alpha) in the incidence plane "
+                        + "(Krautkraemer, Ultrasonic Testing of Materials, from memory); near field D_eff^2/(4 lambda) and "
+                        + "beam spread with D_eff there; the plane perpendicular to incidence keeps D (the other beam "
+                        + "fields)"));
+        Optional<Double> beamSpread6 = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
+                wavelengthMm, apertureMm, NO_BEAM_SPREAD_6DB, "incidence_plane_beam_spread_6db_deg",
+                "the pulse-echo -6 dB level", warnings);
+        Optional<Double> beamSpread20 = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
+                wavelengthMm, apertureMm, NO_BEAM_SPREAD_20DB, "incidence_plane_beam_spread_20db_deg",
+                "the pulse-echo -20 dB level", warnings);
+        Optional<Double> nearFieldInPart = null;
+        if (in.wedgePathMm() != null) {
+            nearFieldInPart = Optional.of(nearFieldMm - PistonBeam.incidencePlaneWedgePathInPartMm(in.wedgePathMm(),
+                    in.wedgeVelocityMPerS(), in.velocityMPerS(), alphaDeg, betaDeg));
+            references.add(Reference.of("near field in the part, incidence plane",
+                    "D_eff^2/(4 lambda) - w (v_w/v) cos^2(beta)/cos^2(alpha): the wedge path carried into the part by "
+                            + "the tangential-plane transfer of a paraxial beam through a plane interface (Kogelnik and "
+                            + "Li 1966, from memory; derived for sound)"));
+        }
+        Optional<Double> beamDiameter = null;
+        if (in.distanceMm() != null) {
+            double distanceMm = in.distanceMm();
+            double nearFieldAheadMm = nearFieldInPart != null ? nearFieldInPart.get() : nearFieldMm;
+            if (beamSpread6.isEmpty()) {
+                beamDiameter = Optional.empty();
+                warnings.add(Warning.of(NO_INCIDENCE_PLANE_BEAM_DIAMETER_6DB, "without a pulse-echo -6 dB beam-spread "
+                        + "angle of the projected aperture (" + fmt(apertureMm) + " mm) the beam does not narrow to a "
+                        + "-6 dB width in the incidence plane: incidence_plane_beam_diameter_6db_mm does not exist"));
+            } else if (distanceMm < nearFieldAheadMm) {
+                beamDiameter = Optional.empty();
+                warnings.add(Warning.of(DISTANCE_IN_INCIDENCE_PLANE_NEAR_FIELD, "distance_mm " + fmt(distanceMm)
+                        + " lies inside the incidence plane's near field (" + fmt(nearFieldAheadMm) + " mm"
+                        + (nearFieldInPart != null ? " left in the part" : "") + ", projected aperture "
+                        + fmt(apertureMm) + " mm): the far-field cone does not hold there, so "
+                        + "incidence_plane_beam_diameter_6db_mm is null"));
+            } else {
+                beamDiameter = Optional.of(PistonBeam.beamDiameterMm(distanceMm, beamSpread6.get()));
+            }
+        }
+        return new PulseResult.IncidencePlane(Optional.of(apertureMm), Optional.of(nearFieldMm), nearFieldInPart,
+                beamSpread6, beamSpread20, beamDiameter);
     }
 
     /** The band results, all null without a bandwidth. */

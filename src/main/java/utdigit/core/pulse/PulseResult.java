@@ -37,6 +37,9 @@ import utdigit.core.common.Warning;
  *     inside the near field (the far-field cone does not hold there)
  * @param nearFieldInPartMm near field left in the part behind the wedge, mm (negative: none)
  * @param refractedAngleDeg refracted angle in the part, degrees; empty past the critical angle
+ * @param incidencePlane the angle beam's figures in the incidence plane, from the projected
+ *     aperture D cos(beta)/cos(alpha); null without element diameter and incident angle (the other
+ *     beam figures are then those of the plane perpendicular to incidence, with D)
  * @param warnings conditions the caller should know about
  * @param references the source of every formula used
  */
@@ -64,12 +67,36 @@ public record PulseResult(
         Optional<Double> beamDiameter6dbMm,
         Double nearFieldInPartMm,
         Optional<Double> refractedAngleDeg,
+        IncidencePlane incidencePlane,
         List<Warning> warnings,
         List<Reference> references) {
 
     public PulseResult {
         warnings = List.copyOf(Objects.requireNonNull(warnings, "warnings"));
         references = List.copyOf(Objects.requireNonNull(references, "references"));
+    }
+
+    /**
+     * An angle beam's near field and beam spread in the incidence plane, where the part sees the
+     * projected aperture D_eff = D cos(beta)/cos(alpha). Every field is empty past the critical angle
+     * (no refracted wave); a boxed field is null when its optional input was not given.
+     *
+     * @param apertureMm D_eff, mm
+     * @param nearFieldLengthMm D_eff^2 / (4 lambda), mm
+     * @param nearFieldInPartMm D_eff^2 / (4 lambda) - w (v_w/v) cos^2(beta)/cos^2(alpha), mm; null
+     *     without a wedge path (negative: the part sees only far field in this plane)
+     * @param beamSpread6dbDeg pulse-echo -6 dB half-angle with D_eff, degrees
+     * @param beamSpread20dbDeg pulse-echo -20 dB half-angle with D_eff, degrees
+     * @param beamDiameter6dbMm -6 dB beam width in this plane at the distance, mm; null without a
+     *     distance; empty inside this plane's near field or without a -6 dB angle
+     */
+    public record IncidencePlane(
+            Optional<Double> apertureMm,
+            Optional<Double> nearFieldLengthMm,
+            Optional<Double> nearFieldInPartMm,
+            Optional<Double> beamSpread6dbDeg,
+            Optional<Double> beamSpread20dbDeg,
+            Optional<Double> beamDiameter6dbMm) {
     }
 
     /** Whether a warning with this code was given. */

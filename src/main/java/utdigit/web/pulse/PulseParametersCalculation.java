@@ -61,12 +61,17 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
                 null, null, null, null, q.bandwidthPercent(),
                 q.bandwidthPercent() == null ? null : r.centreFrequencyConvention(),
                 diameterMm, null, distanceMm, null, wedgePathMm, null, q.wedgeVelocityMPerS(), q.incidentAngleDeg());
+        PulseResult.IncidencePlane plane = r.incidencePlane();
         return new PulseParametersResponse(r.periodUs(), r.wavelengthMm(), r.wavelengthIn(),
                 r.lowerFrequencyMhz(), r.upperFrequencyMhz(), r.lowerFrequency20dbMhz(), r.upperFrequency20dbMhz(),
                 r.lowerFrequency40dbMhz(), r.upperFrequency40dbMhz(), r.pulseDuration6dbUs(), r.pulseDuration20dbUs(),
                 r.cycles6db(), r.spatialPulseLengthMm(), r.axialResolutionMm(), r.nearFieldLengthMm(),
                 r.nearFieldLengthExactMm(), r.beamSpread6dbDeg(), r.beamSpread20dbDeg(), r.beamSpreadNullDeg(),
-                r.beamDiameter6dbMm(), r.nearFieldInPartMm(), r.refractedAngleDeg(), inputs,
+                r.beamDiameter6dbMm(), r.nearFieldInPartMm(), r.refractedAngleDeg(),
+                plane == null ? null : plane.apertureMm(), plane == null ? null : plane.nearFieldLengthMm(),
+                plane == null ? null : plane.nearFieldInPartMm(), plane == null ? null : plane.beamSpread6dbDeg(),
+                plane == null ? null : plane.beamSpread20dbDeg(), plane == null ? null : plane.beamDiameter6dbMm(),
+                inputs,
                 VelocitySourceView.of(velocity), ResultNotes.warnings(r.warnings()),
                 ResultNotes.references(r.references()));
     }

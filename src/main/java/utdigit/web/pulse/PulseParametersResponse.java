@@ -43,12 +43,14 @@ record PulseParametersResponse(
         @Schema(description = "Axial (range) resolution, half the spatial pulse length, mm (common practice)",
                 format = "double", example = "0.87")
         Double axialResolutionMm,
-        @Schema(description = "Near-field length D^2 / (4 lambda), mm", format = "double", example = "21.1")
+        @Schema(description = "Near-field length D^2 / (4 lambda), mm; for an angle beam the plane perpendicular "
+                + "to incidence (see incidence_plane_near_field_length_mm)", format = "double", example = "21.1")
         Double nearFieldLengthMm,
         @Schema(description = "Last on-axis maximum (D^2 - lambda^2) / (4 lambda), mm; null when D <= lambda",
                 format = "double", types = {"number", "null"}, example = "20.8")
         Optional<Double> nearFieldLengthExactMm,
-        @Schema(description = "Pulse-echo (two-way) -6 dB beam-spread half-angle, deg; null when none exists",
+        @Schema(description = "Pulse-echo (two-way) -6 dB beam-spread half-angle with D, deg (for an angle beam: "
+                + "the plane perpendicular to incidence); null when none exists",
                 format = "double", types = {"number", "null"}, example = "3.49")
         Optional<Double> beamSpread6dbDeg,
         @Schema(description = "Pulse-echo (two-way) -20 dB beam-spread half-angle, deg; null when none exists",
@@ -57,15 +59,41 @@ record PulseParametersResponse(
         @Schema(description = "Half-angle to the first null of the far-field directivity, deg; null when none exists",
                 format = "double", types = {"number", "null"}, example = "8.3")
         Optional<Double> beamSpreadNullDeg,
-        @Schema(description = "Beam diameter at the distance, 2 z tan(theta -6 dB), mm; null when no angle exists",
+        @Schema(description = "Beam diameter at the distance, 2 z tan(theta -6 dB), mm (for an angle beam: the "
+                + "plane perpendicular to incidence); null inside the near field, where the far-field cone does not "
+                + "hold, or when no angle exists",
                 format = "double", types = {"number", "null"}, example = "6.1")
         Optional<Double> beamDiameter6dbMm,
-        @Schema(description = "Near field left in the part behind the wedge or delay line, N - w v_w / v, mm; "
-                + "negative: the part sees only far field", format = "double", example = "15.6")
+        @Schema(description = "Near field left in the part behind the wedge or delay line, N - w v_w / v, mm (for "
+                + "an angle beam: the plane perpendicular to incidence); negative: the part sees only far field",
+                format = "double", example = "15.6")
         Double nearFieldInPartMm,
         @Schema(description = "Refracted angle in the part by Snell's law, deg; null past the critical angle",
                 format = "double", types = {"number", "null"}, example = "45.3")
         Optional<Double> refractedAngleDeg,
+        @Schema(description = "Angle beam, incidence plane (with element_diameter and incident_angle_deg): the "
+                + "projected aperture the part sees, D cos(beta)/cos(alpha), mm; null past the critical angle. The "
+                + "other near-field and beam fields then hold for the plane perpendicular to incidence (full D)",
+                format = "double", types = {"number", "null"}, example = "7.73")
+        Optional<Double> incidencePlaneApertureMm,
+        @Schema(description = "Angle beam, incidence plane: near field of the projected aperture D_eff^2/(4 lambda), "
+                + "mm; null past the critical angle", format = "double", types = {"number", "null"}, example = "12.6")
+        Optional<Double> incidencePlaneNearFieldLengthMm,
+        @Schema(description = "Angle beam, incidence plane (with wedge_path): near field left in the part, "
+                + "D_eff^2/(4 lambda) - w (v_w/v) cos^2(beta)/cos^2(alpha), mm; negative: only far field in this "
+                + "plane; null past the critical angle", format = "double", types = {"number", "null"},
+                example = "9.8")
+        Optional<Double> incidencePlaneNearFieldInPartMm,
+        @Schema(description = "Angle beam, incidence plane: pulse-echo (two-way) -6 dB beam-spread half-angle with "
+                + "D_eff, deg; null when none exists", format = "double", types = {"number", "null"}, example = "2.9")
+        Optional<Double> incidencePlaneBeamSpread6dbDeg,
+        @Schema(description = "Angle beam, incidence plane: pulse-echo (two-way) -20 dB beam-spread half-angle with "
+                + "D_eff, deg; null when none exists", format = "double", types = {"number", "null"}, example = "4.9")
+        Optional<Double> incidencePlaneBeamSpread20dbDeg,
+        @Schema(description = "Angle beam, incidence plane (with distance): -6 dB beam width 2 z tan(theta) with "
+                + "D_eff's angle, mm; null inside this plane's near field or when no angle exists", format = "double",
+                types = {"number", "null"}, example = "5.1")
+        Optional<Double> incidencePlaneBeamDiameter6dbMm,
         @Schema(description = "The normalised request, with every default that has an effect; itself a valid "
                 + "request that reproduces this answer")
         PulseParametersRequest inputs,

@@ -237,6 +237,32 @@ class PulseParametersApiTest extends ApiTest {
     }
 
     @Test
+    void angleBeamGivesTheIncidencePlaneFromTheProjectedAperture() {
+        // 45 deg shear in steel from a 2730 m/s wedge: alpha = asin(sin 45 x 2730/3255); the part sees
+        // D cos(beta)/cos(alpha) in the incidence plane (Krautkraemer, from memory), D in the other plane.
+        double alpha = Math.asin(Math.sin(Math.toRadians(45.0)) * 2730.0 / STEEL_SHEAR_M_PER_S);
+        double aperture = 10.0 * Math.cos(Math.toRadians(45.0)) / Math.cos(alpha);
+        double lambda = wavelengthMm(STEEL_SHEAR_M_PER_S, 5.0);
+        post(PATH, String.format(java.util.Locale.ROOT, """
+                {"frequency_mhz": 5, "velocity_m_per_s": %s, "element_diameter_mm": 10,
+                 "wedge_velocity_m_per_s": 2730, "incident_angle_deg": %s, "distance_mm": 60}""",
+                STEEL_SHEAR_M_PER_S, Math.toDegrees(alpha)))
+                .statusCode(200)
+                .body("refracted_angle_deg", closedForm(45.0))
+                .body("incidence_plane_aperture_mm", closedForm(aperture))
+                .body("incidence_plane_near_field_length_mm", closedForm(aperture * aperture / (4 * lambda)))
+                .body("near_field_length_mm", closedForm(100.0 / (4 * lambda)))
+                .body("incidence_plane_beam_spread_6db_deg", near(halfAngleDeg(twoWayConstant(6.0), lambda, aperture),
+                        SOLVED_CONSTANT_RELATIVE_ERROR))
+                .body("$", hasKey("incidence_plane_beam_diameter_6db_mm"))
+                .body("$", not(hasKey("incidence_plane_near_field_in_part_mm")));
+        post(PATH, """
+                {"frequency_mhz": 5, "velocity_m_per_s": 5920, "element_diameter_mm": 10}""")
+                .statusCode(200)
+                .body("$", not(hasKey("incidence_plane_aperture_mm")));
+    }
+
+    @Test
     void shearWaveRefractedAngleFromAWedgeBySnell() {
         // Snell: sin(theta_r) = sin(36 deg) x 3255 / 2730 (ISO 22232-2 steel shear velocity 3255 m/s)
         double expected = Math.toDegrees(Math.asin(Math.sin(Math.toRadians(36.0)) * STEEL_SHEAR_M_PER_S / 2730.0));
