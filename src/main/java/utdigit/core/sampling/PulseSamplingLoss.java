@@ -64,7 +64,7 @@ public final class PulseSamplingLoss {
      */
     public static double sineBoundLossDb(double samplesPerPeriod) {
         requireAboveTwo(samplesPerPeriod);
-        return -Decibels.fromRatio(StrictMath.cos(StrictMath.PI / samplesPerPeriod));
+        return 0.0 - Decibels.fromRatio(StrictMath.cos(StrictMath.PI / samplesPerPeriod));
     }
 
     /**
@@ -119,7 +119,7 @@ public final class PulseSamplingLoss {
 
     /** {@link #closedFormBoundRatio} as a loss in dB: the sine bound plus the envelope loss. */
     public static double closedFormBoundLossDb(GaussianPulse pulse, double samplingIntervalUs) {
-        return -Decibels.fromRatio(closedFormBoundRatio(pulse, samplingIntervalUs));
+        return 0.0 - Decibels.fromRatio(closedFormBoundRatio(pulse, samplingIntervalUs));
     }
 
     /**
@@ -148,7 +148,7 @@ public final class PulseSamplingLoss {
      * @return the loss in dB, >= 0
      */
     public static double rfLossDb(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading) {
-        return -Decibels.fromRatio(rfReadRatio(pulse, samplingIntervalUs, reading));
+        return 0.0 - Decibels.fromRatio(rfReadRatio(pulse, samplingIntervalUs, reading));
     }
 
     /**
@@ -159,7 +159,7 @@ public final class PulseSamplingLoss {
      */
     public static double rfLossDb(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading,
                                   SearchBudget budget) {
-        return -Decibels.fromRatio(rfReadRatio(pulse, samplingIntervalUs, reading, budget));
+        return 0.0 - Decibels.fromRatio(rfReadRatio(pulse, samplingIntervalUs, reading, budget));
     }
 
     /**

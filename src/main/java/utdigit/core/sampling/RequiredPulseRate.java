@@ -2,7 +2,8 @@ package utdigit.core.sampling;
 
 import java.util.Objects;
 import java.util.Optional;
-import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.analysis.UnivariateFunction;
+import org.apache.commons.math3.analysis.solvers.BisectionSolver;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Decibels;
 import utdigit.core.common.SearchBudget;
@@ -60,8 +61,8 @@ public final class RequiredPulseRate {
      * within X dB.
      *
      * <p>Method: the answer lies between two rates known without a search. Above: the rate fs0
-     * where the closed-form bound cos(pi fc/fs) exp(-a/(4 fs^2)) equals 10^(-X/20) (Brent's
-     * method, Apache Commons Math BrentSolver; the bound falls monotonically with fs, so every
+     * where the closed-form bound cos(pi fc/fs) exp(-a/(4 fs^2)) equals 10^(-X/20) (bisection,
+     * Apache Commons Math BisectionSolver; the bound falls monotonically with fs, so every
      * faster rate passes). Below: the highest resonant rate {@link #highestFailingResonance}
      * n = p samples per carrier period whose sine bound exceeds X, which fails for every pulse
      * (at n = p/q the samples fall on a lattice of carrier phases 1/p apart, so a phase exists
@@ -181,9 +182,9 @@ public final class RequiredPulseRate {
     /**
      * The rate, MHz, where the closed-form bound of the read RF amplitude,
      * cos(pi fc dt) exp(-a dt^2/4), equals 10^(-X/20): every faster rate keeps the RF pulse loss
-     * within X dB. Solved for dt in (0, arccos(10^(-X/20))/(pi fc)] with Brent's method on the log
-     * of the bound (Apache Commons Math BrentSolver, 1e-15 relative). Reference: DOMAIN
-     * "Sampling adequacy" (derived).
+     * within X dB. Solved for dt in (0, arccos(10^(-X/20))/(pi fc)] by bisection on the log of
+     * the bound (Apache Commons Math BisectionSolver, to 1e-15 of the bracket: at most 120 values); NaN when the interval is not
+     * a finite positive double. Reference: DOMAIN "Sampling adequacy" (derived).
      */
     public static double closedFormBoundRateMhz(GaussianPulse pulse, double amplitudeToleranceDb) {
         Checks.positive("amplitude_tolerance_db", amplitudeToleranceDb);
@@ -192,10 +193,17 @@ public final class RequiredPulseRate {
         double a = pulse.envelopeRatePerUs2();
         // At the sine-only interval the bound is already below the tolerance (envelope factor < 1).
         double sineOnlyIntervalUs = StrictMath.acos(Decibels.toRatio(-amplitudeToleranceDb)) / (StrictMath.PI * fc);
-        BrentSolver solver = new BrentSolver(1e-15, sineOnlyIntervalUs * 1e-15);
-        double intervalUs = solver.solve(1000,
-                dt -> StrictMath.log(StrictMath.cos(StrictMath.PI * fc * dt)) - a * dt * dt / 4.0 - logRatio,
-                0.0, sineOnlyIntervalUs);
+        if (!(sineOnlyIntervalUs > 0.0) || Double.isInfinite(sineOnlyIntervalUs)) {
+            return Double.NaN; // a tolerance that rounds to 0 dB, or a carrier beyond double range: no finite rate
+        }
+        UnivariateFunction excess =
+                dt -> StrictMath.log(StrictMath.cos(StrictMath.PI * fc * dt)) - a * dt * dt / 4.0 - logRatio;
+        if (!(excess.value(sineOnlyIntervalUs) < 0.0)) {
+            return 1.0 / sineOnlyIntervalUs; // the envelope factor rounds to 1: the sine-only interval is the root
+        }
+        // Bisection halves the bracket each time: at most 51 halvings of 2 values to 1e-15 of it.
+        double accuracyUs = StrictMath.max(sineOnlyIntervalUs * 1e-15, 2.0 * StrictMath.ulp(sineOnlyIntervalUs));
+        double intervalUs = new BisectionSolver(accuracyUs).solve(120, excess, 0.0, sineOnlyIntervalUs);
         return 1.0 / intervalUs;
     }
 

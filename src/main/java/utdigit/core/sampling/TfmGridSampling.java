@@ -67,7 +67,7 @@ public final class TfmGridSampling {
         if (!(stepMm < wavelengthMm / 4.0)) {
             throw CalculationException.invalid("tfm_grid_spacing_mm", stepMm, "must be below lambda/4 for a bound");
         }
-        return -Decibels.fromRatio(StrictMath.cos(2.0 * StrictMath.PI * stepMm / wavelengthMm));
+        return 0.0 - Decibels.fromRatio(StrictMath.cos(2.0 * StrictMath.PI * stepMm / wavelengthMm));
     }
 
     /**

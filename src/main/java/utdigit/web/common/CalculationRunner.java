@@ -203,6 +203,10 @@ public class CalculationRunner implements DisposableBean {
         }
     }
 
+    private static boolean isNegativeZero(JsonNode v) {
+        return v.isDouble() && Double.doubleToRawLongBits(v.doubleValue()) == Long.MIN_VALUE;
+    }
+
     private static void replaceNonFinite(JsonNode node, String pointer, List<String> found) {
         if (node instanceof ObjectNode object) {
             for (Map.Entry<String, JsonNode> e : new ArrayList<>(object.properties())) {
@@ -211,6 +215,8 @@ public class CalculationRunner implements DisposableBean {
                 if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
                     object.putNull(e.getKey());
                     found.add(p);
+                } else if (isNegativeZero(v)) {
+                    object.put(e.getKey(), 0.0); // as the stamp's canonical form writes it: no "-0.0"
                 } else {
                     replaceNonFinite(v, p, found);
                 }
@@ -221,6 +227,8 @@ public class CalculationRunner implements DisposableBean {
                 if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
                     array.set(i, array.nullNode());
                     found.add(pointer + "/" + i);
+                } else if (isNegativeZero(v)) {
+                    array.set(i, array.numberNode(0.0));
                 } else {
                     replaceNonFinite(v, pointer + "/" + i, found);
                 }
