@@ -279,7 +279,8 @@ class BatchProcessor implements DisposableBean {
     /** One row's answer: OK with the single endpoint's answer, or INVALID with its problem. */
     ObjectNode answer(String calculation, Row row) {
         JsonNode body = row.body();
-        String id = body != null && body.path("sheet_id").isString() ? body.get("sheet_id").stringValue() : null;
+        String id = body != null && body.path("sheet_id").isString()
+                ? utdigit.web.common.IJson.printable(body.get("sheet_id").stringValue()) : null;
         if (!row.readable()) {
             return problemRow(row.number(), id, row.readProblem(), row.readDetail(), row.readErrors());
         }
