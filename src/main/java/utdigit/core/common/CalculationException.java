@@ -34,7 +34,7 @@ public final class CalculationException extends RuntimeException {
         return new CalculationException(
                 CalculationError.INVALID_INPUT,
                 List.of(field),
-                CalculationError.INVALID_INPUT.format(field, value, requirement));
+                CalculationError.INVALID_INPUT.format(field, value + 0.0, requirement)); // -0.0 + 0.0 is 0.0: no "-0" in a text
     }
 
     /**

@@ -2,9 +2,11 @@ package utdigit.core.sampling;
 
 import java.util.Objects;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Decibels;
+import utdigit.core.common.SearchBudget;
 import utdigit.core.pulse.GaussianPulse;
 
 /**
@@ -21,8 +23,20 @@ public final class PulseSamplingLoss {
     /** ln 10, for dB of an exponential: -20 log10(exp(-x)) = 20 x / ln 10. */
     private static final double LN_10 = StrictMath.log(10.0);
 
-    /** Recursion depth after which the search falls back to the (conservative) closed-form bound. */
+    /** Recursion depth at which the phase search counts as exhausted (its budget is reached). */
     private static final int MAX_DEPTH = 200;
+
+    /**
+     * The work bound of one phase search ({@link #rfLossDb}), in values of the pulse s(t)
+     * computed: 1,000,000 (some tens of ms on one core; a search at 1 % bandwidth needs a few ten thousand). A search that would need more reports
+     * {@link SearchBudget.Exhausted}; that happens only for pulses close to a continuous wave
+     * (bandwidths far below 1 %), whose walk over the samples of one phase alone is long. The
+     * bound is a count, not a time, so an answer never depends on the machine's load.
+     */
+    public static final long PHASE_SEARCH_BUDGET = 1_000_000;
+
+    /** Brent's method's own evaluation limit at one crossing of two sample curves. */
+    private static final int CROSSING_MAX_EVALUATIONS = 200;
 
     /**
      * Two candidate maxima are treated as tied within this relative difference (rounding of
@@ -50,7 +64,7 @@ public final class PulseSamplingLoss {
      */
     public static double sineBoundLossDb(double samplesPerPeriod) {
         requireAboveTwo(samplesPerPeriod);
-        return -Decibels.fromRatio(StrictMath.cos(StrictMath.PI / samplesPerPeriod));
+        return 0.0 - Decibels.fromRatio(StrictMath.cos(StrictMath.PI / samplesPerPeriod));
     }
 
     /**
@@ -105,7 +119,7 @@ public final class PulseSamplingLoss {
 
     /** {@link #closedFormBoundRatio} as a loss in dB: the sine bound plus the envelope loss. */
     public static double closedFormBoundLossDb(GaussianPulse pulse, double samplingIntervalUs) {
-        return -Decibels.fromRatio(closedFormBoundRatio(pulse, samplingIntervalUs));
+        return 0.0 - Decibels.fromRatio(closedFormBoundRatio(pulse, samplingIntervalUs));
     }
 
     /**
@@ -134,17 +148,50 @@ public final class PulseSamplingLoss {
      * @return the loss in dB, >= 0
      */
     public static double rfLossDb(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading) {
-        return -Decibels.fromRatio(rfReadRatio(pulse, samplingIntervalUs, reading));
+        return 0.0 - Decibels.fromRatio(rfReadRatio(pulse, samplingIntervalUs, reading));
+    }
+
+    /**
+     * {@link #rfLossDb} within a work bound.
+     *
+     * @throws SearchBudget.Exhausted when the search would exceed {@code budget}
+     * @throws SearchBudget.Cancelled when the running thread is interrupted
+     */
+    public static double rfLossDb(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading,
+                                  SearchBudget budget) {
+        return 0.0 - Decibels.fromRatio(rfReadRatio(pulse, samplingIntervalUs, reading, budget));
     }
 
     /**
      * The worst-case read amplitude of {@link #rfLossDb} as a ratio of the true peak, in (0, 1].
      */
     public static double rfReadRatio(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading) {
+        return rfReadRatio(pulse, samplingIntervalUs, reading, SearchBudget.of(PHASE_SEARCH_BUDGET));
+    }
+
+    /** {@link #rfReadRatio} within a work bound (see {@link #rfLossDb(GaussianPulse, double, PeakReading, SearchBudget)}). */
+    public static double rfReadRatio(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading,
+                                     SearchBudget budget) {
         Objects.requireNonNull(pulse, "pulse");
         Objects.requireNonNull(reading, "peak_reading");
         double bound = closedFormBoundRatio(pulse, samplingIntervalUs);
-        return new PhaseSearch(pulse, samplingIntervalUs, reading, bound).minimumReadRatio();
+        return new PhaseSearch(pulse, samplingIntervalUs, reading, bound, budget).minimumReadRatio();
+    }
+
+    /**
+     * An upper bound of the samples one evaluation of the read amplitude visits: the walk stops at
+     * the first |t| where the envelope exp(-a t^2) falls to the closed-form bound B (the sample
+     * nearest the peak already reads at least B), so it visits at most 2 sqrt(-ln B / a)/dt + 3
+     * samples; about 2.35/bw + 3 for a fractional bandwidth bw, whatever the rate. Infinite when
+     * the envelope does not fall (a = 0 after rounding, a bandwidth near 1e-300).
+     */
+    static double walkLengthBound(double envelopeRatePerUs2, double samplingIntervalUs, double boundRatio) {
+        double minusLogBound = -StrictMath.log(boundRatio);
+        if (!(minusLogBound > 0.0)) {
+            return 3.0; // B = 1 to the last bit: the first sample reads 1 and the walk stops
+        }
+        double half = StrictMath.sqrt(minusLogBound / envelopeRatePerUs2) / samplingIntervalUs; // +infinity when a = 0
+        return 2.0 * half + 3.0;
     }
 
     /**
@@ -153,12 +200,12 @@ public final class PulseSamplingLoss {
      * at most that): exact, and cheap for rates that fail.
      */
     static boolean rfLossWithin(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading,
-                                double toleranceDb) {
+                                double toleranceDb, SearchBudget budget) {
         double bound = closedFormBoundRatio(pulse, samplingIntervalUs);
         if (-Decibels.fromRatio(bound) <= toleranceDb) {
             return true; // the loss never exceeds the closed form
         }
-        PhaseSearch search = new PhaseSearch(pulse, samplingIntervalUs, reading, bound);
+        PhaseSearch search = new PhaseSearch(pulse, samplingIntervalUs, reading, bound, budget);
         search.stopBelow = Decibels.toRatio(-toleranceDb) * (1.0 - STOP_MARGIN_RELATIVE);
         double ratio = search.minimumReadRatio();
         return !(ratio < search.stopBelow) && -Decibels.fromRatio(ratio) <= toleranceDb;
@@ -179,6 +226,7 @@ public final class PulseSamplingLoss {
         private final double samplingIntervalUs;
         private final boolean absolute;
         private final double boundRatio;
+        private final SearchBudget budget;
         private BrentSolver solver;
 
         /** The search may stop at the first phase reading below this (no threshold: -infinity). */
@@ -188,16 +236,22 @@ public final class PulseSamplingLoss {
         private double lastMaximum;
         private int lastIndex;
 
-        PhaseSearch(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading, double boundRatio) {
+        PhaseSearch(GaussianPulse pulse, double samplingIntervalUs, PeakReading reading, double boundRatio,
+                    SearchBudget budget) {
             this.envelopeRatePerUs2 = pulse.envelopeRatePerUs2();
             this.carrierMhz = pulse.carrierMhz();
             this.angularFrequencyRadPerUs = 2.0 * StrictMath.PI * pulse.carrierMhz();
             this.samplingIntervalUs = samplingIntervalUs;
             this.absolute = reading == PeakReading.ABSOLUTE;
             this.boundRatio = boundRatio;
+            this.budget = Objects.requireNonNull(budget, "budget");
         }
 
         double minimumReadRatio() {
+            // Refuse at once what cannot fit: the two end evaluations alone would exceed the budget.
+            if (budget.wouldExceed(2.0 * walkLengthBound(envelopeRatePerUs2, samplingIntervalUs, boundRatio))) {
+                throw SearchBudget.Exhausted.predicted(budget);
+            }
             double right = samplingIntervalUs / 2.0;
             evaluate(0.0);
             double leftMaximum = lastMaximum;
@@ -216,6 +270,7 @@ public final class PulseSamplingLoss {
 
         /** The read value of sample k at phase phi: |s| or s at t = k dt + phi. */
         double sampleValue(int k, double phaseUs) {
+            budget.spend(1);
             double t = k * samplingIntervalUs + phaseUs;
             double v = StrictMath.exp(-envelopeRatePerUs2 * t * t) * StrictMath.cos(angularFrequencyRadPerUs * t);
             return absolute ? StrictMath.abs(v) : v;
@@ -230,6 +285,7 @@ public final class PulseSamplingLoss {
             double maximum = Double.NEGATIVE_INFINITY;
             int index = 0;
             for (int j = 0; ; j++) {
+                budget.spend(1); // bounds the walk: the envelope may not fall within any budget
                 int k = (j & 1) == 0 ? j / 2 : -(j + 1) / 2;
                 double t = k * samplingIntervalUs + phaseUs;
                 double envelope = StrictMath.exp(-envelopeRatePerUs2 * t * t);
@@ -271,7 +327,7 @@ public final class PulseSamplingLoss {
         double minimumOver(double leftUs, double leftMaximum, int leftIndex,
                            double rightUs, double rightMaximum, int rightIndex, int depth) {
             if (depth > MAX_DEPTH) {
-                return boundRatio; // not reached in practice; conservative
+                throw SearchBudget.Exhausted.predicted(budget); // not reached in the tests' ranges
             }
             double zeroUs = zeroInside(leftIndex, leftUs, rightUs);
             if (Double.isNaN(zeroUs)) {
@@ -330,8 +386,12 @@ public final class PulseSamplingLoss {
             if (solver == null) {
                 solver = new BrentSolver(2e-16, samplingIntervalUs * 1e-15);
             }
-            return solver.solve(1000, phase -> sampleValue(leftIndex, phase) - sampleValue(rightIndex, phase),
-                    leftUs, rightUs);
+            try {
+                return solver.solve(CROSSING_MAX_EVALUATIONS,
+                        phase -> sampleValue(leftIndex, phase) - sampleValue(rightIndex, phase), leftUs, rightUs);
+            } catch (TooManyEvaluationsException e) {
+                throw SearchBudget.Exhausted.predicted(budget);
+            }
         }
     }
 }

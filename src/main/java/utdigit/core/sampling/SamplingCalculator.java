@@ -8,6 +8,7 @@ import java.util.Optional;
 import org.apache.commons.math3.special.Erf;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Reference;
+import utdigit.core.common.SearchBudget;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.core.pulse.GaussianPulse;
@@ -43,6 +44,8 @@ public final class SamplingCalculator {
     public static final String COMPRESSED_DATA_ALIASING = "COMPRESSED_DATA_ALIASING";
     /** The pulse loss is not monotonic: slower rates than the required one also pass. */
     public static final String SLOWER_RATES_ALSO_PASS = "SLOWER_RATES_ALSO_PASS";
+    /** A numerical search reached its work bound (or no finite answer exists): its figure is null. */
+    public static final String SEARCH_BOUND_REACHED = "SEARCH_BOUND_REACHED";
     /** RF TFM depth loss without a bandwidth: the envelope term is omitted. */
     public static final String TFM_ENVELOPE_TERM_OMITTED = "TFM_ENVELOPE_TERM_OMITTED";
     /** RF TFM depth step at or beyond lambda/4: no bound. */
@@ -225,7 +228,7 @@ public final class SamplingCalculator {
         // With a tolerance: the required rates.
         Double requiredSamplesPerPeriod = null;
         Double requiredSamplingFrequencyMhz = null;
-        Double requiredSamplingFrequencyPulseMhz = null;
+        Optional<Double> requiredSamplingFrequencyPulseMhz = null;
         if (in.amplitudeToleranceDb() != null) {
             double toleranceDb = in.amplitudeToleranceDb();
             requiredSamplesPerPeriod = PulseSamplingLoss.requiredSamplesPerPeriod(toleranceDb);
@@ -258,7 +261,7 @@ public final class SamplingCalculator {
                             : TfmGridSampling.maxGaussianStepMm(in.amplitudeToleranceDb(), widthMm);
                     references.add(Reference.of("TFM largest depth step", TFM_MODEL
                             + ": the step whose depth loss equals amplitude_tolerance_db, solved numerically "
-                            + "(Brent's method, Apache Commons Math BrentSolver) where no closed form exists"));
+                            + "(bisection, Apache Commons Math BisectionSolver, to 1e-15 of the bracket) where no closed form exists"));
                 }
                 references.add(Reference.of("TFM depth grid", TFM_MODEL + ": "
                         + (image == TfmImage.RF
@@ -383,24 +386,47 @@ public final class SamplingCalculator {
                         + "; exact search over the phase (split at carrier zeros and at crossings of the sample curves, "
                         + "Brent's method to 1e-15 of dt), never above the closed form cos(pi/n) exp(-a dt^2/4) (derived). "
                         + CARRIER_PHASE_NOTE));
-        return Optional.of(PulseSamplingLoss.rfLossDb(pulse, intervalUs, reading));
+        try {
+            return Optional.of(PulseSamplingLoss.rfLossDb(pulse, intervalUs, reading,
+                    SearchBudget.of(PulseSamplingLoss.PHASE_SEARCH_BUDGET)));
+        } catch (SearchBudget.Exhausted e) {
+            warnings.add(Warning.of(SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
+                    "pulse_amplitude_loss_db is null: the search over the sampling phase reached its bound of %d "
+                            + "pulse values (the pulse model is close to a continuous wave at this bandwidth and "
+                            + "frequency); the closed form cos(pi/n) exp(-a dt^2/4) bounds the loss from above",
+                    e.limit())));
+            return Optional.empty();
+        }
     }
 
-    private static double requiredPulseRate(GaussianPulse pulse, SampledSignal signal, PeakReading reading,
+    private static Optional<Double> requiredPulseRate(GaussianPulse pulse, SampledSignal signal, PeakReading reading,
                                             double toleranceDb, SampleClock clock, List<Warning> warnings,
                                             List<Reference> references) {
         if (signal == SampledSignal.ENVELOPE) {
             references.add(Reference.of("required sampling frequency for the pulse",
                     "inverse of the sampled envelope's loss, dt = 2 sqrt(X ln 10/(20 a)), monotonic; the raw "
                             + "sampling_frequency to set for the same decimation (derived)"));
-            return clock.rawFrequencyForAmplitudeRateMhz(RequiredPulseRate.forEnvelope(pulse, toleranceDb));
+            return Optional.of(clock.rawFrequencyForAmplitudeRateMhz(RequiredPulseRate.forEnvelope(pulse, toleranceDb)));
         }
-        RequiredPulseRate.RfSolution solution = RequiredPulseRate.forRf(pulse, reading, toleranceDb);
+        RequiredPulseRate.RfSolution solution;
+        try {
+            solution = RequiredPulseRate.forRf(pulse, reading, toleranceDb);
+        } catch (SearchBudget.Exhausted e) {
+            warnings.add(Warning.of(SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
+                    "required_sampling_frequency_pulse_mhz is null: no finite rate was found within the search's "
+                            + "bound of %d pulse values (amplitude_tolerance_db too small to resolve, or a pulse "
+                            + "model too close to a continuous wave); required_sampling_frequency_mhz gives the sine "
+                            + "model's rate", e.limit())));
+            return Optional.empty();
+        }
         double rawMhz = clock.rawFrequencyForAmplitudeRateMhz(solution.amplitudeSamplingFrequencyMhz());
         references.add(Reference.of("required sampling frequency for the pulse", String.format(Locale.ROOT,
                 "the rate above which every rate keeps pulse_amplitude_loss_db within amplitude_tolerance_db: start "
                         + "where the closed form cos(pi/n) exp(-a dt^2/4) meets the tolerance (every faster rate passes), "
-                        + "scan down in %s %% steps while the loss passes, bisect to %s relative; slower passing rates "
+                        + "scan down in %s %% steps while the loss passes, at the latest to the highest whole number of "
+                        + "samples per carrier period whose sine bound exceeds the tolerance (it fails for every pulse: "
+                        + "the failing band of a narrow pulse there is not stepped over), bisect to %s relative; "
+                        + "slower passing rates "
                         + "looked for in %s %% steps down to 2 samples per carrier period; the raw sampling_frequency "
                         + "to set for the same decimation (derived)",
                 num(100.0 * RequiredPulseRate.SCAN_STEP_FRACTION), num(RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE),
@@ -411,7 +437,7 @@ public final class SamplingCalculator {
                                 + "required_sampling_frequency_pulse_mhz (%s MHz) also pass, e.g. %s MHz, but some rates "
                                 + "in between do not",
                         num(rawMhz), num(clock.rawFrequencyForAmplitudeRateMhz(slowerMhz))))));
-        return rawMhz;
+        return Optional.of(rawMhz);
     }
 
     private static Optional<Double> tfmDepthLoss(TfmImage image, double stepMm, double wavelengthMm, Double widthMm,

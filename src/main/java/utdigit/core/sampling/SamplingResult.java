@@ -37,7 +37,7 @@ import utdigit.core.pulse.CentreFrequencyConvention;
  *     sine bound at the nominal frequency, MHz; null without a tolerance
  * @param requiredSamplingFrequencyPulseMhz the raw sampling frequency to set (same decimation) above
  *     which every rate keeps the pulse loss within the tolerance, MHz; null without tolerance and
- *     bandwidth
+ *     bandwidth; empty when the search reaches its work bound or no finite rate exists
  * @param tfmGridAmplitudeLossDb worst-case loss of the TFM depth step, dB; null without a grid
  *     spacing; empty for an RF image with dz >= lambda/4
  * @param tfmMaxGridSpacingMm the largest depth step within the tolerance, mm; null without grid
@@ -68,7 +68,7 @@ public record SamplingResult(
         Optional<Double> pulseAmplitudeLossDb,
         Double requiredSamplesPerPeriod,
         Double requiredSamplingFrequencyMhz,
-        Double requiredSamplingFrequencyPulseMhz,
+        Optional<Double> requiredSamplingFrequencyPulseMhz,
         Optional<Double> tfmGridAmplitudeLossDb,
         Double tfmMaxGridSpacingMm,
         Double tfmLateralAmplitudeLossDb,

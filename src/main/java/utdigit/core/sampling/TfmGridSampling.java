@@ -1,5 +1,6 @@
 package utdigit.core.sampling;
 
+import org.apache.commons.math3.analysis.solvers.BisectionSolver;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
@@ -23,6 +24,9 @@ public final class TfmGridSampling {
      * 0.8845 (DOMAIN: "about 0.884"). Reference: paraxial line-aperture directivity (derived).
      */
     public static final double LATERAL_WIDTH_FACTOR = solveLateralWidthFactor();
+
+    /** The evaluation bound of the largest-depth-step search: 51 halvings of 2 values, with margin. */
+    public static final int BISECTION_MAX_EVALUATIONS = 120;
 
     /**
      * Wavelength lambda = v / f in mm, v converted to mm/us (definition).
@@ -63,7 +67,7 @@ public final class TfmGridSampling {
         if (!(stepMm < wavelengthMm / 4.0)) {
             throw CalculationException.invalid("tfm_grid_spacing_mm", stepMm, "must be below lambda/4 for a bound");
         }
-        return -Decibels.fromRatio(StrictMath.cos(2.0 * StrictMath.PI * stepMm / wavelengthMm));
+        return 0.0 - Decibels.fromRatio(StrictMath.cos(2.0 * StrictMath.PI * stepMm / wavelengthMm));
     }
 
     /**
@@ -89,8 +93,9 @@ public final class TfmGridSampling {
      * -20 log10(cos(2 pi dz/lambda)) + 6 (dz/w)^2 = X, or without a width (envelope term omitted)
      * the closed form dz = lambda arccos(10^(-X/20)) / (2 pi).
      *
-     * <p>The loss rises monotonically from 0 at dz = 0; the carrier-only root bounds the root from
-     * above. Solved with Brent's method (Apache Commons Math BrentSolver) to 1e-14 relative.
+     * <p>The loss rises monotonically from 0 at dz = 0; each one-term root bounds the root from
+     * above. Solved by bisection (Apache Commons Math BisectionSolver) to 1e-15 of the bracket: a
+     * bound of {@value #BISECTION_MAX_EVALUATIONS} evaluations that holds for every input.
      * Reference: derived model, solved numerically.
      *
      * @param amplitudeToleranceDb X, dB, > 0
@@ -106,11 +111,18 @@ public final class TfmGridSampling {
             return carrierOnlyMm;
         }
         double widthMm = Checks.positive("width_mm", depthWidthMm);
-        BrentSolver solver = new BrentSolver(1e-14, carrierOnlyMm * 1e-15);
-        return solver.solve(1000,
+        // Each term alone reaches X no later than the sum: the root lies below both one-term roots,
+        // where both terms are finite whatever the magnitudes (no overflow of (dz/w)^2).
+        double upperMm = StrictMath.min(carrierOnlyMm, maxGaussianStepMm(amplitudeToleranceDb, widthMm));
+        if (!(upperMm > 0.0)) {
+            return upperMm; // both one-term roots underflow to 0: so does the root
+        }
+        // Bisection halves the bracket each time: at most log2(1e15) + 1 = 51 halvings, 2 values each.
+        double accuracyMm = StrictMath.max(upperMm * 1e-15, 2.0 * StrictMath.ulp(upperMm));
+        return new BisectionSolver(accuracyMm).solve(BISECTION_MAX_EVALUATIONS,
                 dz -> -Decibels.fromRatio(StrictMath.cos(2.0 * StrictMath.PI * dz / wavelengthMm))
                         + 6.0 * (dz / widthMm) * (dz / widthMm) - amplitudeToleranceDb,
-                0.0, carrierOnlyMm);
+                0.0, upperMm);
     }
 
     /**

@@ -14,8 +14,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.concurrent.ThreadFactory;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.slf4j.Logger;
@@ -161,7 +163,7 @@ class BatchProcessor implements DisposableBean {
                 if (workers == null) {
                     pending.add(answer(calculation, row));
                 } else {
-                    pending.add(CompletableFuture.supplyAsync(() -> answer(calculation, row), workers));
+                    pending.add(workers.submit(() -> answer(calculation, row)));
                 }
                 answered++;
             }
@@ -179,7 +181,7 @@ class BatchProcessor implements DisposableBean {
 
     /** The answers not yet written, oldest first; written in input order as they complete. */
     private final class InOrder {
-        private final ArrayDeque<CompletableFuture<ObjectNode>> queue = new ArrayDeque<>();
+        private final ArrayDeque<Future<ObjectNode>> queue = new ArrayDeque<>();
         private final RowSink sink;
         private final OutputStream flushTarget;
         private long written;
@@ -193,23 +195,38 @@ class BatchProcessor implements DisposableBean {
             add(CompletableFuture.completedFuture(done));
         }
 
-        void add(CompletableFuture<ObjectNode> answer) throws IOException {
+        void add(Future<ObjectNode> answer) throws IOException {
             queue.add(answer);
             // write what is already done; wait for the oldest only when the window is full
             while (!queue.isEmpty() && (queue.size() > WINDOW || queue.peek().isDone())) {
-                write(queue.poll().join());
+                write(result(queue.poll()));
             }
         }
 
         void drain() throws IOException {
             while (!queue.isEmpty()) {
-                write(queue.poll().join());
+                write(result(queue.poll()));
             }
         }
 
+        /**
+         * The batch ends early (its client went away, or the body failed): rows not started never
+         * start, and rows being answered are interrupted, which stops the core's searches.
+         */
         void cancel() {
-            queue.forEach(f -> f.cancel(false));
+            queue.forEach(f -> f.cancel(true));
             queue.clear();
+        }
+
+        private ObjectNode result(Future<ObjectNode> answer) {
+            try {
+                return answer.get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted while waiting for a batch row", e);
+            } catch (ExecutionException e) {
+                throw e.getCause() instanceof RuntimeException r ? r : new IllegalStateException(e.getCause());
+            }
         }
 
         private void write(ObjectNode row) throws IOException {
@@ -262,7 +279,8 @@ class BatchProcessor implements DisposableBean {
     /** One row's answer: OK with the single endpoint's answer, or INVALID with its problem. */
     ObjectNode answer(String calculation, Row row) {
         JsonNode body = row.body();
-        String id = body != null && body.path("sheet_id").isString() ? body.get("sheet_id").stringValue() : null;
+        String id = body != null && body.path("sheet_id").isString()
+                ? utdigit.web.common.IJson.printable(body.get("sheet_id").stringValue()) : null;
         if (!row.readable()) {
             return problemRow(row.number(), id, row.readProblem(), row.readDetail(), row.readErrors());
         }

@@ -8,6 +8,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.ScheduledFuture;
+import java.util.concurrent.ScheduledThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
+import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.springframework.beans.factory.DisposableBean;
+import org.springframework.beans.factory.annotation.Value;
 import org.springframework.stereotype.Component;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
@@ -15,22 +21,32 @@ import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.ObjectNode;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.SearchBudget;
 import utdigit.web.stamp.Stamper;
 
 /**
  * The one path from a request to a stamped answer, shared by the single endpoints, the batch
  * endpoints, technique sheets and stamp verification: Bean Validation (pointers to the caller's
  * fields), the calculation, a check that every number in the answer is finite, and the stamp.
+ *
+ * <p>Every calculation runs under a deadline ({@code utdigit.calculation.deadline}): when it passes,
+ * the thread is interrupted, the core's searches see it ({@link SearchBudget}) and stop, and the
+ * answer is a 503. The searches' own work bounds keep every in-range request far below it; the
+ * deadline is the backstop for an overloaded machine.
  */
 @Component
-public class CalculationRunner {
+public class CalculationRunner implements DisposableBean {
     private static final org.slf4j.Logger log = org.slf4j.LoggerFactory.getLogger(CalculationRunner.class);
     private final Map<String, Calculation<?>> byName = new LinkedHashMap<>();
     private final Validator validator;
     private final JsonMapper mapper;
     private final Stamper stamper;
+    private final long deadlineMillis;
+    /** One daemon thread that interrupts calculations past their deadline. */
+    private final ScheduledThreadPoolExecutor alarms;
 
-    CalculationRunner(List<Calculation<?>> calculations, Validator validator, JsonMapper mapper, Stamper stamper) {
+    CalculationRunner(List<Calculation<?>> calculations, Validator validator, JsonMapper mapper, Stamper stamper,
+                      @Value("${utdigit.calculation.deadline:3s}") java.time.Duration deadline) {
         for (Calculation<?> c : calculations) {
             if (byName.put(c.name(), c) != null) {
                 throw new IllegalStateException("two calculations named " + c.name());
@@ -39,6 +55,18 @@ public class CalculationRunner {
         this.validator = validator;
         this.mapper = mapper;
         this.stamper = stamper;
+        this.deadlineMillis = deadline.toMillis();
+        this.alarms = new ScheduledThreadPoolExecutor(1, r -> {
+            Thread t = new Thread(r, "calculation-deadline");
+            t.setDaemon(true);
+            return t;
+        });
+        this.alarms.setRemoveOnCancelPolicy(true);
+    }
+
+    @Override
+    public void destroy() {
+        alarms.shutdownNow();
     }
 
     /** The names of every calculation, e.g. for the batch endpoints. */
@@ -88,8 +116,20 @@ public class CalculationRunner {
     private <Q> ObjectNode answer(Calculation<Q> c, Q request) {
         validate(request);
         Object answer;
+        Alarm alarm = new Alarm(Thread.currentThread());
+        ScheduledFuture<?> scheduled = alarms.schedule(alarm, deadlineMillis, TimeUnit.MILLISECONDS);
         try {
             answer = c.answer(request);
+        } catch (SearchBudget.Cancelled e) {
+            throw new InputProblem(ProblemType.SERVICE_BUSY, "the calculation was stopped: it ran past the service's "
+                    + "deadline of " + deadlineMillis + " ms, or its caller went away; try again later", List.of());
+        } catch (SearchBudget.Exhausted | TooManyEvaluationsException e) {
+            // Every search of the core answers null with a warning at its bound; a bound reached outside
+            // one of them is still a typed refusal, never a 500.
+            log.warn("calculation {} reached a search bound: {}", c.name(), e.toString());
+            throw new InputProblem(ProblemType.IMPOSSIBLE_COMBINATION, "a numerical search of this calculation "
+                    + "reached its work bound for these inputs; check the units and magnitudes of the inputs",
+                    List.of(new FieldError("", "the search reached its work bound")));
         } catch (CalculationException e) {
             List<FieldError> errors = new ArrayList<>();
             for (String field : e.fields()) {
@@ -103,6 +143,9 @@ public class CalculationRunner {
             throw new InputProblem(ProblemType.IMPOSSIBLE_COMBINATION, "the inputs lie outside the range where "
                     + "this calculation has a finite answer (values at the limits of floating point); check the "
                     + "units and magnitudes of the inputs", List.of(new FieldError("", "numerically extreme inputs")));
+        } finally {
+            scheduled.cancel(false);
+            alarm.disarm();
         }
         ObjectNode tree = mapper.valueToTree(answer);
         List<String> nonFinite = new ArrayList<>();
@@ -115,6 +158,36 @@ public class CalculationRunner {
                             + " with these inputs; returned as null");
         }
         return stamper.stamp(c.name(), tree);
+    }
+
+    /**
+     * Interrupts one calculation's thread at its deadline, unless the calculation ended first; once
+     * disarmed it never interrupts, and an interrupt it did send is cleared so that the thread
+     * (a server or batch worker) is handed back clean.
+     */
+    private static final class Alarm implements Runnable {
+        private final Thread thread;
+        private boolean done;
+        private boolean fired;
+
+        Alarm(Thread thread) {
+            this.thread = thread;
+        }
+
+        @Override
+        public synchronized void run() {
+            if (!done) {
+                fired = true;
+                thread.interrupt();
+            }
+        }
+
+        synchronized void disarm() {
+            done = true;
+            if (fired) {
+                Thread.interrupted(); // called on the calculation's own thread
+            }
+        }
     }
 
     /** Bean Validation of a request record; every violation becomes a field error. */
@@ -130,6 +203,10 @@ public class CalculationRunner {
         }
     }
 
+    private static boolean isNegativeZero(JsonNode v) {
+        return v.isDouble() && Double.doubleToRawLongBits(v.doubleValue()) == Long.MIN_VALUE;
+    }
+
     private static void replaceNonFinite(JsonNode node, String pointer, List<String> found) {
         if (node instanceof ObjectNode object) {
             for (Map.Entry<String, JsonNode> e : new ArrayList<>(object.properties())) {
@@ -138,6 +215,8 @@ public class CalculationRunner {
                 if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
                     object.putNull(e.getKey());
                     found.add(p);
+                } else if (isNegativeZero(v)) {
+                    object.put(e.getKey(), 0.0); // as the stamp's canonical form writes it: no "-0.0"
                 } else {
                     replaceNonFinite(v, p, found);
                 }
@@ -148,6 +227,8 @@ public class CalculationRunner {
                 if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
                     array.set(i, array.nullNode());
                     found.add(pointer + "/" + i);
+                } else if (isNegativeZero(v)) {
+                    array.set(i, array.numberNode(0.0));
                 } else {
                     replaceNonFinite(v, pointer + "/" + i, found);
                 }

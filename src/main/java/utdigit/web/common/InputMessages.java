@@ -7,6 +7,8 @@ final class InputMessages {
     static final String FINITE_NUMBER = "must be a finite JSON number (not quoted, not NaN or Infinity)";
     static final String WHOLE_NUMBER = "must be a whole number (an integral value such as 2 or 2.0)";
     static final String TEXT = "must be a JSON string";
+    static final String LONE_SURROGATE = "holds a lone UTF-16 surrogate (an unpaired \\uD800-\\uDFFF escape): "
+            + "not well-formed Unicode, refused as I-JSON (RFC 7493) requires";
     static final String OBJECT = "must be a JSON object";
     static final String ARRAY = "must be a JSON array";
     static final String UNKNOWN_PROPERTY = "is not a property of this request";

@@ -25,6 +25,9 @@ final class JacksonProblems {
                     + (known.isEmpty() ? "" : "; known properties here: " + String.join(", ", known));
             return InputProblem.invalid(pointer, detail);
         }
+        if (e instanceof InvalidFormatException f && f.getValue() instanceof String text && !IJson.wellFormed(text)) {
+            return InputProblem.invalid(pointer, InputMessages.LONE_SURROGATE);
+        }
         if (e instanceof InvalidFormatException f && f.getTargetType() != null && f.getTargetType().isEnum()) {
             return InputProblem.invalid(pointer, enumDetail(f.getTargetType()));
         }
@@ -39,6 +42,12 @@ final class JacksonProblems {
             return new InputProblem(ProblemType.INVALID_INPUT, "the body exceeds a read limit of the service "
                     + "(nesting depth, number, string or name length)",
                     List.of(new FieldError(pointer(e), "exceeds a read limit")));
+        }
+        if (e instanceof StreamReadException s && s.getOriginalMessage() != null
+                && s.getOriginalMessage().contains("surrogate")) {
+            // The parser refuses a lone surrogate in a member name before it knows the name: the
+            // pointer is the object that holds it.
+            return InputProblem.invalid(objectPointer(e), "a member name " + InputMessages.LONE_SURROGATE);
         }
         if (e instanceof StreamReadException s && s.getOriginalMessage() != null
                 && s.getOriginalMessage().startsWith("Duplicate Object property")) {
@@ -66,6 +75,20 @@ final class JacksonProblems {
             return streamPointer(e);
         }
         return p.toString();
+    }
+
+    /** The pointer of the object being read when {@code e} happened (without its current member). */
+    private static String objectPointer(JacksonException e) {
+        if (e.processor() instanceof JsonParser parser && parser.streamReadContext() != null) {
+            try {
+                var context = parser.streamReadContext();
+                var pointer = context.pathAsPointer();
+                return context.inObject() && context.currentName() != null ? pointer.head().toString() : pointer.toString();
+            } catch (RuntimeException ignored) {
+                return "";
+            }
+        }
+        return "";
     }
 
     private static String streamPointer(JacksonException e) {

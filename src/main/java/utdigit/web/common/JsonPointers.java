@@ -4,9 +4,12 @@ package utdigit.web.common;
 public final class JsonPointers {
     private JsonPointers() {}
 
-    /** Escapes one reference token: '~' becomes "~0", '/' becomes "~1". */
+    /**
+     * Escapes one reference token: '~' becomes "~0", '/' becomes "~1"; a lone surrogate (refused
+     * input, which no answer can hold) is shown as U+FFFD.
+     */
     public static String escape(String token) {
-        return token.replace("~", "~0").replace("/", "~1");
+        return IJson.printable(token).replace("~", "~0").replace("/", "~1");
     }
 
     /** The pointer to a top-level property. */

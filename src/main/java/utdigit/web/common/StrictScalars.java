@@ -15,7 +15,8 @@ import tools.jackson.databind.module.SimpleModule;
 /**
  * Deserializers that read numbers and strings exactly as written: a number must be a JSON number
  * (not a quoted string), finite (1e400 overflows and is rejected), and an integer field accepts an
- * integral value such as 2.0 but not 2.5. A string field accepts only a JSON string. An enum
+ * integral value such as 2.0 but not 2.5. A string field accepts only a JSON string, and only
+ * well-formed Unicode (no lone surrogate, RFC 7493). An enum
  * value is its exact name: the library's own reader would trim white space around it.
  */
 final class StrictScalars {
@@ -112,7 +113,11 @@ final class StrictScalars {
         @Override
         public String deserialize(JsonParser p, DeserializationContext ctxt) {
             if (p.currentToken() == JsonToken.VALUE_STRING) {
-                return p.getString();
+                String text = p.getString();
+                if (!IJson.wellFormed(text)) {
+                    return (String) ctxt.handleWeirdStringValue(String.class, text, InputMessages.LONE_SURROGATE);
+                }
+                return text;
             }
             return (String) ctxt.handleUnexpectedToken(String.class, p);
         }

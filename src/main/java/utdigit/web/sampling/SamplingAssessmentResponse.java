@@ -77,10 +77,11 @@ record SamplingAssessmentResponse(
 
         @Schema(description = "The raw sampling frequency to set (same decimation) above which every rate keeps "
                 + "pulse_amplitude_loss_db within amplitude_tolerance_db, MHz (the pulse loss is not monotonic for "
-                + "narrow bands: a warning says when slower rates also pass); solved to 1e-4 relative; only with "
+                + "narrow bands: a warning says when slower rates also pass); solved to 1e-6 relative; null with a "
+                + "warning when the search reaches its work bound or no finite rate meets the tolerance; only with "
                 + "amplitude_tolerance_db and bandwidth_percent (at least 1 % for signal RF)", format = "double",
-                example = "34.2")
-        Double requiredSamplingFrequencyPulseMhz,
+                example = "34.2", types = {"number", "null"})
+        Optional<Double> requiredSamplingFrequencyPulseMhz,
 
         @Schema(description = "Derived model (the code's own amplitude-fidelity check on a reference reflector "
                 + "governs): worst-case loss of the TFM depth step, dB; RF image -20 log10(cos(2 pi dz/lambda)) plus, "

@@ -9,13 +9,15 @@ import java.util.List;
 import java.util.Map;
 import tools.jackson.core.io.NumberOutput;
 import tools.jackson.databind.JsonNode;
+import utdigit.web.common.IJson;
 
 /**
  * The JSON Canonicalization Scheme of RFC 8785 (JCS) over a Jackson tree: object members sorted
  * by their names' UTF-16 code units, no white space, strings escaped as RFC 8785 3.2.2.2 says, and
  * numbers written as ECMAScript's Number.prototype.toString does (RFC 8785 3.2.2.3): the shortest
  * decimal that reads back as the same IEEE 754 double, in plain notation for 1e-7 <= |x| < 1e21
- * and exponent notation otherwise, -0 written as 0.
+ * and exponent notation otherwise, -0 written as 0. A string with a lone surrogate, or a number
+ * that is not finite, has no canonical form: refused (IllegalArgumentException).
  */
 public final class CanonicalJson {
     private CanonicalJson() {}
@@ -75,6 +77,11 @@ public final class CanonicalJson {
      * without escapes are appended whole.
      */
     static void string(String s, StringBuilder out) {
+        if (!IJson.wellFormed(s)) {
+            // RFC 8785 3.2.2.2 and RFC 7493 2.1: a lone surrogate has no UTF-8 form; writing one as '?'
+            // would give two documents one stamp.
+            throw new IllegalArgumentException("RFC 8785 has no representation for a lone surrogate");
+        }
         out.append('"');
         int run = 0;
         for (int i = 0; i < s.length(); i++) {

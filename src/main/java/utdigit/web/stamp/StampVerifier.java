@@ -34,6 +34,7 @@ class StampVerifier {
         if (document == null || !document.isObject()) {
             throw InputProblem.invalid("/document", "must be a JSON object: an answer returned by this service");
         }
+        ExactJsonTree.check(document, "/document");
         JsonNode stamp = document.get(Stamper.STAMP);
         if (stamp == null || !stamp.isObject()) {
             throw InputProblem.invalid("/document/stamp", "is required: the document carries no stamp");

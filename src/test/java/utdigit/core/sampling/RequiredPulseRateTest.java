@@ -85,6 +85,53 @@ class RequiredPulseRateTest {
         assertThat(firstFailingMhz).isLessThan(answerMhz);
     }
 
+    @ParameterizedTest(name = "{0} MHz, {1}, {2} dB, {3}")
+    @CsvSource({"5, 0.01, 3.0, ABSOLUTE", "5, 0.02, 3.0, ABSOLUTE", "5, 0.02, 3.0, POSITIVE_PEAK",
+        "5, 0.05, 3.0, ABSOLUTE", "5, 0.02, 1.0, ABSOLUTE", "5, 0.03, 2.0, POSITIVE_PEAK", "2.25, 0.04, 0.5, ABSOLUTE",
+        "10, 0.01, 0.1, ABSOLUTE"})
+    @DisplayName("narrow bands of 1-5 %: the answer is the rate above which every rate passes, against a scan in "
+            + "1e-5 steps from the closed-form start (a failing band at 1 % is about 2e-4 wide: 20 scan steps)")
+    void veryNarrowBandAnswerMatchesFineScan(double fcMhz, double bw, double toleranceDb, PeakReading reading) {
+        GaussianPulse pulse = GaussianPulse.of(fcMhz, bw);
+        double answerMhz = RequiredPulseRate.forRf(pulse, reading, toleranceDb).amplitudeSamplingFrequencyMhz();
+        double rateMhz = RequiredPulseRate.closedFormBoundRateMhz(pulse, toleranceDb);
+        double lastPassingMhz = rateMhz;
+        while (lossAt(pulse, rateMhz, reading) <= toleranceDb) {
+            lastPassingMhz = rateMhz;
+            rateMhz *= 1.0 - 1e-5;
+        }
+        double firstFailingMhz = rateMhz;
+        assertThat(lossAt(pulse, answerMhz, reading)).isLessThanOrEqualTo(toleranceDb);
+        // The answer lies between the scan's first failing rate and its last passing rate, to the bisection's 1e-6.
+        assertThat(answerMhz).isGreaterThan(firstFailingMhz);
+        assertThat(answerMhz).isLessThanOrEqualTo(lastPassingMhz * (1.0 + 2e-6));
+    }
+
+    @Test
+    @DisplayName("5 MHz, 2 %, 3 dB: 20.000 MHz fails (an independent brute-force phase scan reads 3.0105 dB: n = 4 "
+            + "holds every sample of a near-continuous wave at cos(pi/4) or below), so the answer is just above "
+            + "20 MHz: 20.0085 MHz, and 20.0042 MHz at 1 % (the figures of an independent numpy/scipy derivation)")
+    void narrowBandFailingBandAtFourSamplesPerPeriod() {
+        GaussianPulse two = GaussianPulse.of(5.0, 0.02);
+        // BruteForcePulseScan: no symmetry, no bound, no log-concavity used; phases over [0, dt) on a grid.
+        assertThat(BruteForcePulseScan.lossDb(5.0, 0.02, 4.0, true)).isCloseTo(3.0105, within(1e-4));
+        assertThat(RequiredPulseRate.forRf(two, PeakReading.ABSOLUTE, 3.0).amplitudeSamplingFrequencyMhz())
+                .isCloseTo(20.0085, within(1e-4));
+        assertThat(RequiredPulseRate.forRf(GaussianPulse.of(5.0, 0.01), PeakReading.ABSOLUTE, 3.0)
+                .amplitudeSamplingFrequencyMhz()).isCloseTo(20.0042, within(1e-4));
+    }
+
+    @ParameterizedTest(name = "{0} dB, {1}")
+    @CsvSource({"3.0, ABSOLUTE, 4", "3.0103, ABSOLUTE, 2", "1.0, ABSOLUTE, 6", "1.3, ABSOLUTE, 4",
+        "3.0, POSITIVE_PEAK, 4", "6.1, POSITIVE_PEAK, 2", "5.0, POSITIVE_PEAK, 3", "0.1, ABSOLUTE, 20",
+        "0.1, POSITIVE_PEAK, 20"})
+    @DisplayName("the highest failing resonance: the largest p (even for ABSOLUTE) with -20 log10(cos(pi/p)) > X, "
+            + "else 2 (sine bound: n = 4 gives 3.0103 dB, n = 6 gives 1.2494 dB, n = 3 gives 6.0206 dB, n = 20 gives "
+            + "0.1073 dB, n = 21 gives 0.0973 dB)")
+    void highestFailingResonance(double toleranceDb, PeakReading reading, double expected) {
+        assertThat(RequiredPulseRate.highestFailingResonance(reading, toleranceDb)).isEqualTo(expected);
+    }
+
     @Test
     @DisplayName("30 %, 1 dB: slower rates pass (n = 4.75 reads 0.89 dB, n = 6 reads 1.27 dB; DOMAIN), and some "
             + "rate between them and the answer fails")

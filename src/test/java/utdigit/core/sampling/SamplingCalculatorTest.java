@@ -160,8 +160,8 @@ class SamplingCalculatorTest {
             assertThat(plain.requiredSamplingFrequencyMhz()).isCloseTo(n * 5.0, within(relative(n * 5.0)));
             assertThat(drop.requiredSamplingFrequencyMhz()).isCloseTo(3.0 * n * 5.0, within(relative(15.0 * n)));
             assertThat(kept.requiredSamplingFrequencyMhz()).isCloseTo(n * 5.0, within(relative(n * 5.0)));
-            assertThat(drop.requiredSamplingFrequencyPulseMhz())
-                    .isCloseTo(3.0 * plain.requiredSamplingFrequencyPulseMhz(), within(relative(300.0)));
+            assertThat(drop.requiredSamplingFrequencyPulseMhz().orElseThrow())
+                    .isCloseTo(3.0 * plain.requiredSamplingFrequencyPulseMhz().orElseThrow(), within(relative(300.0)));
             assertThat(kept.requiredSamplingFrequencyPulseMhz()).isEqualTo(plain.requiredSamplingFrequencyPulseMhz());
         }
 
@@ -313,14 +313,14 @@ class SamplingCalculatorTest {
                     .pulseAmplitudeLossDb().orElseThrow();
             SamplingResult r = compute(SamplingInput.of(fsMhz, 5.0).withBandwidthPercent(bwPercent)
                     .withAmplitudeToleranceDb(lossDb));
-            assertThat(r.requiredSamplingFrequencyPulseMhz()).isCloseTo(fsMhz, within(ALLOWED_SEARCH_RELATIVE * fsMhz));
+            assertThat(r.requiredSamplingFrequencyPulseMhz().orElseThrow()).isCloseTo(fsMhz, within(ALLOWED_SEARCH_RELATIVE * fsMhz));
         }
 
         @Test
         @DisplayName("narrow band 30 %, 1 dB: required pulse rate above 30 MHz, with a warning that slower rates pass")
         void narrowBandRequiredRateWarns() {
             SamplingResult r = compute(SamplingInput.of(100.0, 5.0).withBandwidthPercent(30.0).withAmplitudeToleranceDb(1.0));
-            assertThat(r.requiredSamplingFrequencyPulseMhz()).isGreaterThan(30.0);
+            assertThat(r.requiredSamplingFrequencyPulseMhz().orElseThrow()).isGreaterThan(30.0);
             assertThat(r.hasWarning(SamplingCalculator.SLOWER_RATES_ALSO_PASS)).isTrue();
         }
 
@@ -330,7 +330,7 @@ class SamplingCalculatorTest {
             SamplingInput in = SamplingInput.of(100.0, 5.0).withBandwidthPercent(60.0).withSignal(SampledSignal.ENVELOPE)
                     .withAmplitudeToleranceDb(0.5);
             SamplingResult r = compute(in);
-            SamplingResult back = compute(SamplingInput.of(r.requiredSamplingFrequencyPulseMhz(), 5.0)
+            SamplingResult back = compute(SamplingInput.of(r.requiredSamplingFrequencyPulseMhz().orElseThrow(), 5.0)
                     .withBandwidthPercent(60.0).withSignal(SampledSignal.ENVELOPE));
             assertThat(back.pulseAmplitudeLossDb()).hasValueSatisfying(loss -> assertThat(loss).isCloseTo(0.5, within(1e-9)));
             assertThat(r.requiredSamplesPerPeriod()).isNotNull();
@@ -496,7 +496,7 @@ class SamplingCalculatorTest {
             assertThat(compute(narrow.withSignal(SampledSignal.ENVELOPE).withAmplitudeToleranceDb(1.0))
                     .requiredSamplingFrequencyPulseMhz()).isNotNull();
             assertThat(compute(SamplingInput.of(100.0, 5.0).withBandwidthPercent(1.0).withAmplitudeToleranceDb(1.0))
-                    .requiredSamplingFrequencyPulseMhz()).isGreaterThan(10.0);
+                    .requiredSamplingFrequencyPulseMhz().orElseThrow()).isGreaterThan(10.0);
         }
 
         @Test

@@ -72,4 +72,16 @@ class CanonicalJsonTest {
             assertThat(Double.parseDouble(text)).isEqualTo(x == 0.0 ? 0.0 : x);
         }
     }
+
+    @org.junit.jupiter.api.Test
+    void aLoneSurrogateHasNoCanonicalForm() {
+        // RFC 8785 3.2.2.2 writes strings as UTF-8; RFC 7493 2.1 excludes lone surrogates: refused, never "?".
+        var factory = tools.jackson.databind.node.JsonNodeFactory.instance;
+        for (String s : new String[] {"\ud800", "a\udc00", "\ud800\ud800", "x\udbff"}) {
+            org.assertj.core.api.Assertions.assertThatThrownBy(() -> CanonicalJson.text(factory.stringNode(s)))
+                    .isInstanceOf(IllegalArgumentException.class);
+        }
+        org.assertj.core.api.Assertions.assertThat(CanonicalJson.text(factory.stringNode("\ud83d\ude00")))
+                .isEqualTo("\"\ud83d\ude00\"");
+    }
 }

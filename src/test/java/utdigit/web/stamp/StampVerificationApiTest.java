@@ -121,6 +121,60 @@ class StampVerificationApiTest extends ApiTest {
                 .then().statusCode(400).body("errors[0].pointer", org.hamcrest.Matchers.equalTo("/document/stamp"));
     }
 
+    /** The answer's text with {@code from} (which must occur once) replaced by {@code to}, wrapped as a request. */
+    private String requestWith(String from, String to) {
+        String doc = answer().toString();
+        assertThat(doc).contains(from);
+        return "{\"document\": " + doc.replaceFirst(java.util.regex.Pattern.quote(from),
+                java.util.regex.Matcher.quoteReplacement(to)) + "}";
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(strings = {"1e400", "-1e400", "1e-400", "123456789012345678901234567890",
+        "0.1000000000000000000000000001", "9007199254740993"})
+    void aNumberThatIsNotExactlyADoubleIsA400AtItsPointerAnywhere(String number) {
+        // RFC 7493 2.2 (I-JSON numbers are IEEE 754 doubles); RFC 8785 3.2.2.3 canonicalizes doubles only.
+        // 9007199254740993 = 2^53 + 1, the first integer a double cannot hold.
+        given().contentType(ContentType.JSON).body(requestWith("\"bit_depth\":10", "\"bit_depth\":" + number))
+                .post("/api/stamp-verifications").then().statusCode(400)
+                .body("errors[0].pointer", org.hamcrest.Matchers.equalTo("/document/inputs/bit_depth"));
+        given().contentType(ContentType.JSON).body(requestWith("\"warnings\":[", "\"extra\":[" + number + "],\"warnings\":["))
+                .post("/api/stamp-verifications").then().statusCode(400)
+                .body("errors[0].pointer", org.hamcrest.Matchers.equalTo("/document/extra/0"));
+    }
+
+    @Test
+    void aThousandDigitIntegerIsA400AndOneMoreDigitExceedsTheReadLimit() {
+        String digits = "9".repeat(1000);
+        given().contentType(ContentType.JSON).body(requestWith("\"warnings\":[", "\"big\":" + digits + ",\"warnings\":["))
+                .post("/api/stamp-verifications").then().statusCode(400)
+                .body("errors[0].pointer", org.hamcrest.Matchers.equalTo("/document/big"));
+        given().contentType(ContentType.JSON).body(requestWith("\"warnings\":[", "\"big\":" + digits + "9,\"warnings\":["))
+                .post("/api/stamp-verifications").then().statusCode(400);
+    }
+
+    @Test
+    void exactDoublesInOtherSpellingsCompareExactly() {
+        // 10 and 10.0 and 1e1 are the same I-JSON number: the document stays intact.
+        String request = requestWith("\"bit_depth\":10", "\"bit_depth\":1.0e1");
+        JsonNode v = JSON.readTree(given().contentType(ContentType.JSON).body(request).post("/api/stamp-verifications")
+                .then().statusCode(200).extract().asString());
+        assertThat(v.get("content_intact").asBoolean()).isTrue();
+        assertThat(v.get("reproducible").asBoolean()).isTrue();
+    }
+
+    @Test
+    void aLoneSurrogateInADocumentIsA400AtItsPointer() {
+        // RFC 7493 2.1: strings are well-formed Unicode. Before, "\ud800" was canonicalized as "?".
+        given().contentType(ContentType.JSON).body(requestWith("\"warnings\":[", "\"note\":\"a\\ud800\",\"warnings\":["))
+                .post("/api/stamp-verifications").then().statusCode(400)
+                .body("errors[0].pointer", org.hamcrest.Matchers.equalTo("/document/note"));
+        given().contentType(ContentType.JSON).body(requestWith("\"warnings\":[", "\"\\udc00\":1,\"warnings\":["))
+                .post("/api/stamp-verifications").then().statusCode(400)
+                .body("errors[0].pointer", org.hamcrest.Matchers.equalTo("/document"))
+                .body("errors[0].detail", org.hamcrest.Matchers.containsString("lone UTF-16 surrogate"));
+    }
+
     @Test
     void theSameRequestGivesTheSameStamp() {
         assertThat(answer().get("stamp").get("sha256")).isEqualTo(answer().get("stamp").get("sha256"));
