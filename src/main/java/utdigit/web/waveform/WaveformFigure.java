@@ -46,7 +46,10 @@ final class WaveformFigure {
 
     /** The SVG document for a result and its JSON answer. */
     static String render(WaveformResult result, JsonNode answer) {
-        List<String> caption = caption(answer);
+        List<String> caption = new ArrayList<>();
+        for (String line : caption(answer)) {
+            caption.addAll(wrap(line, CAPTION_WIDTH));
+        }
         int height = 2 * CHART_HEIGHT + 20 + CAPTION_LINE * (caption.size() + 1);
         SVGGraphics2D g2 = new SVGGraphics2D(WIDTH, height);
         g2.setDefsKeyPrefix("waveform");
@@ -62,6 +65,25 @@ final class WaveformFigure {
             y += CAPTION_LINE;
         }
         return g2.getSVGDocument();
+    }
+
+    /** Characters of a caption line at most (13 px sans-serif across the figure). */
+    private static final int CAPTION_WIDTH = 125;
+
+    /** {@code line} broken at spaces into lines of at most {@code width} characters (continuations indented). */
+    static List<String> wrap(String line, int width) {
+        List<String> lines = new ArrayList<>();
+        String rest = line;
+        while (rest.length() > width) {
+            int cut = rest.lastIndexOf(' ', width);
+            if (cut <= 0) {
+                break;
+            }
+            lines.add(rest.substring(0, cut));
+            rest = "    " + rest.substring(cut + 1);
+        }
+        lines.add(rest);
+        return lines;
     }
 
     /** The caption lines; every number is the JSON answer's, at 4 significant digits. */
@@ -146,6 +168,24 @@ final class WaveformFigure {
             renderer.setSeriesPaint(2, new Color(0xc0, 0x10, 0x20));
         }
         plot.setRenderer(renderer);
+        // The echo: where its envelope is above 1 % of its peak, with a margin of a third of that span each side.
+        double[] e = f.envelope();
+        double max = 0.0;
+        for (double v : e) {
+            max = StrictMath.max(max, v);
+        }
+        int first = 0;
+        while (first < e.length - 1 && e[first] < 0.01 * max) {
+            first++;
+        }
+        int last = e.length - 1;
+        while (last > first && e[last] < 0.01 * max) {
+            last--;
+        }
+        double[] t = f.timesUs();
+        double margin = StrictMath.max((t[last] - t[first]) / 3.0, t[1] - t[0]);
+        plot.getDomainAxis().setRange(StrictMath.max(t[0], t[first] - margin),
+                StrictMath.min(t[t.length - 1], t[last] + margin));
         return chart;
     }
 
@@ -206,6 +246,7 @@ final class WaveformFigure {
         m.setLabel(label);
         m.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
         m.setLabelPaint(color);
+        m.setLabelBackgroundColor(new Color(255, 255, 255, 220));
         m.setLabelAnchor(low ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT);
         m.setLabelTextAnchor(low ? TextAnchor.BOTTOM_LEFT : TextAnchor.TOP_LEFT);
         plot.addDomainMarker(m);
