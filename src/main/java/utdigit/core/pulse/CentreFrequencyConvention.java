@@ -17,6 +17,11 @@ public enum CentreFrequencyConvention {
             double half = centreMhz * fractionalBandwidth / 2.0;
             return new double[] {centreMhz - half, centreMhz + half};
         }
+
+        @Override
+        public double centreFromEdgesMhz(double lowerMhz, double upperMhz) {
+            return (lowerMhz + upperMhz) / 2.0;
+        }
     },
     /**
      * fc = sqrt(fl fu) (EN 12668-2 / ISO 22232-2, from memory), so with B = bw fc:
@@ -30,6 +35,11 @@ public enum CentreFrequencyConvention {
             double root = StrictMath.sqrt(b * b + 4.0 * centreMhz * centreMhz);
             return new double[] {(-b + root) / 2.0, (b + root) / 2.0};
         }
+
+        @Override
+        public double centreFromEdgesMhz(double lowerMhz, double upperMhz) {
+            return StrictMath.sqrt(lowerMhz * upperMhz);
+        }
     };
 
     /**
@@ -37,6 +47,13 @@ public enum CentreFrequencyConvention {
      * and fractional -6 dB bandwidth {@code fractionalBandwidth} (0.6 for 60 %).
      */
     public abstract double[] bandEdgesMhz(double centreMhz, double fractionalBandwidth);
+
+    /**
+     * The centre frequency, MHz, of measured -6 dB band edges {@code lowerMhz} < {@code upperMhz}
+     * (both > 0) by this convention: the inverse of {@link #bandEdgesMhz}. The fractional bandwidth
+     * is then (fu - fl) / fc.
+     */
+    public abstract double centreFromEdgesMhz(double lowerMhz, double upperMhz);
 
     /**
      * The Gaussian pulse model whose -6 dB edges are this convention's band edges: carrier at the
