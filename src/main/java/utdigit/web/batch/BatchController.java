@@ -56,7 +56,8 @@ class BatchController {
     @ApiResponse(responseCode = "200", description = "The answer rows, streamed",
             content = {@Content(mediaType = NDJSON, schema = @Schema(implementation = BatchRowDoc.class)),
                     @Content(mediaType = "text/csv", schema = @Schema(type = "string")),
-                    @Content(mediaType = "application/json", schema = @Schema(implementation = BatchRowDoc.class))})
+                    @Content(mediaType = "application/json",
+                            array = @io.swagger.v3.oas.annotations.media.ArraySchema(schema = @Schema(implementation = BatchRowDoc.class)))})
     void batch(@Parameter(description = "The calculation, as in its single endpoint's path")
                @PathVariable String calculation, HttpServletRequest request, HttpServletResponse response)
             throws IOException, HttpMediaTypeNotSupportedException, HttpMediaTypeNotAcceptableException {

@@ -72,6 +72,11 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
                     }
                 }
             }
+            if (schema != null && schema.getProperties() != null && rc.getType() == Map.class
+                    && schema.getProperties().get(PropertyPointers.jsonName(rc.getName(), rc)) instanceof Schema map
+                    && map.getAdditionalProperties() instanceof Schema values) { // Map<String, Double>: values may be null
+                ContractSchemas.nullable(values);
+            }
             boolean nullable = rc.getType() == java.util.Optional.class || rc.getType() == Double.class
                     || rc.getType() == double.class;
             if (schema == null || schema.getProperties() == null || !nullable) {

@@ -11,7 +11,7 @@ import org.springframework.context.annotation.Configuration;
 
 /**
  * The OpenAPI 3.1 document's header, and the model resolver that names schema properties by the
- * same snake_case rule as the JSON mapper.
+ * same snake_case rule as the JSON mapper and lets a property written even when null admit null.
  */
 @Configuration(proxyBeanMethods = false)
 class OpenApiConfiguration {
@@ -45,6 +45,18 @@ class OpenApiConfiguration {
     ModelResolver contractNamingModelResolver() {
         var mapper = ObjectMapperFactory.createJson31();
         mapper.setPropertyNamingStrategy(new ContractNaming.Jackson2());
-        return new ModelResolver(mapper);
+        return new ModelResolver(mapper) {
+            @Override
+            protected boolean applyBeanValidatorAnnotations(com.fasterxml.jackson.databind.introspect.BeanPropertyDefinition
+                    definition, io.swagger.v3.oas.models.media.Schema property, java.lang.annotation.Annotation[] annotations,
+                    io.swagger.v3.oas.models.media.Schema parent, boolean applyNotNullAnnotations) {
+                boolean applied = super.applyBeanValidatorAnnotations(definition, property, annotations, parent,
+                        applyNotNullAnnotations);
+                if (ContractSchemas.writtenWhenNull(annotations)) {
+                    ContractSchemas.nullable(property); // written even when null: the schema admits null
+                }
+                return applied;
+            }
+        };
     }
 }
