@@ -118,8 +118,9 @@ public final class PistonBeam {
      * of the element in the wedge's material, carried into the part, equal the projected aperture's
      * near field D_eff^2 / (4 lambda).
      *
-     * <p>Reference: paraxial beam transfer through a tilted plane interface (H. Kogelnik and T. Li,
-     * Laser Beams and Resonators, Applied Optics 5 (1966); from memory), applied to sound (derived).
+     * <p>Reference: paraxial beam transfer through an oblique plane interface, the tangential-plane
+     * ray matrix diag(cos(beta)/cos(alpha), (v cos(alpha))/(v_w cos(beta))) of paraxial optics
+     * (from memory), applied to sound (derived).
      *
      * @param wedgePathMm sound path w in the wedge, mm, > 0
      * @param wedgeVelocityMPerS v_w, m/s, > 0

@@ -264,8 +264,9 @@ public final class PulseCalculator {
                     in.wedgeVelocityMPerS(), in.velocityMPerS(), alphaDeg, betaDeg));
             references.add(Reference.of("near field in the part, incidence plane",
                     "D_eff^2/(4 lambda) - w (v_w/v) cos^2(beta)/cos^2(alpha): the wedge path carried into the part by "
-                            + "the tangential-plane transfer of a paraxial beam through a plane interface (Kogelnik and "
-                            + "Li 1966, from memory; derived for sound)"));
+                            + "the tangential-plane transfer of a paraxial beam through an oblique plane interface, whose "
+                            + "beam parameter scales by (v_w/v) cos^2(beta)/cos^2(alpha) (derived; it carries the element's "
+                            + "near field in the wedge's material onto D_eff^2/(4 lambda))"));
         }
         Optional<Double> beamDiameter = null;
         if (in.distanceMm() != null) {

@@ -68,10 +68,22 @@ class PistonBeamTest {
     }
 
     @Test
-    @DisplayName("no exact near field when D < lambda: the on-axis pressure then falls from the face on")
+    @DisplayName("no exact near field when D <= lambda: the on-axis pressure then falls from the face on (at D = lambda "
+            + "the formula's 0 is the face itself, not a maximum in front of it)")
     void noExactNearFieldForElementSmallerThanWavelength() {
         assertThat(PistonBeam.exactNearFieldLengthMm(0.9, 1.0)).isEmpty();
-        assertThat(PistonBeam.exactNearFieldLengthMm(1.0, 1.0).orElseThrow()).isEqualTo(0.0);
+        assertThat(PistonBeam.exactNearFieldLengthMm(1.0, 1.0)).isEmpty();
+        // |p(z)| ~ |sin(pi/lambda (sqrt(z^2 + a^2) - z))| with a = D/2 = lambda/2: the argument falls from pi/2 at
+        // the face, so the pressure only falls in front of the element (no maximum at z > 0).
+        double lambda = 1.0;
+        double a = 0.5;
+        double previous = Math.abs(Math.sin(Math.PI / lambda * a));
+        for (int i = 1; i <= 1000; i++) {
+            double z = i * 0.01;
+            double p = Math.abs(Math.sin(Math.PI / lambda * (Math.sqrt(z * z + a * a) - z)));
+            assertThat(p).isLessThan(previous);
+            previous = p;
+        }
     }
 
     @Test
