@@ -40,6 +40,8 @@ from hypothesis import strategies as st
 MISSING = object()
 
 SLOW_ANSWER_SECONDS = 2.0
+# A request with no answer by then counts as unbounded work (and the connection is dropped).
+NO_ANSWER_SECONDS = 15.0
 
 # Numbers beyond an IEEE 754 double's range or precision, written as raw JSON (json.dumps cannot).
 HOSTILE_NUMBERS = ["1e400", "-1e400", "1e-400", "9" * 1000, "-" + "1" * 400, "9007199254740993",
@@ -61,7 +63,7 @@ class Service:
         for attempt in range(2):
             try:
                 if self.conn is None:
-                    self.conn = http.client.HTTPConnection(self.host, self.port, timeout=30)
+                    self.conn = http.client.HTTPConnection(self.host, self.port, timeout=NO_ANSWER_SECONDS)
                 self.conn.request(method, path, body=body, headers=headers or {})
                 r = self.conn.getresponse()
                 data = r.read()
@@ -69,6 +71,11 @@ class Service:
                     self.conn.close()
                     self.conn = None
                 return r.status, (r.getheader("Content-Type") or ""), data
+            except TimeoutError:
+                if self.conn is not None:
+                    self.conn.close()
+                self.conn = None
+                return None
             except (http.client.HTTPException, OSError):
                 if self.conn is not None:
                     self.conn.close()
@@ -406,9 +413,14 @@ def main():
 
     def timed(path, body, raw):
         start = time.monotonic()
-        status, ctype, data = service.request("POST", path, raw.encode(), {"Content-Type": "application/json",
-                                                                              "Accept": "application/json"})
+        answer = service.request("POST", path, raw.encode(), {"Content-Type": "application/json",
+                                                              "Accept": "application/json"})
         elapsed = time.monotonic() - start
+        if answer is None:
+            fail(f"no answer within {NO_ANSWER_SECONDS} s", path, body, "timed out")
+            slowest[0], slowest[1] = max(slowest[0], elapsed), f"{path} {raw[:200]}"
+            return None
+        status, ctype, data = answer
         if elapsed > slowest[0]:
             slowest[0], slowest[1] = elapsed, f"{path} {raw[:200]}"
         if elapsed > SLOW_ANSWER_SECONDS:
@@ -419,7 +431,10 @@ def main():
         """A hostile request: never a 5xx; refused with a 4xx problem when {@code refuse}."""
         counts["sent"] += 1
         counts["hostile"] += 1
-        status, ctype, data = timed(path, body, raw)
+        answer = timed(path, body, raw)
+        if answer is None:
+            return
+        status, ctype, data = answer
         if status < 400 and not refuse:
             return
         if status >= 500 or status < 400:
@@ -433,7 +448,10 @@ def main():
         counts["sent"] += 1
         counts["invalid" if breaks else "valid"] += 1
         raw = json.dumps(body, allow_nan=False)
-        status, ctype, data = timed(path, body, raw)
+        answer = timed(path, body, raw)
+        if answer is None:
+            return
+        status, ctype, data = answer
         text = data.decode("utf-8", "replace")
         if status >= 500:
             fail("5xx", path, body, f"{status} {text}")
