@@ -383,7 +383,12 @@ def main():
     args = parser.parse_args()
 
     service = Service(args.base)
-    status, _, data = service.request("GET", "/v3/api-docs")
+    answer = None
+    for _ in range(3):  # the first document is built on demand: slow on a busy machine
+        answer = answer or service.request("GET", "/v3/api-docs")
+    if answer is None:
+        raise SystemExit(f"/v3/api-docs did not answer within {3 * NO_ANSWER_SECONDS} s")
+    status, _, data = answer
     if status != 200:
         raise SystemExit(f"/v3/api-docs answered {status}")
     doc = json.loads(data)
