@@ -184,7 +184,7 @@ public final class RequiredPulseRate {
      * cos(pi fc dt) exp(-a dt^2/4), equals 10^(-X/20): every faster rate keeps the RF pulse loss
      * within X dB. Solved for dt in (0, arccos(10^(-X/20))/(pi fc)] by bisection on the log of
      * the bound (Apache Commons Math BisectionSolver, to 1e-15 of the bracket: at most 120 values); NaN when the interval is not
-     * a finite positive double. Reference: DOMAIN "Sampling adequacy" (derived).
+     * a finite positive double. Reference: derived (the bound of {@link PulseSamplingLoss#closedFormBoundRatio}).
      */
     public static double closedFormBoundRateMhz(GaussianPulse pulse, double amplitudeToleranceDb) {
         Checks.positive("amplitude_tolerance_db", amplitudeToleranceDb);

@@ -56,7 +56,8 @@ public final class SamplingCalculator {
     /**
      * The narrowest bandwidth, percent, for which the RF pulse-rate search
      * (required_sampling_frequency_pulse_mhz) is run: its cost grows steeply as the pulse tends to a
-     * continuous wave (about 125 ms worst case at 1 %, 0.5 s at 0.1 %, 14 s at 0.01 %).
+     * continuous wave; from 1 % up it stays well within its work bound
+     * ({@link RequiredPulseRate#SEARCH_BUDGET}), below it would often reach it.
      */
     public static final double MIN_BANDWIDTH_PERCENT_FOR_PULSE_RATE = 1.0;
 

@@ -4,7 +4,8 @@ package utdigit.web.common;
 final class InputMessages {
     private InputMessages() {}
 
-    static final String FINITE_NUMBER = "must be a finite JSON number (not quoted, not NaN or Infinity)";
+    static final String FINITE_NUMBER = "must be a finite JSON number within the range of a double (not quoted, not NaN or Infinity, "
+            + "not beyond about 1.8e308, not a non-zero value so small that it would read as 0)";
     static final String WHOLE_NUMBER = "must be a whole number (an integral value such as 2 or 2.0)";
     static final String TEXT = "must be a JSON string";
     static final String LONE_SURROGATE = "holds a lone UTF-16 surrogate (an unpaired \\uD800-\\uDFFF escape): "

@@ -14,7 +14,8 @@ import tools.jackson.databind.module.SimpleModule;
 
 /**
  * Deserializers that read numbers and strings exactly as written: a number must be a JSON number
- * (not a quoted string), finite (1e400 overflows and is rejected), and an integer field accepts an
+ * (not a quoted string), finite (1e400 overflows and is rejected, and so is 1e-400, which is
+ * not 0 but would read as 0), and an integer field accepts an
  * integral value such as 2.0 but not 2.5. A string field accepts only a JSON string, and only
  * well-formed Unicode (no lone surrogate, RFC 7493). An enum
  * value is its exact name: the library's own reader would trim white space around it.
@@ -50,13 +51,21 @@ final class StrictScalars {
             JsonToken t = p.currentToken();
             if (t == JsonToken.VALUE_NUMBER_INT || t == JsonToken.VALUE_NUMBER_FLOAT) {
                 double v = p.getDoubleValue();
-                if (!Double.isFinite(v)) {
+                if (!Double.isFinite(v) || underflows(p, v)) {
                     return (Double) ctxt.handleWeirdNumberValue(Double.class, v, InputMessages.FINITE_NUMBER);
                 }
                 return v;
             }
             return (Double) ctxt.handleUnexpectedToken(Double.class, p);
         }
+    }
+
+    /**
+     * Whether a number read as 0 is not 0 as written (1e-400): beyond a double's range, which
+     * I-JSON (RFC 7493 2.2) excludes; refused like 1e400, not read as 0.
+     */
+    static boolean underflows(JsonParser p, double v) {
+        return v == 0.0 && p.currentToken() == JsonToken.VALUE_NUMBER_FLOAT && p.getDecimalValue().signum() != 0;
     }
 
     static final class WholeInteger extends StdScalarDeserializer<Integer> {
@@ -69,7 +78,7 @@ final class StrictScalars {
             JsonToken t = p.currentToken();
             if (t == JsonToken.VALUE_NUMBER_INT || t == JsonToken.VALUE_NUMBER_FLOAT) {
                 double v = p.getDoubleValue();
-                if (!Double.isFinite(v) || v != StrictMath.rint(v)
+                if (!Double.isFinite(v) || underflows(p, v) || v != StrictMath.rint(v)
                         || v < Integer.MIN_VALUE || v > Integer.MAX_VALUE) {
                     return (Integer) ctxt.handleWeirdNumberValue(Integer.class, v, InputMessages.WHOLE_NUMBER);
                 }
