@@ -309,7 +309,7 @@ public final class WaveformAnalyzer {
                 modelLoss = s.pulseAmplitudeLossDb();
                 modelAbove = Optional.ofNullable(s.energyAboveNyquistFraction());
                 if (in.amplitudeToleranceDb() != null) {
-                    modelRequired = Optional.ofNullable(s.requiredSamplingFrequencyPulseMhz());
+                    modelRequired = s.requiredSamplingFrequencyPulseMhz() == null ? Optional.empty() : s.requiredSamplingFrequencyPulseMhz();
                     if (!searchable) {
                         warnings.add(Warning.of(MODEL_NOT_AVAILABLE, "model_required_sampling_frequency_pulse_mhz is "
                                 + "null: the model's rate search covers bandwidths of 1 % and above"));
