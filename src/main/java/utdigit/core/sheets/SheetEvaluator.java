@@ -11,6 +11,7 @@ import utdigit.core.acquisition.AcquisitionCalculator;
 import utdigit.core.acquisition.AcquisitionInput;
 import utdigit.core.acquisition.AcquisitionResult;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.PulseCalculator;
 import utdigit.core.pulse.PulseInput;
@@ -196,16 +197,14 @@ public final class SheetEvaluator {
         }
         if (pulseLoss != null && evaluationError != null) {
             v.put("combined_amplitude_error_db", pulseLoss + Math.abs(evaluationError));
-            v.references.add(Reference.of("combined amplitude error",
-                    "worst-case sum pulse_amplitude_loss_db + |evaluation_error_under_db| of the sampling and "
-                            + "quantization errors at the evaluation height (derived)"));
+            v.references.add(Reference.of("combined amplitude error", Sources.COMBINED_AMPLITUDE));
         }
 
         List<Finding> findings = RuleEvaluator.evaluate(profile, sheet.technique().name(), v.values);
         List<String> cautions = new ArrayList<>(profile.cautions());
         cautions.addAll(SERVICE_CAUTIONS);
         return new SheetResult(v.values, findings, RuleEvaluator.verdict(findings), cautions,
-                v.warnings, new ArrayList<>(v.references));
+                v.warnings, Reference.groupedById(v.references));
     }
 
     private static void putInputs(SheetInput s, Values v) {
