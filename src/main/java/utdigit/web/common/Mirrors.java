@@ -109,12 +109,12 @@ public final class Mirrors {
         }
         Material material = MaterialCatalog.find(f.material()).orElse(null);
         if (material == null) {
-            errors.add("material", "unknown material '" + f.material() + "'; built-in materials: "
+            errors.add("material", "unknown material '" + f.material() + "'; materials: "
                     + String.join(", ", MaterialCatalog.ids()));
             return null;
         }
-        if (!material.liquid() && f.temperatureC() != null) {
-            errors.add("temperature_c", "applies only with material water; solids' table values are not "
+        if (!material.temperatureDependent() && f.temperatureC() != null) {
+            errors.add("temperature_c", "applies only with material water; other materials' table values are not "
                     + "temperature-corrected");
             return null;
         }

@@ -204,7 +204,7 @@ class AcquisitionBudgetApiTest extends ApiTest {
                 .body("velocity_source.material", equalTo("carbon-steel"))
                 .body("velocity_source.wave_mode", equalTo("LONGITUDINAL"))
                 .body("velocity_source.velocity_m_per_s", near(5920))
-                .body("velocity_source.source", containsString("ISO 22232-2"))
+                .body("velocity_source.source", equalTo("iso-22232-2-steel-reference-values"))
                 .body("inputs.gate_length_mm", near(50))
                 .body("inputs.velocity_m_per_s", near(5920))
                 .body("inputs", not(hasKey("material")))

@@ -316,7 +316,7 @@ class ProfileCatalogTest {
         }
 
         @Test
-        @DisplayName("example-tfm: amplitude fidelity <= 2 dB (DOMAIN, from memory)")
+        @DisplayName("example-tfm: amplitude fidelity <= 2 dB (recalled, not read: UNVERIFIED)")
         void exampleTfmLimitsTheGridAmplitudeLossToTwoDb() {
             RequirementProfile p = catalog.find("example-tfm").orElseThrow();
             assertThat(p.rules()).singleElement().satisfies(r -> {
@@ -324,7 +324,7 @@ class ProfileCatalogTest {
                 assertThat(r.comparison()).isEqualTo(Comparison.AT_MOST);
                 assertThat(r.limit().value()).isEqualTo(2.0);
                 assertThat(r.techniques()).containsExactly("TFM");
-                assertThat(r.source()).startsWith("from memory");
+                assertThat(r.source()).startsWith("recalled and not read");
             });
         }
     }
