@@ -24,7 +24,7 @@ import utdigit.core.common.Warning;
  * {@link Snell}. Period, wavelength, near field and beam spread use the nominal frequency; durations
  * and cycles the pulse model's carrier (the same with ARITHMETIC). The distance is a distance in the
  * part: with wedge_path_mm given, it is compared with the near field left in the part, else with
- * the near field. The band edges are the one-sided model's (DOMAIN); a -20 or -40 dB lower edge more
+ * the near field. The band edges are the one-sided model's (methods.md); a -20 or -40 dB lower edge more
  * than 0.1 % above the real pulse's (its negative-frequency image, {@link RealPulseSpectrum}) is
  * flagged with a warning. Stateless and thread-safe.
  */

@@ -232,8 +232,7 @@ public final class QuantizationCalculator {
      * quantizer: 20 log10(2^N) + 10 log10(1.5) dB, the exact form of 6.02 N + 1.76 dB (signal power
      * A^2/2 over the uniform noise q^2/12 with q = 2A/2^N); 1.76 dB at 0 bits rising 6.02 dB per bit.
      * Does not depend on the code mapping or on a gain after digitizing. Empty for RECTIFIED data,
-     * where a full-scale sine does not exist. Reference: Bennett 1948; W. Kester, Analog Devices
-     * MT-001.
+     * where a full-scale sine does not exist. Reference: src/docs/methods.md 4.2 (derived there).
      */
     static Optional<Double> idealSqnrDb(DigitizedSignal signal, int bitDepth) {
         if (signal != DigitizedSignal.RF) {

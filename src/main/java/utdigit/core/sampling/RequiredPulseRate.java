@@ -46,7 +46,7 @@ public final class RequiredPulseRate {
      * The rate above which every rate keeps the RF pulse loss ({@link PulseSamplingLoss#rfLossDb})
      * within X dB.
      *
-     * <p>Method (DOMAIN "Sampling adequacy"): start at the rate fs0 where the closed-form bound
+     * <p>Method (src/docs/methods.md 3.3): start at the rate fs0 where the closed-form bound
      * cos(pi fc/fs) exp(-a/(4 fs^2)) equals 10^(-X/20) (Brent's method, Apache Commons Math
      * BrentSolver; the bound falls monotonically with fs, so every faster rate passes); scan down in
      * steps of {@link #SCAN_STEP_FRACTION} while the loss stays within X; bisect the last passing
@@ -111,7 +111,7 @@ public final class RequiredPulseRate {
      * The rate, MHz, where the closed-form bound of the read RF amplitude,
      * cos(pi fc dt) exp(-a dt^2/4), equals 10^(-X/20): every faster rate keeps the RF pulse loss
      * within X dB. Solved for dt in (0, arccos(10^(-X/20))/(pi fc)] with Brent's method on the log
-     * of the bound (Apache Commons Math BrentSolver, 1e-15 relative). Reference: DOMAIN
+     * of the bound (Apache Commons Math BrentSolver, 1e-15 relative). Reference: methods.md
      * "Sampling adequacy" (derived).
      */
     public static double closedFormBoundRateMhz(GaussianPulse pulse, double amplitudeToleranceDb) {

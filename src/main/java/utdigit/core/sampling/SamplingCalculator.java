@@ -17,7 +17,7 @@ import utdigit.core.pulse.GaussianPulse;
  * Sampling adequacy of a digitizer setting for a probe (POST /api/sampling-assessments): sampling
  * interval, samples per period, Nyquist, sampled-peak losses of the sine and of the Gaussian pulse
  * model, timing quantization, the rates needed for an amplitude tolerance, and the spatial sampling
- * of a TFM image. Formulas and conventions: DOMAIN "Sampling adequacy" and "Spatial sampling of a
+ * of a TFM image. Formulas and conventions: src/docs/methods.md, section 3 (sampling and the spatial sampling of a
  * TFM image".
  */
 public final class SamplingCalculator {
@@ -242,7 +242,7 @@ public final class SamplingCalculator {
      * 0.5 erfc((f - fc)/(sigma_f sqrt 2)), in [0, 1] (one-sided model: the negative-frequency image
      * is neglected). erfc: Apache Commons Math 3.6.1 {@link Erf#erfc(double)} (regularized gamma
      * continued fraction in pure-Java arithmetic, so platform-independent). Model value, optimistic
-     * for real probes; reference: DOMAIN "Sampling adequacy".
+     * for real probes; reference: src/docs/methods.md 3.3.
      */
     static double energyAboveFraction(GaussianPulse pulse, double frequencyMhz) {
         double z = (frequencyMhz - pulse.carrierMhz()) / (pulse.powerSpectrumSigmaMhz() * StrictMath.sqrt(2.0));

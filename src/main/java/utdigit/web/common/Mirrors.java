@@ -18,7 +18,7 @@ import utdigit.core.materials.WaveMode;
 public final class Mirrors {
     private Mirrors() {}
 
-    /** Lowest velocity accepted, m/s (DESIGN ranges). */
+    /** Lowest velocity accepted, m/s (the contract's ranges, README and OpenAPI). */
     public static final double MIN_VELOCITY_M_PER_S = 100.0;
     /** Highest velocity accepted, m/s. */
     public static final double MAX_VELOCITY_M_PER_S = 20_000.0;

@@ -24,7 +24,7 @@ import utdigit.web.common.VelocitySourceView;
 class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionRequest> {
     static final String NAME = "thickness-resolutions";
 
-    /** Largest velocity uncertainty accepted, percent of the velocity (DESIGN ranges). */
+    /** Largest velocity uncertainty accepted, percent of the velocity (the contract's ranges, README and OpenAPI). */
     static final double MAX_VELOCITY_UNCERTAINTY_PERCENT = 20.0;
 
     @Override

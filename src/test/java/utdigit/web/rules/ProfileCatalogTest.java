@@ -280,7 +280,7 @@ class ProfileCatalogTest {
         }
 
         @Test
-        @DisplayName("example-paut: DOMAIN 'Code requirements seen', ASME V Art. 4, 2013 ed.")
+        @DisplayName("example-paut: ASME V Art. 4, 2013 ed., read in code excerpts")
         void examplePautHoldsTheDigitizationAndTheThicknessBands() {
             RequirementProfile p = catalog.find("example-paut").orElseThrow();
             assertThat(p.documents()).singleElement().satisfies(d -> {
@@ -298,7 +298,7 @@ class ProfileCatalogTest {
         }
 
         @Test
-        @DisplayName("example-tofd: >= 4 x nominal frequency; >= 8 x with signal processing (DOMAIN)")
+        @DisplayName("example-tofd: >= 4 x nominal frequency; >= 8 x with signal processing (read on a secondary page, UNVERIFIED)")
         void exampleTofdProfilesHoldFourAndEightSamplesPerPeriod() {
             assertThat(catalog.find("example-tofd").orElseThrow().rules()).singleElement().satisfies(r -> {
                 assertThat(r.metric()).isEqualTo("samples_per_period");
