@@ -64,21 +64,22 @@ public class MaterialDirectory {
         List<Material> all = new ArrayList<>();
         Map<String, String> seen = new HashMap<>();
         for (Path f : files) {
-            List<Material> parsed;
+            List<MaterialFileParser.Located> parsed;
             try {
-                parsed = MaterialFileParser.parse(f.toString(), Files.readAllBytes(f));
+                parsed = MaterialFileParser.parseLocated(f.toString(), Files.readAllBytes(f));
             } catch (IOException e) {
                 throw new MaterialFileException(f.toString(), 0, 0, "cannot read: " + e.getMessage());
             }
-            for (Material m : parsed) {
+            for (MaterialFileParser.Located located : parsed) {
+                Material m = located.material();
                 if (MaterialCatalog.isBuiltIn(m.id())) {
-                    throw new MaterialFileException(f.toString(), 0, 0, "material id '" + m.id() + "' is a built-in "
-                            + "material's: give the operator material its own id");
+                    throw new MaterialFileException(f.toString(), located.idLine(), located.idColumn(), "material id '"
+                            + m.id() + "' is a built-in material's: give the operator material its own id");
                 }
                 String first = seen.putIfAbsent(m.id(), f.toString());
                 if (first != null) {
-                    throw new MaterialFileException(f.toString(), 0, 0, "material id '" + m.id()
-                            + "' is already defined in " + first);
+                    throw new MaterialFileException(f.toString(), located.idLine(), located.idColumn(), "material id '"
+                            + m.id() + "' is already defined in " + first);
                 }
                 all.add(m);
             }

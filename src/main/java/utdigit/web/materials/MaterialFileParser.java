@@ -53,7 +53,14 @@ final class MaterialFileParser {
     /** A value read from the file and where it stood. */
     private record Value(Object value, TokenStreamLocation at) {}
 
+    /** A material read from the file and where its id stands (for an id used again elsewhere). */
+    record Located(Material material, int idLine, int idColumn) {}
+
     static List<Material> parse(String source, byte[] yaml) {
+        return parseLocated(source, yaml).stream().map(Located::material).toList();
+    }
+
+    static List<Located> parseLocated(String source, byte[] yaml) {
         try (JsonParser p = YAML.createParser(yaml)) {
             return new MaterialFileParser(source, p).file();
         } catch (JacksonException e) {
@@ -63,13 +70,13 @@ final class MaterialFileParser {
         }
     }
 
-    private List<Material> file() {
+    private List<Located> file() {
         JsonToken t = p.nextToken();
         if (t != JsonToken.START_OBJECT) {
             throw fail(t == null ? null : p.currentTokenLocation(), "a materials file is a YAML mapping with the field "
                     + "'materials' (a list of materials)");
         }
-        List<Material> materials = null;
+        List<Located> materials = null;
         while ((t = p.nextToken()) == JsonToken.PROPERTY_NAME) {
             TokenStreamLocation at = p.currentTokenLocation();
             if (!p.currentName().equals("materials")) {
@@ -98,7 +105,7 @@ final class MaterialFileParser {
         return materials;
     }
 
-    private Material material(TokenStreamLocation start) {
+    private Located material(TokenStreamLocation start) {
         Map<String, Value> f = new HashMap<>();
         JsonToken t;
         while ((t = p.nextToken()) == JsonToken.PROPERTY_NAME) {
@@ -159,8 +166,9 @@ final class MaterialFileParser {
             throw fail(f.get(uL != null ? "longitudinal_uncertainty_m_per_s" : "shear_uncertainty_m_per_s").at(),
                     "say how the uncertainty reads: uncertainty_kind STANDARD or HALF_WIDTH");
         }
-        return new Material(id, name, longitudinal, shear, uL, uS, kind, source, note, Material.Origin.OPERATOR,
-                liquid, coarseGrained);
+        TokenStreamLocation idAt = f.get("id").at();
+        return new Located(new Material(id, name, longitudinal, shear, uL, uS, kind, source, note,
+                Material.Origin.OPERATOR, liquid, coarseGrained), idAt.getLineNr(), idAt.getColumnNr());
     }
 
     private String text(Map<String, Value> f, String name, TokenStreamLocation start, boolean required) {

@@ -111,7 +111,8 @@ class MaterialFileParserTest {
                   - {id: carbon-steel, name: Mine, longitudinal_m_per_s: 5900, source: measured}
                 """);
         assertThatThrownBy(() -> MaterialDirectory.load(dir)).isInstanceOf(MaterialFileException.class)
-                .hasMessageContaining("a.yaml").hasMessageContaining("built-in");
+                // the id value "carbon-steel" stands at line 2, column 10 of "  - {id: carbon-steel, ..."
+                .hasMessageContaining("a.yaml:2:10").hasMessageContaining("built-in");
         Files.writeString(dir.resolve("a.yaml"), """
                 materials:
                   - {id: block, name: Mine, longitudinal_m_per_s: 5900, source: measured}
@@ -121,7 +122,7 @@ class MaterialFileParserTest {
                   - {id: block, name: Again, longitudinal_m_per_s: 5910, source: measured}
                 """);
         assertThatThrownBy(() -> MaterialDirectory.load(dir)).isInstanceOf(MaterialFileException.class)
-                .hasMessageContaining("b.yaml").hasMessageContaining("already defined");
+                .hasMessageContaining("b.yaml:2:10").hasMessageContaining("already defined");
         assertThatThrownBy(() -> MaterialDirectory.load(dir.resolve("absent")))
                 .isInstanceOf(MaterialFileException.class).hasMessageContaining("UTDIGIT_MATERIALS_DIRECTORY");
     }
