@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Batch benchmark: rows per second of a CSV batch through POST /api/{calculation}/batch with the
 # service's heap capped at 256 MiB, rows in = rows out, and the heap seen by the GC log.
-# Targets (DESIGN "Non-functional targets"): 100,000 calculation rows/s and 20,000 sheets/s.
+# Targets (README "Performance"): 100,000 calculation rows/s and 20,000 sheets/s.
 #
 #   src/bench/batch-bench.sh                                   # quantization-assessments, 1,000,000 rows
 #   src/bench/batch-bench.sh sampling-assessments 1000000

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # HTTP benchmark: a calculation endpoint against a trivial JSON endpoint of the same service,
-# side by side in one run with wrk on 127.0.0.1 (DESIGN "Non-functional targets": a calculation
+# side by side in one run with wrk on 127.0.0.1 (README "Performance": a calculation
 # at 80 % or more of the trivial endpoint; p99 under 50 ms at 32 connections).
 #
 #   src/bench/http-bench.sh               # builds the jar if missing, about 3 minutes

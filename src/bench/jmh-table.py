@@ -3,7 +3,7 @@
 import json
 import sys
 
-# DESIGN "Non-functional targets", in ns per call.
+# README "Performance", in ns per call.
 US = 1_000.0
 TARGETS = [
     ("ClosedFormBenchmarks.", 2 * US, "closed form < 2 us"),

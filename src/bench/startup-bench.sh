@@ -6,7 +6,7 @@
 # -Dspring.aot.enabled=true), class data sharing (CDS) of the extracted jar
 # (-XX:ArchiveClassesAtExit in a training run, then -XX:SharedArchiveFile), and CDS with AOT.
 # Both jars are built with -Paot: an AOT-processed jar runs as a plain one unless AOT is enabled.
-# DESIGN "Non-functional targets": ready within 1.3x the empty application.
+# README "Performance": ready within 1.3x the empty application.
 #
 #   src/bench/startup-bench.sh            # 5 runs per variant, median; about 3 minutes
 #   RUNS=9 src/bench/startup-bench.sh

@@ -31,7 +31,7 @@ import utdigit.core.timing.TimeOfFlightResult;
 /**
  * The closed-form calculators, one call each with every optional input given (the most work a
  * single request asks of them: every result, its warnings and references) and with the required
- * inputs only. Target (DESIGN "Non-functional targets"): under 2 us median.
+ * inputs only. Target (README "Performance"): under 2 us median.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.SampleTime)

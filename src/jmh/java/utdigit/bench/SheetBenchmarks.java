@@ -25,7 +25,7 @@ import utdigit.core.sheets.SheetTechnique;
 /**
  * A full technique-sheet validation: every calculation the sheet's fields allow (pulse, sampling
  * with the pulse model, quantization, time of flight, thickness, acquisition) and a profile of
- * twelve rules, some with conditions and some with limits naming another metric. Target (DESIGN):
+ * twelve rules, some with conditions and some with limits naming another metric. Target (README "Performance"):
  * under 200 us. The sheets and the profile are our own examples, built in code.
  */
 @State(Scope.Thread)

@@ -17,7 +17,7 @@ class CorePurityTest {
             .should().dependOnClassesThat().resideInAnyPackage(
                     "org.springframework..", "tools.jackson..", "com.fasterxml..",
                     "jakarta..", "javax.servlet..", "io.swagger..", "org.springdoc..")
-            .because("the core must stay a plain library (DESIGN: pure calculation core)");
+            .because("the core must stay a plain library (DEVELOPERS.md: the core is pure)");
 
     @ArchTest
     static final ArchRule coreDoesNotDependOnWeb = noClasses()

@@ -50,6 +50,8 @@ class ExamplesTest extends ApiTest {
     static {
         GET_EXAMPLES.put("materials", "/api/materials");
         GET_EXAMPLES.put("materials-water", "/api/materials/water?temperature_c=40");
+        GET_EXAMPLES.put("references", "/api/references");
+        GET_EXAMPLES.put("references-gum-rectangular", "/api/references/jcgm-100-2008-4.3.7");
         GET_EXAMPLES.put("requirement-profiles", "/api/requirement-profiles");
         GET_EXAMPLES.put("requirement-profiles-common-practice", "/api/requirement-profiles/common-practice");
     }

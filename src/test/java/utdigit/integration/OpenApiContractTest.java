@@ -20,8 +20,7 @@ import utdigit.web.support.ApiTest;
 
 /**
  * The contract changes only on purpose: the served OpenAPI document must equal the committed
- * {@code api-examples/openapi.json}, and it must keep the conventions of the API (DESIGN.md "API
- * contract"): documented operations with their problem answers, kebab-case paths, snake_case
+ * {@code api-examples/openapi.json}, and it must keep the conventions of the API (README "Conventions"): documented operations with their problem answers, kebab-case paths, snake_case
  * properties, UPPER_SNAKE_CASE enum values.
  */
 class OpenApiContractTest extends ApiTest {

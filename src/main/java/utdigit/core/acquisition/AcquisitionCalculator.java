@@ -10,6 +10,7 @@ import utdigit.core.common.CalculationException;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
 import utdigit.core.common.Warning;
 import utdigit.core.sampling.DecimationMode;
@@ -83,8 +84,7 @@ public final class AcquisitionCalculator {
         } else if (in.gateLengthMm() != null) {
             gateField = "gate_length_mm";
             gateUs = pulseEchoTimeUs(Checks.positive(gateField, in.gateLengthMm()), velocityMPerS);
-            references.add(Reference.of("gate length from a sound path",
-                    "pulse-echo time t = 2 L / v for a sound path L in the part (definition)"));
+            references.add(Reference.of("gate length from a sound path", Sources.DEFINITIONS));
         } else {
             throw CalculationException.invalid("gate_length_us", Double.NaN,
                     "is required (or gate_length_mm with a velocity)");
@@ -106,11 +106,7 @@ public final class AcquisitionCalculator {
             captureUsed = in.capture() == null ? CaptureMode.FMC : in.capture();
             firings = captureUsed.firings(n);
             aScans = captureUsed.aScans(n);
-            references.add(Reference.of("firings and A-scans per position, " + captureUsed,
-                    captureUsed == CaptureMode.FMC
-                            ? "FMC with n elements: n firings, n^2 A-scans (" + COMMON_PRACTICE + ")"
-                            : "HMC with n elements: n firings, n(n+1)/2 A-scans by transmit-receive "
-                                    + "reciprocity (" + COMMON_PRACTICE + ")"));
+            references.add(Reference.of("firings and A-scans per position, " + captureUsed, Sources.ACQUISITION_COUNTING));
         } else {
             if (in.capture() != null) {
                 throw CalculationException.notApplicable("capture",
@@ -120,8 +116,7 @@ public final class AcquisitionCalculator {
             focalLawsUsed = in.focalLaws() == null ? 1 : Checks.atLeastOne(countField, in.focalLaws());
             firings = focalLawsUsed;
             aScans = focalLawsUsed;
-            references.add(Reference.of("firings and A-scans per position, phased array",
-                    "one firing and one A-scan per focal law, summed over all groups (" + COMMON_PRACTICE + ")"));
+            references.add(Reference.of("firings and A-scans per position, phased array", Sources.ACQUISITION_COUNTING));
         }
         int averaging = in.averaging() == null ? 1 : Checks.atLeastOne("averaging", in.averaging());
 
@@ -167,12 +162,8 @@ public final class AcquisitionCalculator {
         }
 
         // 3. Data volume.
-        references.add(Reference.of("samples per A-scan",
-                "ceil(gate (us) x fs/m (MHz)), ceiling with a relative tolerance of 1e-9 so that exact "
-                        + "products (1.1 us x 100 MHz = 110) are not rounded up (" + COMMON_PRACTICE + ")"));
-        references.add(Reference.of("bytes per sample",
-                "ceil(bit_depth/8): each sample stored in whole bytes; instruments that pack samples "
-                        + "(e.g. two 12-bit samples in 3 bytes) store less (" + COMMON_PRACTICE + ")"));
+        references.add(Reference.of("samples per A-scan", Sources.ACQUISITION_COUNTING));
+        references.add(Reference.of("bytes per sample", Sources.ACQUISITION_COUNTING));
         if (bitDepth % 8 != 0) {
             warnings.add(Warning.of(SAMPLE_STORAGE_ASSUMED, String.format(Locale.ROOT,
                     "bit_depth %d is counted as %d whole byte(s) per sample; an instrument that packs samples "
@@ -181,12 +172,8 @@ public final class AcquisitionCalculator {
         }
         double positionsPerMetre = 1000.0 / scanIncrementMm;
         double megabytesPerMetre = bytesPerPosition * positionsPerMetre / BYTES_PER_MEGABYTE;
-        references.add(Reference.of("data volume",
-                "bytes per position = bytes per A-scan x A-scans per position; MB per metre = bytes per "
-                        + "position x 1000/scan_increment_mm / 10^6; file size = MB per metre x length; headers, "
-                        + "encoder data and compression excluded (" + COMMON_PRACTICE + ")"));
-        references.add(Reference.of("megabyte",
-                "MB = 10^6 bytes (SI prefix mega; not the binary MiB of 2^20 bytes)"));
+        references.add(Reference.of("data volume", Sources.ACQUISITION_COUNTING));
+        references.add(Reference.of("megabyte", Sources.DEFINITIONS));
 
         Double fileSizeMegabytes = scanLengthMm == null ? null : megabytesPerMetre * scanLengthMm / 1000.0;
         Double maxScanLengthPerFileMm = null;
@@ -204,9 +191,7 @@ public final class AcquisitionCalculator {
         // 4. Scan speed: the PRF is spent on firings, each averaged firing counted.
         double firingsPerRecordedPosition = (double) firings * averaging; // up to 2^32: exact in a double
         double maxScanSpeedMmPerS = prfHz * scanIncrementMm / firingsPerRecordedPosition;
-        references.add(Reference.of("maximum scan speed",
-                "v_max = PRF x scan_increment / (firings per position x averaging): the PRF counts "
-                        + "firings, not A-scans (" + COMMON_PRACTICE + ")"));
+        references.add(Reference.of("maximum scan speed", Sources.SCAN_SPEED));
         double dataRateSpeedMmPerS = plannedSpeedMmPerS == null ? maxScanSpeedMmPerS : plannedSpeedMmPerS;
         if (plannedSpeedMmPerS != null && exceeds(plannedSpeedMmPerS, maxScanSpeedMmPerS)) {
             warnings.add(Warning.of(PLANNED_SPEED_ABOVE_MAXIMUM, String.format(Locale.ROOT,
@@ -218,18 +203,14 @@ public final class AcquisitionCalculator {
         }
         double dataRateMegabytesPerS =
                 bytesPerPosition * (dataRateSpeedMmPerS / scanIncrementMm) / BYTES_PER_MEGABYTE;
-        references.add(Reference.of("data rate",
-                "bytes per position x scan speed / scan_increment / 10^6, at the planned speed when given, "
-                        + "else at the maximum (" + COMMON_PRACTICE + ")"));
+        references.add(Reference.of("data rate", Sources.ACQUISITION_COUNTING));
 
         // 5. Wrap-around limit.
         Double maxPrfHz = null;
         if (roundTripUs != null) {
             double q = decayFactorUsed;
             maxPrfHz = maxPrfWithoutWraparoundHz(roundTripUs, q);
-            references.add(Reference.of("wrap-around PRF limit",
-                    "PRF_max = 1/(q t_rt): the next firing waits for the longest round trip t_rt (summed over "
-                            + "the media) times a decay factor q >= 1 for reverberation (" + COMMON_PRACTICE + ")"));
+            references.add(Reference.of("wrap-around PRF limit", Sources.WRAPAROUND));
             if (q == 1.0) {
                 warnings.add(Warning.of(WRAPAROUND_DECAY_FACTOR_BARE_LIMIT,
                         "wraparound_decay_factor 1 gives the bare physical limit: echoes of a firing that "

@@ -8,8 +8,8 @@ import utdigit.core.common.CalculationException;
  * <p>c(T) = 1402.385 + 5.038813 T - 5.799136e-2 T^2 + 3.287156e-4 T^3 - 1.398845e-6 T^4
  * + 2.787860e-9 T^5 in m/s, T in degrees Celsius, valid 0 to 95 C. This is the fifth-order
  * polynomial of W. Marczak, "Water as a standard in the measurements of speed of sound in liquids",
- * J. Acoust. Soc. Am. 102 (1997) 2776 (coefficients from memory). It gives 1482.38 m/s at 20 C,
- * against 1482.3 m/s of Del Grosso and Mader (1972, from memory).
+ * J. Acoust. Soc. Am. 102 (1997) 2776 (catalogue id marczak-1997-water; coefficients read in texts that
+ * reproduce the paper). It gives 1482.38 m/s at 20 C.
  */
 public final class WaterVelocity {
     private WaterVelocity() {}
@@ -20,10 +20,6 @@ public final class WaterVelocity {
     public static final double MAX_TEMPERATURE_C = 95.0;
     /** Temperature used when the caller gives none, C. */
     public static final double DEFAULT_TEMPERATURE_C = 20.0;
-
-    public static final String SOURCE =
-            "W. Marczak, J. Acoust. Soc. Am. 102 (1997) 2776, fifth-order polynomial, 0-95 C "
-                    + "(coefficients from memory)";
 
     private static final double[] COEFFICIENTS = {
         1402.385, 5.038813, -5.799136e-2, 3.287156e-4, -1.398845e-6, 2.787860e-9

@@ -8,7 +8,7 @@ import utdigit.core.common.Checks;
  */
 public enum CentreFrequencyConvention {
     /**
-     * fc = (fl + fu) / 2, so fl,u = fc (1 -/+ bw/2) (ASTM E1065, from memory). The pulse model's
+     * fc = (fl + fu) / 2, so fl,u = fc (1 -/+ bw/2) (src/docs/methods.md 2.1). The pulse model's
      * carrier is the nominal frequency itself.
      */
     ARITHMETIC {
@@ -24,7 +24,7 @@ public enum CentreFrequencyConvention {
         }
     },
     /**
-     * fc = sqrt(fl fu) (EN 12668-2 / ISO 22232-2, from memory), so with B = bw fc:
+     * fc = sqrt(fl fu) (src/docs/methods.md 2.1), so with B = bw fc:
      * fl,u = (-/+B + sqrt(B^2 + 4 fc^2)) / 2. The pulse model is then centred on (fl + fu)/2 with
      * fractional bandwidth B / ((fl + fu)/2).
      */

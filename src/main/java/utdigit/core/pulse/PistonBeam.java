@@ -31,8 +31,7 @@ public final class PistonBeam {
      * |p(z)| proportional to |sin(pi/lambda (sqrt(z^2 + a^2) - z))| with a = D/2, which lies where
      * sqrt(z^2 + a^2) - z = lambda/2: z = (D^2 - lambda^2) / (4 lambda).
      *
-     * <p>Reference: Krautkraemer, Ultrasonic Testing of Materials; Kinsler et al., Fundamentals of
-     * Acoustics (from memory).
+     * <p>Reference: src/docs/methods.md 2.5 (derived there).
      *
      * @param elementDiameterMm element diameter D, mm, > 0
      * @param wavelengthMm wavelength lambda in the part, mm, > 0
@@ -54,7 +53,7 @@ public final class PistonBeam {
      * The near field left in the part behind a wedge or delay line: the wedge path w of velocity
      * v_w counts as the part path w v_w / v, so N_part = N - w v_w / v.
      *
-     * <p>Reference: common practice (from memory).
+     * <p>Reference: common practice, no published source (src/docs/methods.md 2.5).
      *
      * @param nearFieldLengthMm N in the part's material, mm, > 0
      * @param wedgePathMm sound path w in the wedge or delay line, mm, > 0

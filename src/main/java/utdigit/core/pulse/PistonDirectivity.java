@@ -12,8 +12,8 @@ import utdigit.core.common.Decibels;
  * solved from it.
  *
  * <p>The far-field pressure of a baffled circular piston of diameter D, relative to the axis, is
- * D(x) = 2 J1(x) / x with x = pi D sin(theta) / lambda (Kinsler et al., Fundamentals of Acoustics,
- * radiation from a baffled circular piston, from memory). A beam-spread half-angle follows from a
+ * D(x) = 2 J1(x) / x with x = pi D sin(theta) / lambda (the Fraunhofer integral of a uniform
+ * circular aperture, derived in src/docs/methods.md 2.6). A beam-spread half-angle follows from a
  * constant k with sin(theta) = k lambda / D, where x = pi k solves D(x) = level (one-way, transmit
  * or receive alone) or D(x)^2 = level (pulse-echo, two-way: the same element transmits and
  * receives). The first null is the first zero of J1.
@@ -37,13 +37,13 @@ public final class PistonDirectivity {
     private static final double FIRST_ZERO_BRACKET_LOW = 3.0;
     private static final double FIRST_ZERO_BRACKET_HIGH = 4.5;
 
-    /** j1,1, the first positive zero of J1 (about 3.8317, from memory). */
+    /** j1,1, the first positive zero of J1 (about 3.8317, solved at class load). */
     private static final double FIRST_ZERO_OF_J1 = solveFirstZeroOfJ1();
-    /** The first-null constant k = j1,1 / pi (about 1.2197, from memory). */
+    /** The first-null constant k = j1,1 / pi (about 1.2197; src/docs/methods.md 11). */
     private static final double FIRST_NULL_CONSTANT = FIRST_ZERO_OF_J1 / StrictMath.PI;
-    /** The pulse-echo -6 dB constant (about 0.5137, from memory). */
+    /** The pulse-echo -6 dB constant (about 0.5137; src/docs/methods.md 11). */
     private static final double TWO_WAY_6DB_CONSTANT = solveConstant(6.0, true);
-    /** The pulse-echo -20 dB constant (about 0.8694, from memory). */
+    /** The pulse-echo -20 dB constant (about 0.8694; src/docs/methods.md 11). */
     private static final double TWO_WAY_20DB_CONSTANT = solveConstant(20.0, true);
 
     /**
@@ -51,7 +51,7 @@ public final class PistonDirectivity {
      *
      * @param x pi D sin(theta) / lambda, dimensionless, finite and >= 0
      * @return the pressure relative to the axis, in [-0.133, 1]
-     *     <p>Reference: Kinsler et al., Fundamentals of Acoustics (from memory); J1 by Apache Commons
+     *     <p>Reference: src/docs/methods.md 2.6 (derived there); J1 by Apache Commons
      *     Math 3.6.1 BesselJ.
      */
     public static double directivity(double x) {
@@ -63,7 +63,7 @@ public final class PistonDirectivity {
     }
 
     /**
-     * The first-null constant k = j1,1 / pi (about 1.2197, from memory): the first zero of the
+     * The first-null constant k = j1,1 / pi (about 1.2197; src/docs/methods.md 11): the first zero of the
      * directivity lies at sin(theta) = k lambda / D, one-way and two-way alike.
      *
      * @return k, dimensionless (solved once from J1)
@@ -75,7 +75,7 @@ public final class PistonDirectivity {
     /**
      * The pulse-echo (two-way) beam-spread constant of a level: k such that D(pi k)^2 = 10^(-L/20),
      * k in (0, j1,1 / pi). The -6 dB constant is about 0.5137, the -20 dB constant about 0.8694
-     * (from memory); both are solved once and cached, other levels are solved on each call.
+     * (src/docs/methods.md 11); both are solved once and cached, other levels are solved on each call.
      *
      * @param levelDb the level L below the axis, dB; -6 and 6 both mean 6 dB below; finite, not 0
      * @return k, dimensionless

@@ -8,6 +8,7 @@ import java.util.Optional;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
 import utdigit.core.common.Warning;
 
@@ -23,7 +24,7 @@ import utdigit.core.common.Warning;
  * {@link Snell}. Period, wavelength, near field and beam spread use the nominal frequency; durations
  * and cycles the pulse model's carrier (the same with ARITHMETIC). The distance is a distance in the
  * part: with wedge_path_mm given, it is compared with the near field left in the part, else with
- * the near field. The band edges are the one-sided model's (DOMAIN); a -20 or -40 dB lower edge more
+ * the near field. The band edges are the one-sided model's (methods.md); a -20 or -40 dB lower edge more
  * than 0.1 % above the real pulse's (its negative-frequency image, {@link RealPulseSpectrum}) is
  * flagged with a warning. Stateless and thread-safe.
  */
@@ -92,8 +93,7 @@ public final class PulseCalculator {
         double velocityMPerS = in.velocityMPerS();
         double periodUs = Waves.periodUs(frequencyMhz);
         double wavelengthMm = Waves.wavelengthMm(velocityMPerS, frequencyMhz);
-        references.add(Reference.of("period and wavelength",
-                "definitions: T = 1/f, lambda = v/f, at the nominal frequency_mhz"));
+        references.add(Reference.of("period and wavelength", Sources.DEFINITIONS));
 
         Band band = in.bandwidthPercent() == null
                 ? Band.NONE
@@ -109,13 +109,9 @@ public final class PulseCalculator {
         if (in.elementDiameterMm() != null) {
             double diameterMm = in.elementDiameterMm();
             nearFieldLengthMm = PistonBeam.nearFieldLengthMm(diameterMm, wavelengthMm);
-            references.add(Reference.of("near field length",
-                    "N = D^2/(4 lambda): the trade's formula for a circular element, common practice"));
+            references.add(Reference.of("near field length", Sources.NEAR_FIELD_PRACTICE));
             nearFieldLengthExactMm = PistonBeam.exactNearFieldLengthMm(diameterMm, wavelengthMm);
-            references.add(Reference.of("exact near field length",
-                    "last on-axis pressure maximum of a circular piston, (D^2 - lambda^2)/(4 lambda): "
-                            + "Krautkraemer, Ultrasonic Testing of Materials; Kinsler et al., "
-                            + "Fundamentals of Acoustics (from memory)"));
+            references.add(Reference.of("exact near field length", Sources.PISTON_NEAR_FIELD));
             if (nearFieldLengthExactMm.isEmpty()) {
                 warnings.add(Warning.of(NO_EXACT_NEAR_FIELD, "element_diameter_mm " + fmt(diameterMm)
                         + " is not larger than the wavelength " + fmt(wavelengthMm)
@@ -132,17 +128,12 @@ public final class PulseCalculator {
             beamSpreadNullDeg = beamSpread(PistonDirectivity.firstNullConstant(),
                     wavelengthMm, diameterMm, NO_BEAM_SPREAD_NULL, "beam_spread_null_deg",
                     "the first null", warnings);
-            references.add(Reference.of("beam spread",
-                    "far-field directivity of a circular piston D(x) = 2 J1(x)/x, x = pi D sin(theta)/lambda "
-                            + "(Kinsler et al., Fundamentals of Acoustics, from memory); pulse-echo half-angles "
-                            + "sin(theta) = k lambda/D with D(pi k)^2 = 10^(-L/20), the first null at the first "
-                            + "zero of J1; k solved with Apache Commons Math 3.6.1 BesselJ and BrentSolver"));
+            references.add(Reference.of("beam spread", Sources.PISTON_DIRECTIVITY));
 
             if (in.wedgePathMm() != null) {
                 nearFieldInPartMm = PistonBeam.nearFieldInPartMm(
                         nearFieldLengthMm, in.wedgePathMm(), in.wedgeVelocityMPerS(), velocityMPerS);
-                references.add(Reference.of("near field in the part",
-                        "N - w v_w / v behind a wedge or delay line: common practice (from memory)"));
+                references.add(Reference.of("near field in the part", Sources.NEAR_FIELD_PRACTICE));
                 if (nearFieldInPartMm < 0) {
                     warnings.add(Warning.of(PART_IN_FAR_FIELD_ONLY, "the near field ("
                             + fmt(nearFieldLengthMm) + " mm in the part's material) ends inside the wedge "
@@ -155,9 +146,7 @@ public final class PulseCalculator {
             if (in.distanceMm() != null) {
                 double distanceMm = in.distanceMm();
                 double nearFieldAheadMm = nearFieldInPartMm != null ? nearFieldInPartMm : nearFieldLengthMm;
-                references.add(Reference.of("beam diameter",
-                        "2 z tan(theta) with the pulse-echo -6 dB half-angle: far-field beam geometry, "
-                                + "common practice; not given inside the near field, where it does not hold"));
+                references.add(Reference.of("beam diameter", Sources.NEAR_FIELD_PRACTICE));
                 if (beamSpread6dbDeg.isEmpty()) {
                     beamDiameter6dbMm = Optional.empty();
                     warnings.add(Warning.of(NO_BEAM_DIAMETER_6DB, "without a pulse-echo -6 dB beam-spread "
@@ -184,9 +173,7 @@ public final class PulseCalculator {
             double incidentDeg = in.incidentAngleDeg();
             double wedgeVelocityMPerS = in.wedgeVelocityMPerS();
             refractedAngleDeg = Snell.refractedAngleDeg(incidentDeg, wedgeVelocityMPerS, velocityMPerS);
-            references.add(Reference.of("refracted angle",
-                    "Snell's law sin(theta_r)/v = sin(theta_i)/v_w, with the part's velocity of the chosen "
-                            + "wave mode"));
+            references.add(Reference.of("refracted angle", Sources.SNELL));
             if (refractedAngleDeg.isEmpty()) {
                 double criticalDeg = Snell.criticalAngleDeg(wedgeVelocityMPerS, velocityMPerS).orElseThrow();
                 warnings.add(Warning.of(PAST_CRITICAL_ANGLE, "incident_angle_deg " + fmt(incidentDeg)
@@ -247,11 +234,7 @@ public final class PulseCalculator {
         double betaDeg = refractedAngleDeg.get();
         double apertureMm = PistonBeam.projectedApertureMm(in.elementDiameterMm(), alphaDeg, betaDeg);
         double nearFieldMm = PistonBeam.nearFieldLengthMm(apertureMm, wavelengthMm);
-        references.add(Reference.of("incidence plane of an angle beam",
-                "the part sees the projected aperture D_eff = D cos(beta)/cos(alpha) in the incidence plane "
-                        + "(Krautkraemer, Ultrasonic Testing of Materials, from memory); near field D_eff^2/(4 lambda) and "
-                        + "beam spread with D_eff there; the plane perpendicular to incidence keeps D (the other beam "
-                        + "fields)"));
+        references.add(Reference.of("incidence plane of an angle beam", Sources.INCIDENCE_PLANE));
         Optional<Double> beamSpread6 = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
                 wavelengthMm, apertureMm, NO_BEAM_SPREAD_6DB, "incidence_plane_beam_spread_6db_deg",
                 "the pulse-echo -6 dB level", warnings);
@@ -262,11 +245,7 @@ public final class PulseCalculator {
         if (in.wedgePathMm() != null) {
             nearFieldInPart = Optional.of(nearFieldMm - PistonBeam.incidencePlaneWedgePathInPartMm(in.wedgePathMm(),
                     in.wedgeVelocityMPerS(), in.velocityMPerS(), alphaDeg, betaDeg));
-            references.add(Reference.of("near field in the part, incidence plane",
-                    "D_eff^2/(4 lambda) - w (v_w/v) cos^2(beta)/cos^2(alpha): the wedge path carried into the part by "
-                            + "the tangential-plane transfer of a paraxial beam through an oblique plane interface, whose "
-                            + "beam parameter scales by (v_w/v) cos^2(beta)/cos^2(alpha) (derived; it carries the element's "
-                            + "near field in the wedge's material onto D_eff^2/(4 lambda))"));
+            references.add(Reference.of("near field in the part, incidence plane", Sources.INCIDENCE_PLANE));
         }
         Optional<Double> beamDiameter = null;
         if (in.distanceMm() != null) {
@@ -318,17 +297,10 @@ public final class PulseCalculator {
         double[] edgesMhz = convention.bandEdgesMhz(in.frequencyMhz(), fractionalBandwidth);
         GaussianPulse model = convention.pulseModel(in.frequencyMhz(), fractionalBandwidth);
 
-        references.add(Reference.of("-6 dB band edges", convention == CentreFrequencyConvention.ARITHMETIC
-                ? "bandwidth between the -6 dB points (ASTM E1065, 3.2.2); arithmetic centre "
-                        + "fc = (fl + fu)/2 (ASTM E1065, from memory)"
-                : "bandwidth between the -6 dB points (ASTM E1065, 3.2.2); geometric centre "
-                        + "fc = sqrt(fl fu) (EN 12668-2 / ISO 22232-2, from memory)"));
-        references.add(Reference.of("-20 dB and -40 dB band edges, pulse durations and cycles",
-                "model value: Gaussian pulse exp(-a t^2) cos(2 pi fc t), the parameterisation of "
-                        + "scipy.signal.gausspulse, carrier (fl + fu)/2; one-sided spectrum L dB down at "
-                        + "fc +/- (bw fc/2) sqrt(L/6); envelope duration 2 sqrt(-ln r / a) at ratio r"));
-        references.add(Reference.of("spatial pulse length and axial resolution",
-                "v tau(-6 dB), and half of it in pulse-echo: common practice, no published source"));
+        references.add(Reference.of("-6 dB bandwidth", Sources.ASTM_E1065));
+        references.add(Reference.of("centre frequency " + convention, Sources.CENTRE_FREQUENCY));
+        references.add(Reference.of("-20 dB and -40 dB band edges, pulse durations and cycles", Sources.GAUSSIAN_MODEL));
+        references.add(Reference.of("spatial pulse length and axial resolution", Sources.PULSE_LENGTH));
 
         if (bandwidthPercent > IMAGE_WARNING_BANDWIDTH_PERCENT) {
             Optional<Double> realLowerMhz = RealPulseSpectrum.lowerEdgeMhz(model, LEVEL_6DB);
@@ -362,9 +334,7 @@ public final class PulseCalculator {
                 Waves.axialResolutionMm(spatialPulseLengthMm));
     }
 
-    private static final Reference REAL_LOWER_EDGE_REFERENCE = Reference.of("real pulse's lower band edge",
-            "(derived) spectrum G(f - fc) + G(f + fc) of the real pulse, G the one-sided model's Gaussian; "
-                    + "roots by Apache Commons Math 3.6.1 BrentSolver");
+    private static final Reference REAL_LOWER_EDGE_REFERENCE = Reference.of("real pulse's lower band edge", Sources.REAL_LOWER_EDGE);
 
     private static Optional<Double> lowerEdge(GaussianPulse model, double levelDb, String code, String field,
             List<Warning> warnings, List<Reference> references) {

@@ -11,7 +11,7 @@ public enum CodeMapping {
     /**
      * The full-scale range divided into 2^N equal steps: LSB = FSR / 2^N in %FSH, with FSR =
      * 200 %FSH for RF and 100 %FSH for RECTIFIED (8-bit RF: 0.78125 %FSH). Exists for every bit
-     * depth 1 to 32. Reference: IEEE Std 1241, the ideal code width of an ADC (from memory).
+     * depth 1 to 32. Reference: src/docs/methods.md 4.1 (the code width FSR/2^N, derived there).
      */
     FSR_OVER_2N {
         @Override

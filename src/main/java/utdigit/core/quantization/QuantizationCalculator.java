@@ -8,6 +8,7 @@ import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Decibels;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 
 /**
@@ -115,31 +116,19 @@ public final class QuantizationCalculator {
         double dynamicRangeDb = dynamicRangeDb(converterLsb, gainDb);
         double lowBoundPercentFsh = quantizer.lowBoundLsbFraction() * lsb;
         double highBoundPercentFsh = quantizer.highBoundLsbFraction(signal) * lsb;
-        references.add(Reference.of("levels", "2^N codes of an N-bit converter (definition)"));
+        references.add(Reference.of("levels", Sources.DEFINITIONS));
         references.add(lsbReference(signal, mapping));
         if (signal == DigitizedSignal.RF) {
-            references.add(Reference.of("rectifying RF after digitizing",
-                    "an RF record rectified after digitizing keeps 2^(N-1) levels for 0..100 %FSH, one bit"
-                            + " fewer than digitizing the rectified signal (derived from the code range)"));
+            references.add(Reference.of("rectifying RF after digitizing", Sources.CODE_MAPPING));
         }
         if (gainDb != 0.0) {
-            references.add(Reference.of("digital gain",
-                    "gain G after digitizing scales heights and the LSB alike: LSB_displayed = LSB 10^(G/20);"
-                            + " every height figure uses it, the SQNR does not change: soft gain adds no resolution"
-                            + " (derived)"));
+            references.add(Reference.of("digital gain", Sources.SOFT_GAIN));
         }
-        references.add(Reference.of("dynamic range",
-                "the largest reachable displayed height to one displayed LSB: 20 log10(100 %FSH / LSB) - max(G, 0) dB"
-                        + " with the converter's LSB (definition; a negative soft gain shrinks the largest reachable"
-                        + " height with the LSB, so it cannot add range)"));
+        references.add(Reference.of("dynamic range", Sources.DYNAMIC_RANGE));
 
         Optional<Double> idealSqnrDb = idealSqnrDb(signal, bitDepth);
         if (idealSqnrDb.isPresent()) {
-            references.add(Reference.of("ideal SQNR",
-                    "20 log10(2^N) + 10 log10(1.5) dB for a full-scale sine and an ideal mid-rise quantizer, the exact"
-                            + " form of 6.02 N + 1.76 dB (Bennett 1948; W. Kester, Analog Devices MT-001); a numerically"
-                            + " quantized full-scale sine comes out 0.01-0.14 dB lower at 16-8 bits; independent of"
-                            + " code_mapping and digital_gain_db"));
+            references.add(Reference.of("ideal SQNR", Sources.IDEAL_SQNR));
         } else {
             warnings.add(Warning.of(IDEAL_SQNR_NOT_APPLICABLE,
                     "ideal_sqnr_db is the ratio of a full-scale sine to its quantization noise and does not apply to"
@@ -193,8 +182,7 @@ public final class QuantizationCalculator {
             requireReachable(referenceHeight, gainRatio, gainDb, "reference_height_percent_fsh");
             evaluationHeight = referenceHeight * Decibels.toRatio(evaluationLevelDb);
             requireReachableEvaluation(evaluationHeight, referenceHeight, evaluationLevelDb, gainRatio, gainDb);
-            references.add(Reference.of("evaluation height",
-                    "h = h_ref 10^(L/20) for the evaluation level L dB (definition of a dB amplitude level)"));
+            references.add(Reference.of("evaluation height", Sources.DEFINITIONS));
             if (signalHeight == null) {
                 references.add(errorReference(quantizer, signal));
             }
@@ -228,9 +216,7 @@ public final class QuantizationCalculator {
         Double averagingSnrGainDb = null;
         if (averaging != null) {
             averagingSnrGainDb = averagingSnrGainDb(averaging);
-            references.add(Reference.of("averaging",
-                    "10 log10(M) dB for the mean of M acquisitions with uncorrelated noise (derived: the noise"
-                            + " power of the mean falls as 1/M)"));
+            references.add(Reference.of("averaging", Sources.SOFT_GAIN));
             warnings.add(Warning.of(AVERAGING_NOISE_ONLY, String.format(Locale.ROOT,
                     "averaging %d improves the SNR of uncorrelated noise by averaging_snr_gain_db %s; it does not"
                             + " shrink the quantization step of a single shot, which every other figure here holds",
@@ -247,8 +233,7 @@ public final class QuantizationCalculator {
      * quantizer: 20 log10(2^N) + 10 log10(1.5) dB, the exact form of 6.02 N + 1.76 dB (signal power
      * A^2/2 over the uniform noise q^2/12 with q = 2A/2^N); 1.76 dB at 0 bits rising 6.02 dB per bit.
      * Does not depend on the code mapping or on a gain after digitizing. Empty for RECTIFIED data,
-     * where a full-scale sine does not exist. Reference: Bennett 1948; W. Kester, Analog Devices
-     * MT-001.
+     * where a full-scale sine does not exist. Reference: src/docs/methods.md 4.2 (derived there).
      */
     static Optional<Double> idealSqnrDb(DigitizedSignal signal, int bitDepth) {
         if (signal != DigitizedSignal.RF) {
@@ -369,36 +354,17 @@ public final class QuantizationCalculator {
 
     private static Reference lsbReference(DigitizedSignal signal, CodeMapping mapping) {
         if (mapping == CodeMapping.FSR_OVER_2N) {
-            return Reference.of("LSB size", "LSB = FSR / 2^N with FSR = "
-                    + (signal == DigitizedSignal.RF ? "200 %FSH (RF, -100..+100 %FSH)" : "100 %FSH (RECTIFIED, 0..100 %FSH)")
-                    + " (IEEE Std 1241, from memory)");
+            return Reference.of("LSB size", Sources.CODE_MAPPING);
         }
-        return Reference.of("LSB size", "full screen at the largest code: LSB = "
-                + (signal == DigitizedSignal.RF ? "100 / (2^(N-1) - 1) %FSH (RF)" : "100 / (2^N - 1) %FSH (RECTIFIED)")
-                + " (common practice, no published source)");
+        return Reference.of("LSB size", Sources.MAX_CODE);
     }
 
     private static Reference errorReference(Quantizer quantizer, DigitizedSignal signal) {
-        String bounds;
-        if (quantizer == Quantizer.ROUNDING) {
-            bounds = "ROUNDING reads within +/- LSB/2: over 20 log10((h + LSB/2)/h), under 20 log10((h - LSB/2)/h)"
-                    + " (W. Kester, Analog Devices MT-001, from memory)";
-        } else if (signal == DigitizedSignal.RF) {
-            bounds = "TRUNCATION toward minus infinity: positive peaks read up to 1 LSB low, negative half-waves read"
-                    + " as |s| up to 1 LSB high: over 20 log10((h + LSB)/h), under 20 log10((h - LSB)/h) (derived)";
-        } else {
-            bounds = "TRUNCATION toward minus infinity of RECTIFIED data reads up to 1 LSB low and never high: over 0,"
-                    + " under 20 log10((h - LSB)/h) (derived)";
-        }
-        return Reference.of("amplitude error", bounds + "; heights and LSB displayed, inside the code range"
-                + " (clipping at full scale not modelled)");
+        return Reference.of("amplitude error", Sources.QUANTIZATION_ERROR);
     }
 
     private static Reference minimumHeightReference(Quantizer quantizer) {
-        return Reference.of("minimum height", (quantizer == Quantizer.ROUNDING
-                ? "h_min = (LSB/2) / (1 - 10^(-X/20))" : "h_min = LSB / (1 - 10^(-X/20))")
-                + ", where the under error equals -X dB; as a level 20 log10(h_min / 100) dB (derived from the"
-                + " error bound)");
+        return Reference.of("minimum height", Sources.QUANTIZATION_ERROR);
     }
 
     private static String fmt(double value) {

@@ -9,8 +9,8 @@ public enum Quantizer {
     /**
      * Rounding to the nearest level: the reading lies within +/- LSB/2 of h, for RF and RECTIFIED.
      * Worst errors 20 log10((h + LSB/2)/h) over and 20 log10((h - LSB/2)/h) under, dB; the under
-     * error exists for h > LSB/2. Reference: W. Kester, Analog Devices MT-001 (the +/- q/2 error of
-     * an ideal quantizer; from memory).
+     * error exists for h > LSB/2. Reference: src/docs/methods.md 4.3 (the +/- q/2 error of an ideal
+     * quantizer, derived there).
      */
     ROUNDING(0.5, 0.5, 0.5),
     /**

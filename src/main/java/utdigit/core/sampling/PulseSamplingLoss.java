@@ -104,7 +104,7 @@ public final class PulseSamplingLoss {
      *
      * <p>Valid for n = 1/(fc dt) > 2: |s| falls within a quarter period of the peak, so the nearer
      * of the two (at most dt/2 away) reads at least this high, also as a positive peak. It equals
-     * the exact worst case for broadband pulses. Reference: DOMAIN "Sampling adequacy" (derived).
+     * the exact worst case for broadband pulses. Reference: src/docs/methods.md 3.3 (derived).
      *
      * @param pulse the pulse model (carrier fc, MHz; envelope constant a, 1/us^2)
      * @param samplingIntervalUs dt at the rate that decides amplitude, us, with fc dt < 1/2

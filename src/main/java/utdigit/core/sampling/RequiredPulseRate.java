@@ -78,7 +78,7 @@ public final class RequiredPulseRate {
      * ranges) could still be missed. Then scan further down in steps of
      * {@link #SLOWER_SCAN_STEP_FRACTION} for a slower rate that passes, stopping at the first one.
      * Rates at or below 2 fc count as failing: the loss has no bound there. Reference: search of
-     * our own (derived).
+     * our own (derived; src/docs/methods.md 3.4).
      *
      * <p>Work: bounded by {@link #SEARCH_BUDGET} values of s(t) (plus {@link #SLOWER_SCAN_BUDGET}
      * for slower rates); each phase search costs about 2.35/bw samples per evaluation.
@@ -184,7 +184,7 @@ public final class RequiredPulseRate {
      * cos(pi fc dt) exp(-a dt^2/4), equals 10^(-X/20): every faster rate keeps the RF pulse loss
      * within X dB. Solved for dt in (0, arccos(10^(-X/20))/(pi fc)] by bisection on the log of
      * the bound (Apache Commons Math BisectionSolver, to 1e-15 of the bracket: at most 120 values); NaN when the interval is not
-     * a finite positive double. Reference: derived (the bound of {@link PulseSamplingLoss#closedFormBoundRatio}).
+     * a finite positive double. Reference: src/docs/methods.md 3.4, derived (the bound of {@link PulseSamplingLoss#closedFormBoundRatio}).
      */
     public static double closedFormBoundRateMhz(GaussianPulse pulse, double amplitudeToleranceDb) {
         Checks.positive("amplitude_tolerance_db", amplitudeToleranceDb);

@@ -9,6 +9,7 @@ import org.apache.commons.math3.special.Erf;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Reference;
 import utdigit.core.common.SearchBudget;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.core.pulse.GaussianPulse;
@@ -17,7 +18,7 @@ import utdigit.core.pulse.GaussianPulse;
  * Sampling adequacy of a digitizer setting for a probe (POST /api/sampling-assessments): sampling
  * interval, samples per period, Nyquist, sampled-peak losses of the sine and of the Gaussian pulse
  * model, timing quantization, the rates needed for an amplitude tolerance, and the spatial sampling
- * of a TFM image. Formulas and conventions: DOMAIN "Sampling adequacy" and "Spatial sampling of a
+ * of a TFM image. Formulas and conventions: src/docs/methods.md, section 3 (sampling and the spatial sampling of a
  * TFM image".
  */
 public final class SamplingCalculator {
@@ -64,21 +65,6 @@ public final class SamplingCalculator {
     /** The spectral level at Nyquist above which a warning is issued, dB. */
     public static final double NYQUIST_LEVEL_WARNING_DB = -40.0;
 
-    /**
-     * What the carrier phase fixed at 0 leaves out, from a brute-force scan over the carrier phase
-     * (bandwidths 5-150 %, 2.2-10 samples per period; CarrierPhaseCostTest checks the figures).
-     */
-    static final String CARRIER_PHASE_NOTE = "The carrier phase is fixed at 0 (the model's: a carrier crest at the "
-            + "envelope's peak); an echo of another carrier phase can read lower against its own peak: by up to about "
-            + "0.05 dB for bandwidths of 40-100 % at 5 or more samples per period, up to about 0.3 dB for narrower or "
-            + "wider bands there, and up to about 0.8 dB below 5 samples per period (bandwidths up to 100 %; more "
-            + "above); from a brute-force scan over the carrier phase, which is not searched here (derived)";
-
-    private static final String TFM_MODEL = "derived model; the code's own amplitude-fidelity check on a "
-            + "reference reflector governs";
-    private static final String SPECTRAL_MODEL = "model value, optimistic for real probes (ringing, noise); "
-            + "the instrument's anti-alias filter decides what aliases";
-
     /** The assessment for {@code in}, with the contract's defaults applied. */
     public static SamplingResult compute(SamplingInput in) {
         Objects.requireNonNull(in, "input");
@@ -121,13 +107,8 @@ public final class SamplingCalculator {
         double samplesPerPeriod = effectiveMhz / f;
         double amplitudeSamplesPerPeriod = amplitudeMhz / f;
         double nyquistMhz = amplitudeMhz / 2.0;
-        references.add(Reference.of("sampling interval, samples per period, decimation",
-                "definitions: dt = m/fs, n = (fs/m)/f at the nominal frequency; DROP keeps every m-th sample "
-                        + "(amplitude figures at fs/m), PEAK_PRESERVING the largest |sample| of each group of m "
-                        + "(amplitude figures at fs): common practice, no published source"));
-        references.add(Reference.of("timing error and uncertainty",
-                "worst case dt/2 of an instant read at a sample; standard uncertainty dt/sqrt(12) of a "
-                        + "rectangular distribution: JCGM 100:2008 (GUM) 4.3.7"));
+        references.add(Reference.of("sampling interval, samples per period, decimation", Sources.DECIMATION));
+        references.add(Reference.of("timing error and uncertainty", Sources.GUM_RECTANGULAR));
         if (samplesPerPeriod <= 2.0) {
             warnings.add(Warning.of(SAMPLES_PER_PERIOD_AT_MOST_2, String.format(Locale.ROOT,
                     "samples_per_period is %s: 2 or fewer samples per period of frequency_mhz undersample the "
@@ -147,9 +128,7 @@ public final class SamplingCalculator {
                             + "stay the sine model's figures for comparison with code rules"));
         } else if (amplitudeSamplesPerPeriod > 2.0) {
             sineLoss = Optional.of(PulseSamplingLoss.sineBoundLossDb(amplitudeSamplesPerPeriod));
-            references.add(Reference.of("sine amplitude loss",
-                    "classic sampled-peak bound -20 log10(cos(pi/n)), the peak midway between two samples, n at "
-                            + "the rate that decides amplitude: standard digital signal processing result (derived)"));
+            references.add(Reference.of("sine amplitude loss", Sources.SINE_BOUND));
         } else {
             sineLoss = Optional.empty(); // explained by SAMPLES_PER_PERIOD_AT_MOST_2 (n_amp <= 2 implies n <= 2)
         }
@@ -164,10 +143,8 @@ public final class SamplingCalculator {
             double bandwidthFraction = in.bandwidthPercent() / 100.0;
             double upperMhz = convention.bandEdgesMhz(f, bandwidthFraction)[1];
             pulse = convention.pulseModel(f, bandwidthFraction);
-            references.add(Reference.of("band edges and centre frequency", bandEdgeSource(convention)));
-            references.add(Reference.of("pulse model",
-                    "Gaussian-modulated cosine exp(-a t^2) cos(2 pi fc t), a = -(pi fc bw)^2/(4 ln 10^(-6/20)): "
-                            + "the parameterisation of scipy.signal.gausspulse"));
+            references.add(Reference.of("band edges and centre frequency", Sources.CENTRE_FREQUENCY));
+            references.add(Reference.of("pulse model", Sources.SCIPY_GAUSSPULSE));
             if (in.bandwidthPercent() > 100.0) {
                 warnings.add(Warning.of(BANDWIDTH_ABOVE_100_PERCENT,
                         "bandwidth_percent is above 100: the real pulse's negative-frequency image moves the lower "
@@ -201,22 +178,8 @@ public final class SamplingCalculator {
             energyAboveNyquistFraction = envelope
                     ? envelopeEnergyAboveFraction(pulse, nyquistMhz)
                     : energyAboveFraction(pulse, nyquistMhz);
-            if (envelope) {
-                references.add(Reference.of("spectral level at Nyquist",
-                        SPECTRAL_MODEL + ": the detected envelope exp(-a t^2) is sampled, its spectrum centred at 0 Hz: "
-                                + "-6 ((fs/2)/(bw fc/2))^2 dB"));
-                references.add(Reference.of("energy above Nyquist",
-                        SPECTRAL_MODEL + ": erfc((fs/2)/(sigma_f sqrt 2)), both tails of the envelope's Gaussian power "
-                                + "spectrum about 0 Hz, sigma_f = sqrt(a)/(2 pi); erfc from Apache Commons Math 3.6.1 Erf "
-                                + "(pure-Java arithmetic, platform-independent)"));
-            } else {
-                references.add(Reference.of("spectral level at Nyquist",
-                        SPECTRAL_MODEL + ": -6 ((fs/2 - fc)/(bw fc/2))^2 dB of the Gaussian pulse model"));
-                references.add(Reference.of("energy above Nyquist",
-                        SPECTRAL_MODEL + ": 0.5 erfc((fs/2 - fc)/(sigma_f sqrt 2)) of the model's Gaussian power "
-                                + "spectrum, sigma_f = sqrt(a)/(2 pi); erfc from Apache Commons Math 3.6.1 Erf "
-                                + "(pure-Java arithmetic, platform-independent)"));
-            }
+            references.add(Reference.of("spectral level at Nyquist", envelope ? Sources.ENVELOPE_SPECTRAL_MODEL : Sources.SPECTRAL_MODEL));
+            references.add(Reference.of("energy above Nyquist", envelope ? Sources.ENVELOPE_SPECTRAL_MODEL : Sources.SPECTRAL_MODEL));
             compressedDataAliasing(clock, bandTopMhz, envelope ? "the detected envelope's -6 dB edge"
                     : "the upper -6 dB band edge", warnings);
             pulseLoss = pulseLoss(pulse, signal, reading, clock, warnings, references);
@@ -234,9 +197,7 @@ public final class SamplingCalculator {
             double toleranceDb = in.amplitudeToleranceDb();
             requiredSamplesPerPeriod = PulseSamplingLoss.requiredSamplesPerPeriod(toleranceDb);
             requiredSamplingFrequencyMhz = clock.rawFrequencyForAmplitudeRateMhz(requiredSamplesPerPeriod * f);
-            references.add(Reference.of("required samples per period and sampling frequency",
-                    "inverse of the sine bound, n = pi/arccos(10^(-X/20)), at the nominal frequency; the raw "
-                            + "sampling_frequency to set for the same decimation (derived)"));
+            references.add(Reference.of("required samples per period and sampling frequency", Sources.REQUIRED_RATE));
             if (withBandwidth) {
                 requiredSamplingFrequencyPulseMhz =
                         requiredPulseRate(pulse, signal, reading, toleranceDb, clock, warnings, references);
@@ -250,7 +211,7 @@ public final class SamplingCalculator {
         TfmImage image = null;
         if (tfm.withGrid() || tfm.withLateral()) {
             double wavelengthMm = TfmGridSampling.wavelengthMm(in.velocityMPerS(), f);
-            references.add(Reference.of("wavelength", "definition: lambda = v/f at the nominal frequency"));
+            references.add(Reference.of("wavelength", Sources.DEFINITIONS));
             if (tfm.withGrid()) {
                 image = in.tfmImage() == null ? TfmImage.RF : in.tfmImage();
                 Double widthMm = withBandwidth ? TfmGridSampling.depthResponseWidthMm(in.velocityMPerS(), pulse) : null;
@@ -260,15 +221,9 @@ public final class SamplingCalculator {
                     tfmMaxGridSpacingMm = image == TfmImage.RF
                             ? TfmGridSampling.maxRfDepthStepMm(in.amplitudeToleranceDb(), wavelengthMm, widthMm)
                             : TfmGridSampling.maxGaussianStepMm(in.amplitudeToleranceDb(), widthMm);
-                    references.add(Reference.of("TFM largest depth step", TFM_MODEL
-                            + ": the step whose depth loss equals amplitude_tolerance_db, solved numerically "
-                            + "(bisection, Apache Commons Math BisectionSolver, to 1e-15 of the bracket) where no closed form exists"));
+                    references.add(Reference.of("TFM largest depth step", Sources.TFM_GRID));
                 }
-                references.add(Reference.of("TFM depth grid", TFM_MODEL + ": "
-                        + (image == TfmImage.RF
-                                ? "-20 log10(cos(2 pi dz/lambda)) from the carrier (an RF image repeats every lambda/2"
-                                        + " in pulse-echo) plus 6 (dz/w)^2 from the envelope, w = v tau(-6 dB)/2"
-                                : "6 (dz/w)^2 from the envelope, w = v tau(-6 dB)/2")));
+                references.add(Reference.of("TFM depth grid", Sources.TFM_GRID));
             }
             if (tfm.withLateral()) {
                 double lateralWidthMm = TfmGridSampling.lateralWidthMm(
@@ -278,10 +233,7 @@ public final class SamplingCalculator {
                 if (stepMm >= lateralWidthMm) {
                     warnings.add(stepNotBelowWidth("tfm_lateral_grid_spacing_mm", stepMm, lateralWidthMm));
                 }
-                references.add(Reference.of("TFM lateral grid", TFM_MODEL + String.format(Locale.ROOT,
-                        ": -6 dB width w_lat = %.4f lambda z/A (paraxial; the full width where the one-way sinc "
-                                + "falls to -3 dB, two-way -6 dB), loss 6 (dx/w_lat)^2",
-                        TfmGridSampling.LATERAL_WIDTH_FACTOR)));
+                references.add(Reference.of("TFM lateral grid", Sources.TFM_GRID));
             }
         }
 
@@ -319,7 +271,7 @@ public final class SamplingCalculator {
      * 0.5 erfc((f - fc)/(sigma_f sqrt 2)), in [0, 1] (one-sided model: the negative-frequency image
      * is neglected). erfc: Apache Commons Math 3.6.1 {@link Erf#erfc(double)} (regularized gamma
      * continued fraction in pure-Java arithmetic, so platform-independent). Model value, optimistic
-     * for real probes; reference: DOMAIN "Sampling adequacy".
+     * for real probes; reference: src/docs/methods.md 3.3.
      */
     static double energyAboveFraction(GaussianPulse pulse, double frequencyMhz) {
         double z = (frequencyMhz - pulse.carrierMhz()) / (pulse.powerSpectrumSigmaMhz() * StrictMath.sqrt(2.0));
@@ -360,9 +312,7 @@ public final class SamplingCalculator {
         double amplitudeMhz = clock.amplitudeSamplingFrequencyMhz();
         double intervalUs = 1.0 / amplitudeMhz;
         if (signal == SampledSignal.ENVELOPE) {
-            references.add(Reference.of("pulse amplitude loss",
-                    "sampled envelope, worst case with the peak midway between two samples: -20 log10(exp(-a (dt/2)^2)) "
-                            + "of the Gaussian pulse model (derived)"));
+            references.add(Reference.of("pulse amplitude loss", Sources.PULSE_SAMPLING_LOSS));
             return Optional.of(PulseSamplingLoss.envelopeLossDb(pulse, intervalUs));
         }
         double carrierSamples = 1.0 / (pulse.carrierMhz() * intervalUs);
@@ -381,12 +331,7 @@ public final class SamplingCalculator {
                             + "samples: a positive peak can be displaced by a larger negative half-wave of the same group, "
                             + "which pulse_amplitude_loss_db (at the raw rate) does not model"));
         }
-        references.add(Reference.of("pulse amplitude loss",
-                "worst case over the sampling phase of the Gaussian pulse model, read as "
-                        + (reading == PeakReading.ABSOLUTE ? "max |s|" : "the positive peak")
-                        + "; exact search over the phase (split at carrier zeros and at crossings of the sample curves, "
-                        + "Brent's method to 1e-15 of dt), never above the closed form cos(pi/n) exp(-a dt^2/4) (derived). "
-                        + CARRIER_PHASE_NOTE));
+        references.add(Reference.of("pulse amplitude loss", Sources.PULSE_SAMPLING_LOSS));
         try {
             return Optional.of(PulseSamplingLoss.rfLossDb(pulse, intervalUs, reading,
                     SearchBudget.of(PulseSamplingLoss.PHASE_SEARCH_BUDGET)));
@@ -404,9 +349,7 @@ public final class SamplingCalculator {
                                             double toleranceDb, SampleClock clock, List<Warning> warnings,
                                             List<Reference> references) {
         if (signal == SampledSignal.ENVELOPE) {
-            references.add(Reference.of("required sampling frequency for the pulse",
-                    "inverse of the sampled envelope's loss, dt = 2 sqrt(X ln 10/(20 a)), monotonic; the raw "
-                            + "sampling_frequency to set for the same decimation (derived)"));
+            references.add(Reference.of("required sampling frequency for the pulse", Sources.REQUIRED_RATE));
             return Optional.of(clock.rawFrequencyForAmplitudeRateMhz(RequiredPulseRate.forEnvelope(pulse, toleranceDb)));
         }
         RequiredPulseRate.RfSolution solution;
@@ -421,17 +364,7 @@ public final class SamplingCalculator {
             return Optional.empty();
         }
         double rawMhz = clock.rawFrequencyForAmplitudeRateMhz(solution.amplitudeSamplingFrequencyMhz());
-        references.add(Reference.of("required sampling frequency for the pulse", String.format(Locale.ROOT,
-                "the rate above which every rate keeps pulse_amplitude_loss_db within amplitude_tolerance_db: start "
-                        + "where the closed form cos(pi/n) exp(-a dt^2/4) meets the tolerance (every faster rate passes), "
-                        + "scan down in %s %% steps while the loss passes, at the latest to the highest whole number of "
-                        + "samples per carrier period whose sine bound exceeds the tolerance (it fails for every pulse: "
-                        + "the failing band of a narrow pulse there is not stepped over), bisect to %s relative; "
-                        + "slower passing rates "
-                        + "looked for in %s %% steps down to 2 samples per carrier period; the raw sampling_frequency "
-                        + "to set for the same decimation (derived)",
-                num(100.0 * RequiredPulseRate.SCAN_STEP_FRACTION), num(RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE),
-                num(100.0 * RequiredPulseRate.SLOWER_SCAN_STEP_FRACTION))));
+        references.add(Reference.of("required sampling frequency for the pulse", Sources.REQUIRED_RATE));
         solution.slowerPassingRateMhz().ifPresent(slowerMhz -> warnings.add(Warning.of(SLOWER_RATES_ALSO_PASS,
                 String.format(Locale.ROOT,
                         "the pulse loss is not monotonic in the sampling frequency: slower rates than "
@@ -474,13 +407,6 @@ public final class SamplingCalculator {
                 field, num(stepMm), num(widthMm)));
     }
 
-    private static String bandEdgeSource(CentreFrequencyConvention convention) {
-        String bandwidth = "-6 dB fractional bandwidth (fu - fl)/fc: ASTM E1065 3.2.2";
-        return convention == CentreFrequencyConvention.ARITHMETIC
-                ? bandwidth + "; ARITHMETIC fc = (fl + fu)/2: ASTM E1065 (from memory)"
-                : bandwidth + "; GEOMETRIC fc = sqrt(fl fu): EN 12668-2 / ISO 22232-2 (from memory); the pulse model "
-                        + "is centred on (fl + fu)/2";
-    }
 
     /** A number for a message: 6 significant digits, no exponent for ordinary magnitudes. */
     private static String num(double value) {

@@ -11,7 +11,7 @@ import utdigit.core.pulse.GaussianPulse;
 /**
  * Amplitude lost by the pixel grid of a TFM image: a reflector between two grid points is read at
  * the nearer one. Every figure here is a derived model; the code's own amplitude-fidelity check on
- * a reference reflector governs (DOMAIN "Spatial sampling of a TFM image").
+ * a reference reflector governs (src/docs/methods.md 3.7).
  */
 public final class TfmGridSampling {
     private TfmGridSampling() {}
@@ -21,7 +21,7 @@ public final class TfmGridSampling {
      * sinc(x)^2 = 10^(-6/20), sinc(x) = sin(pi x)/(pi x), i.e. the full width where the one-way
      * sinc directivity of an aperture A at depth z falls to -3 dB, two-way -6 dB (paraxial).
      * Solved at class load (Brent's method, Apache Commons Math BrentSolver, to 1e-15); about
-     * 0.8845 (DOMAIN: "about 0.884"). Reference: paraxial line-aperture directivity (derived).
+     * 0.8845 (src/docs/methods.md 11: "about 0.884"). Reference: paraxial line-aperture directivity (derived).
      */
     public static final double LATERAL_WIDTH_FACTOR = solveLateralWidthFactor();
 
@@ -43,7 +43,7 @@ public final class TfmGridSampling {
     /**
      * The -6 dB width in depth of a pulse-echo image's response, w = v tau(-6 dB) / 2, mm, with
      * tau the pulse model's -6 dB envelope duration (halved: the depth axis is a round trip).
-     * Reference: DOMAIN "Spatial sampling of a TFM image" (derived).
+     * Reference: src/docs/methods.md 3.7 (derived).
      */
     public static double depthResponseWidthMm(double velocityMPerS, GaussianPulse pulse) {
         Checks.positive("velocity_m_per_s", velocityMPerS);

@@ -11,6 +11,7 @@ import utdigit.core.acquisition.AcquisitionCalculator;
 import utdigit.core.acquisition.AcquisitionInput;
 import utdigit.core.acquisition.AcquisitionResult;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.PulseCalculator;
 import utdigit.core.pulse.PulseInput;
@@ -200,18 +201,14 @@ public final class SheetEvaluator {
             v.put("combined_amplitude_error_db", QuantizationCalculator.combinedErrorDb(pulseLoss,
                     quantization.evaluationHeightPercentFsh(),
                     quantization.quantizer().lowBoundLsbFraction() * quantization.lsbPercentFsh()));
-            v.references.add(Reference.of("combined amplitude error",
-                    "worst case of sampling and quantization together: sampling lowers the peak of the evaluation "
-                            + "height h by r_s = 10^(-pulse_amplitude_loss_db/20), then the quantizer reads that lower "
-                            + "height up to b low (LSB/2 ROUNDING, LSB TRUNCATION): -20 log10(r_s - b/h) dB, more than "
-                            + "the sum of the two losses in dB (derived)"));
+            v.references.add(Reference.of("combined amplitude error", Sources.COMBINED_AMPLITUDE));
         }
 
         List<Finding> findings = RuleEvaluator.evaluate(profile, sheet.technique().name(), v.values);
         List<String> cautions = new ArrayList<>(profile.cautions());
         cautions.addAll(SERVICE_CAUTIONS);
         return new SheetResult(v.values, findings, RuleEvaluator.verdict(findings), cautions,
-                v.warnings, new ArrayList<>(v.references));
+                v.warnings, Reference.groupedById(v.references));
     }
 
     private static void putInputs(SheetInput s, Values v) {

@@ -6,6 +6,7 @@ import java.util.Locale;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.CentreFrequencyConvention;
@@ -89,28 +90,18 @@ public final class ThicknessCalculator {
         double roundTripTimeUs = 2.0 * thicknessMm / velocityMmPerUs;
         double samplesAcrossThickness = roundTripTimeUs * clock.effectiveSamplingFrequencyMhz();
         double relativeResolutionPercent = thicknessResolutionMm / thicknessMm * 100.0;
-        references.add(Reference.of("thickness resolution",
-                "d = v t / (2m) for the time t between echoes m round trips apart (m = 1: first echo from"
-                        + " the trigger); one sample dt = m_dec / fs is v dt / (2m) of thickness; one round trip"
-                        + " 2d/v (definitions)"));
+        references.add(Reference.of("thickness resolution", Sources.DEFINITIONS));
 
         double timingStandardUncertaintyNs;
         double timingWorstCaseErrorNs;
         if (measurement == Measurement.ECHO_TO_ECHO) {
             timingStandardUncertaintyNs = clock.differenceStandardUncertaintyNs();
             timingWorstCaseErrorNs = clock.differenceWorstCaseNs();
-            references.add(Reference.of("timing, echo to echo",
-                    "a difference of two quantized instants, averaged over unknown spacings: standard"
-                            + " uncertainty dt/sqrt(6) (triangular distribution, JCGM 100:2008 (GUM) 4.3.9),"
-                            + " worst case dt"));
+            references.add(Reference.of("timing, echo to echo", Sources.GUM_TRIANGULAR));
         } else {
             timingStandardUncertaintyNs = clock.singleInstantStandardUncertaintyNs();
             timingWorstCaseErrorNs = clock.singleInstantWorstCaseNs();
-            references.add(Reference.of("timing, first echo",
-                    "one quantized instant with the trigger synchronous with the sampling clock: standard"
-                            + " uncertainty dt/sqrt(12) (rectangular distribution, JCGM 100:2008 (GUM) 4.3.7),"
-                            + " worst case dt/2; an asynchronous trigger makes it a difference of two quantized"
-                            + " instants (dt/sqrt(6)); sub-sample interpolation does better than either"));
+            references.add(Reference.of("timing, first echo", Sources.GUM_RECTANGULAR));
         }
 
         // JCGM 100:2008 eq. 10 for d = v t / (2m): c_v = t / (2m), c_t = v / (2m), t = m round trips.
@@ -119,14 +110,8 @@ public final class ThicknessCalculator {
         double samplingTermMm = velocityMmPerUs / (2.0 * echoSpacing) * (timingStandardUncertaintyNs / 1000.0);
         double standardUncertaintyMm = StrictMath.sqrt(velocityTermMm * velocityTermMm + samplingTermMm * samplingTermMm);
         double expandedUncertaintyMm = coverageFactor * standardUncertaintyMm;
-        references.add(Reference.of("combined standard uncertainty",
-                "u_d^2 = (t/(2m))^2 u_v^2 + (v/(2m))^2 u_t^2 with t = m round trips, velocity and timing"
-                        + " uncorrelated (JCGM 100:2008 (GUM) 5.1.2, eq. 10); relative form"
-                        + " (u_d/d)^2 = (u_v/v)^2 + (u_t/t)^2"));
-        references.add(Reference.of("expanded uncertainty",
-                "U = k u_d (JCGM 100:2008 (GUM) 6.2.1, from memory), coverage probability not stated: k = 2"
-                        + " gives about 95 % only for a near-normal distribution; where the rectangular"
-                        + " sampling term dominates, 2u exceeds the +/- dt/2 bound"));
+        references.add(Reference.of("combined standard uncertainty", Sources.GUM_PROPAGATION));
+        references.add(Reference.of("expanded uncertainty", Sources.GUM_EXPANDED));
         if (samplingTermMm * samplingTermMm > velocityTermMm * velocityTermMm) {
             double worstCaseMm = velocityMmPerUs / (2.0 * echoSpacing) * (timingWorstCaseErrorNs / 1000.0);
             double coveragePercent = 100.0 * samplingAloneCoverageFraction(
@@ -145,9 +130,7 @@ public final class ThicknessCalculator {
         if (requiredResolutionMm != null) {
             double effectiveRateMhz = velocityMmPerUs / (2.0 * echoSpacing * requiredResolutionMm);
             requiredSamplingFrequencyMhz = effectiveRateMhz * clock.decimationFactor();
-            references.add(Reference.of("required sampling frequency",
-                    "fs_eff = v / (2 m r) for a resolution r; the raw rate to set is fs_eff times decimation_factor"
-                            + " (definitions)"));
+            references.add(Reference.of("required sampling frequency", Sources.DEFINITIONS));
             if (thicknessResolutionMm > requiredResolutionMm * (1.0 + REQUIRED_RESOLUTION_RELATIVE_MARGIN)) {
                 warnings.add(Warning.of("RESOLUTION_COARSER_THAN_REQUIRED",
                         String.format(Locale.ROOT,
@@ -193,13 +176,11 @@ public final class ThicknessCalculator {
         double uncertaintyMPerS;
         if (in.velocityUncertaintyMPerS() != null) {
             uncertaintyMPerS = Checks.nonNegative("velocity_uncertainty_m_per_s", in.velocityUncertaintyMPerS());
-            references.add(Reference.of("velocity uncertainty",
-                    "velocity_uncertainty_m_per_s as given: a standard uncertainty (not a half-width)"));
+            references.add(Reference.of("velocity uncertainty", Sources.VELOCITY_UNCERTAINTY));
         } else if (in.velocityUncertaintyPercent() != null) {
             uncertaintyMPerS = Checks.nonNegative("velocity_uncertainty_percent", in.velocityUncertaintyPercent())
                     / 100.0 * velocityMPerS;
-            references.add(Reference.of("velocity uncertainty",
-                    "u_v = velocity_uncertainty_percent / 100 x v: a standard uncertainty (not a half-width)"));
+            references.add(Reference.of("velocity uncertainty", Sources.VELOCITY_UNCERTAINTY));
         } else {
             uncertaintyMPerS = 0.0;
         }
@@ -238,11 +219,7 @@ public final class ThicknessCalculator {
                 .pulseModel(in.frequencyMhz(), in.bandwidthPercent() / 100.0)
                 .envelopeDurationUs(PULSE_LENGTH_LEVEL_DB);
         double axialResolutionMm = velocityMmPerUs * durationUs / 2.0;
-        references.add(Reference.of("wall-echo overlap",
-                "echoes of a wall d thick are 2d/v apart and overlap when that is below the -6 dB pulse duration"
-                        + " tau, i.e. when d is below the axial resolution v tau(-6 dB)/2 (common practice, no"
-                        + " published source); tau from the Gaussian pulse model, centre frequency ARITHMETIC"
-                        + " (scipy.signal.gausspulse parameterisation): model value, real probes ring longer"));
+        references.add(Reference.of("wall-echo overlap", Sources.PULSE_LENGTH));
         if (thicknessMm < axialResolutionMm) {
             warnings.add(Warning.of(THICKNESS_BELOW_AXIAL_RESOLUTION,
                     String.format(Locale.ROOT,

@@ -6,6 +6,7 @@ import java.util.Locale;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.CentreFrequencyConvention;
@@ -55,24 +56,18 @@ public final class TimeOfFlightCalculator {
 
         List<Warning> warnings = new ArrayList<>();
         List<Reference> references = new ArrayList<>();
-        references.add(Reference.of("time resolution",
-                "dt = m / fs, the interval of the stored samples after decimation by m (definition)"));
+        references.add(Reference.of("time resolution", Sources.DEFINITIONS));
 
         double timingErrorNs;
         double timingStandardUncertaintyNs;
         if (timeReference == TimeReference.LATERAL_WAVE) {
             timingErrorNs = clock.differenceWorstCaseNs();
             timingStandardUncertaintyNs = clock.differenceStandardUncertaintyNs();
-            references.add(Reference.of("timing from the lateral wave",
-                    "a difference of two quantized instants: worst case dt, standard uncertainty dt/sqrt(6)"
-                            + " (triangular distribution, JCGM 100:2008 (GUM) 4.3.9)"));
+            references.add(Reference.of("timing from the lateral wave", Sources.GUM_TRIANGULAR));
         } else {
             timingErrorNs = clock.singleInstantWorstCaseNs();
             timingStandardUncertaintyNs = clock.singleInstantStandardUncertaintyNs();
-            references.add(Reference.of("timing from the trigger",
-                    "one instant read at the nearest sample, trigger synchronous with the sampling clock:"
-                            + " worst case dt/2, standard uncertainty dt/sqrt(12) (rectangular distribution,"
-                            + " JCGM 100:2008 (GUM) 4.3.7); sub-sample interpolation does better"));
+            references.add(Reference.of("timing from the trigger", Sources.GUM_RECTANGULAR));
         }
 
         double samplingIntervalUs = clock.samplingIntervalUs();
@@ -89,23 +84,18 @@ public final class TimeOfFlightCalculator {
 
         switch (technique) {
             case PULSE_ECHO -> {
-                references.add(Reference.of("sound path per sample, pulse-echo",
-                        "v dt / 2: the one-way path of one sample of round-trip time (definition)"));
+                references.add(Reference.of("sound path per sample, pulse-echo", Sources.DEFINITIONS));
                 if (in.refractedAngleDeg() != null) {
                     double angleDeg = Checks.inRangeHalfOpen("refracted_angle_deg", in.refractedAngleDeg(), 0.0, 90.0);
                     double angleRad = StrictMath.toRadians(angleDeg);
                     depthResolutionMm = soundPathResolutionMm * StrictMath.cos(angleRad);
                     surfaceDistanceResolutionMm = soundPathResolutionMm * StrictMath.sin(angleRad);
-                    references.add(Reference.of("angle beam",
-                            "depth x cos(theta) and surface distance x sin(theta) of a sound path x along"
-                                    + " the refracted angle theta (geometry, definition)"));
+                    references.add(Reference.of("angle beam", Sources.DEFINITIONS));
                 }
             }
-            case THROUGH_TRANSMISSION -> references.add(Reference.of("sound path per sample, through-transmission",
-                    "v dt: the path of one sample of one-way time (definition)"));
+            case THROUGH_TRANSMISSION -> references.add(Reference.of("sound path per sample, through-transmission", Sources.DEFINITIONS));
             case TOFD -> {
-                references.add(Reference.of("sound path per sample, TOFD",
-                        "v dt: the change of the path over both legs, transmitter to tip to receiver (definition)"));
+                references.add(Reference.of("sound path per sample, TOFD", Sources.DEFINITIONS));
                 double halfSeparationMm = Checks.positive("probe_centre_separation", in.probeCentreSeparationMm()) / 2.0;
                 Double depthMm = in.depthMm() == null ? null : Checks.positive("depth", in.depthMm());
                 Double thicknessMm = in.thicknessMm() == null ? null : Checks.positive("thickness", in.thicknessMm());
@@ -118,42 +108,26 @@ public final class TimeOfFlightCalculator {
                 pulseDurationUsedUs = pulseDurationUs(in, references);
 
                 lateralWaveTimeUs = TofdGeometry.lateralWaveTimeUs(halfSeparationMm, velocityMmPerUs);
-                references.add(Reference.of("TOFD geometry",
-                        "probes symmetric about the tip, S = probe_centre_separation / 2: lateral wave 2S/v,"
-                                + " tip t = 2 sqrt(S^2 + d^2)/v, d = sqrt((v t/2)^2 - S^2) (Charlesworth & Temple,"
-                                + " Engineering Applications of Ultrasonic Time-of-Flight Diffraction, 2nd ed.,"
-                                + " 2.3.4, read second-hand); times in the part, wedge delays excluded"));
-                references.add(Reference.of("flaw off the centre line",
-                        "a tip off the centre line between the probes (or off their beam plane) has a longer"
-                                + " path than one on it at the same depth, so the symmetric formula reads it deeper"
-                                + " than it is: off the centre line a flaw lies shallower than its reading"
-                                + " (derived from the same geometry)"));
+                references.add(Reference.of("TOFD geometry", Sources.TOFD_GEOMETRY));
+                references.add(Reference.of("flaw off the centre line", Sources.TOFD_GEOMETRY));
 
                 if (depthMm != null) {
                     timeOfFlightUs = TofdGeometry.timeOfFlightUs(halfSeparationMm, depthMm, velocityMmPerUs);
                     depthResolutionMm = TofdGeometry.depthStepMm(
                             halfSeparationMm, depthMm, samplingIntervalUs, velocityMmPerUs);
-                    references.add(Reference.of("TOFD depth step per sample",
-                            "the exact forward difference d(t + dt) - d(t) at the depth (derived); the linearised"
-                                    + " slope dt v sqrt(S^2 + d^2)/(2d) overstates it, most near the surface"));
+                    references.add(Reference.of("TOFD depth step per sample", Sources.TOFD_GEOMETRY));
                     double ratio = TofdGeometry.depthPerHalfSeparationRatio(halfSeparationMm, depthMm);
-                    references.add(Reference.of("probe centre separation error",
-                            String.format(Locale.ROOT,
-                                    "at a fixed time dd/dS = -S/d (derivation); at this depth -S/d = %.4g, so an error"
-                                            + " e in probe_centre_separation (2S) moves the depth by %.4g e",
-                                    ratio, ratio / 2.0)));
+                    references.add(Reference.of(String.format(Locale.ROOT,
+                            "probe centre separation error: dd/dS = -S/d = %.4g here, an error e in 2S moves the"
+                                    + " depth by %.4g e", ratio, ratio / 2.0), Sources.TOFD_GEOMETRY));
                 }
                 if (pulseDurationUsedUs != null) {
                     deadZoneDepthMm = TofdGeometry.deadZoneDepthMm(halfSeparationMm, pulseDurationUsedUs, velocityMmPerUs);
-                    references.add(Reference.of("TOFD near-surface dead zone",
-                            "sqrt((S + v tp/2)^2 - S^2): depths whose tip signal arrives within tp of the lateral"
-                                    + " wave (from memory; geometry of Charlesworth & Temple 2.3.4)"));
+                    references.add(Reference.of("TOFD near-surface dead zone", Sources.TOFD_GEOMETRY));
                     if (depthMm != null) {
                         pulseLimitedDepthResolutionMm = TofdGeometry.pulseLimitedDepthResolutionMm(
                                 halfSeparationMm, depthMm, pulseDurationUsedUs, velocityMmPerUs);
-                        references.add(Reference.of("TOFD pulse-limited depth resolution",
-                                "sqrt((v (t + tp)/2)^2 - S^2) - d: the depth range within one pulse duration"
-                                        + " after the tip signal (derived from the same geometry)"));
+                        references.add(Reference.of("TOFD pulse-limited depth resolution", Sources.TOFD_GEOMETRY));
                         if (depthMm < deadZoneDepthMm) {
                             warnings.add(Warning.of("DEPTH_IN_DEAD_ZONE",
                                     "depth (" + mm(depthMm) + ") lies inside the near-surface dead zone ("
@@ -189,10 +163,7 @@ public final class TimeOfFlightCalculator {
             double pulseDurationUs, double velocityMmPerUs, double deadZoneDepthMm,
             List<Warning> warnings, List<Reference> references) {
         double zoneMm = TofdGeometry.backwallDeadZoneMm(halfSeparationMm, thicknessMm, pulseDurationUs, velocityMmPerUs);
-        references.add(Reference.of("TOFD back-wall dead zone",
-                "T - sqrt((v (t_T - tp)/2)^2 - S^2) with t_T = 2 sqrt(S^2 + T^2)/v: depths whose tip signal"
-                        + " arrives within tp before the back-wall signal; T when t_T - tp falls at or before"
-                        + " the lateral wave (from memory; geometry of Charlesworth & Temple 2.3.4)"));
+        references.add(Reference.of("TOFD back-wall dead zone", Sources.TOFD_GEOMETRY));
         if (TofdGeometry.backwallPulseReachesLateralWave(halfSeparationMm, thicknessMm, pulseDurationUs, velocityMmPerUs)) {
             warnings.add(Warning.of("WHOLE_THICKNESS_DEAD",
                     "the back-wall signal less the pulse duration falls at or before the lateral wave:"
@@ -217,7 +188,7 @@ public final class TimeOfFlightCalculator {
     /** The TOFD pulse duration from its one source, or null when none is given. */
     private static Double pulseDurationUs(TimeOfFlightInput in, List<Reference> references) {
         if (in.pulseDurationUs() != null) {
-            references.add(Reference.of("TOFD pulse duration", "pulse_duration_us as given by the caller"));
+            references.add(Reference.of("TOFD pulse duration, as given", Sources.DEFINITIONS));
             return Checks.positive("pulse_duration_us", in.pulseDurationUs());
         }
         if (in.frequencyMhz() == null) {
@@ -226,11 +197,7 @@ public final class TimeOfFlightCalculator {
         double frequencyMhz = Checks.positive("frequency_mhz", in.frequencyMhz());
         double bandwidthFraction = Checks.positive("bandwidth_percent", in.bandwidthPercent()) / 100.0;
         GaussianPulse pulse = PULSE_MODEL_CONVENTION.pulseModel(frequencyMhz, bandwidthFraction);
-        references.add(Reference.of("TOFD pulse duration",
-                "model value: the -20 dB envelope duration 2 sqrt(ln 10 / a) of the Gaussian pulse model"
-                        + " exp(-a t^2) cos(2 pi fc t) with a = -(pi fc bw)^2 / (4 ln 10^(-6/20)), centre frequency"
-                        + " ARITHMETIC (scipy.signal.gausspulse parameterisation); real probes ring longer:"
-                        + " give pulse_duration_us measured on the A-scan when it matters"));
+        references.add(Reference.of("TOFD pulse duration, -20 dB envelope of the pulse model", Sources.GAUSSIAN_MODEL));
         return pulse.envelopeDurationUs(TOFD_PULSE_DURATION_LEVEL_DB);
     }
 

@@ -96,7 +96,7 @@ public final class TofdGeometry {
 
     /**
      * Near-surface dead zone: the depths whose tip signal arrives within tp of the lateral wave,
-     * sqrt((S + v tp / 2)^2 - S^2), mm (from memory; the geometry of Charlesworth &amp; Temple 2.3.4).
+     * sqrt((S + v tp / 2)^2 - S^2), mm (derived in src/docs/methods.md 5.2).
      */
     public static double deadZoneDepthMm(double halfSeparationMm, double pulseDurationUs, double velocityMmPerUs) {
         return pulseLimitedDepthResolutionMm(halfSeparationMm, 0.0, pulseDurationUs, velocityMmPerUs);
@@ -119,7 +119,7 @@ public final class TofdGeometry {
     /**
      * Back-wall dead zone: the depths above the back wall T whose tip signal arrives within tp
      * before the back-wall signal, T - sqrt((v (t_T - tp) / 2)^2 - S^2) with t_T = 2 sqrt(S^2 + T^2) / v,
-     * mm (from memory; the geometry of Charlesworth &amp; Temple 2.3.4). When t_T - tp falls at or
+     * mm (derived in src/docs/methods.md 5.2). When t_T - tp falls at or
      * before the lateral wave the whole thickness is dead: T.
      *
      * @param thicknessMm T, mm (&gt; 0)

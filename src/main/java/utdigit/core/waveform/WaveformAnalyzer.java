@@ -10,6 +10,7 @@ import utdigit.core.common.CalculationException;
 import utdigit.core.common.Decibels;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.core.pulse.GaussianPulse;
@@ -115,11 +116,7 @@ public final class WaveformAnalyzer {
                             + "so the spectrum is taken through a Tukey window (%s %% tapered) and its figures are "
                             + "approximate; record the whole echo", num(CUT_LEVEL_DB), num(100 * TUKEY_FRACTION))));
         }
-        references.add(Reference.of("record preparation",
-                "mean removed (a DC offset is no part of an echo); "
-                        + (cut ? "Tukey window of 20 % taper (scipy.signal.windows.tukey, alpha 0.2) before the "
-                        + "spectrum, as the echo is cut by the record's ends" : "no window: the echo lies wholly inside "
-                        + "the record (its envelope falls 20 dB before both ends)")));
+        references.add(Reference.of("record preparation", Sources.WAVEFORM_PREPARATION));
 
         // Spectrum.
         double[] spectral = y.clone();
@@ -143,19 +140,10 @@ public final class WaveformAnalyzer {
         int peakBin = argmax(magnitude, 0, bins - 1);
         double peakMagnitude = magnitude[peakBin];
         double peakFrequencyMhz = peakBin * resolutionMhz;
-        references.add(Reference.of("measured spectrum", String.format(Locale.ROOT,
-                "|DFT| of the prepared record zero-padded to %d points (bin spacing %s MHz; numpy.fft.rfft "
-                        + "convention, computed by Apache Commons Math 3.6.1 FastFourierTransformer); peak at the "
-                        + "largest bin; band edges by linear interpolation between the bins straddling the level",
-                length, num(resolutionMhz))));
+        references.add(Reference.of("measured spectrum", Sources.WAVEFORM_SPECTRUM));
 
         double near = energyAbove(power, total, NEAR_NYQUIST_FRACTION * fsRec / 2.0, resolutionMhz);
-        references.add(Reference.of("record adequacy", String.format(Locale.ROOT,
-                "fraction of the record's spectral energy above %s of its Nyquist frequency; warning above %s, "
-                        + "refused above %s: the record must itself be sampled well above the probe's band "
-                        + "(ISO 22232-2 and ASTM E1065 measure the probe's waveform so); thresholds: common practice, "
-                        + "no published source", num(NEAR_NYQUIST_FRACTION), num(RECORD_NYQUIST_WARNING_FRACTION),
-                num(RECORD_NYQUIST_REFUSAL_FRACTION))));
+        references.add(Reference.of("record adequacy", Sources.WAVEFORM_ADEQUACY));
         if (near > RECORD_NYQUIST_REFUSAL_FRACTION) {
             throw CalculationException.impossible(String.format(Locale.ROOT,
                     "the record holds %s of its spectral energy above %s MHz (0.8 of its own Nyquist frequency, "
@@ -189,10 +177,7 @@ public final class WaveformAnalyzer {
         }
         double centreMhz = convention.centreFromEdgesMhz(lowerMhz, upperMhz);
         double bandwidthPercent = (upperMhz - lowerMhz) / centreMhz * 100.0;
-        references.add(Reference.of("centre frequency and bandwidth", convention == CentreFrequencyConvention.ARITHMETIC
-                ? "fc = (fl + fu)/2 (ARITHMETIC, ASTM E1065); BW = (fu - fl)/fc between the -6 dB edges (ASTM E1065 3.2.2)"
-                : "fc = sqrt(fl fu) (GEOMETRIC, EN 12668-2 / ISO 22232-2); BW = (fu - fl)/fc between the -6 dB edges "
-                        + "(ASTM E1065 3.2.2)"));
+        references.add(Reference.of("centre frequency and bandwidth", Sources.CENTRE_FREQUENCY));
 
         // Envelope durations.
         double intervalRecUs = 1.0 / fsRec;
@@ -205,11 +190,7 @@ public final class WaveformAnalyzer {
                     : "pulse_duration_20db_us is null")));
         }
         Optional<Double> cycles6 = duration6.map(d -> d * centreMhz);
-        references.add(Reference.of("envelope and durations",
-                "envelope |analytic signal|, Hilbert transform by FFT as scipy.signal.hilbert, on the record "
-                        + "zero-padded to a power of two at or above twice its length; durations between the points "
-                        + "where the envelope falls 6 and 20 dB below its peak, by linear interpolation between "
-                        + "samples; cycles = -6 dB duration x centre frequency"));
+        references.add(Reference.of("envelope and durations", Sources.WAVEFORM_ENVELOPE));
 
         // The Gaussian model of the same centre and bandwidth.
         GaussianPulse pulse = bandwidthPercent < SamplingInput.MAX_BANDWIDTH_PERCENT_EXCLUSIVE
@@ -222,12 +203,7 @@ public final class WaveformAnalyzer {
             warnings.add(Warning.of(MODEL_NOT_AVAILABLE, "the measured bandwidth is 200 % or more: no Gaussian "
                     + "pulse model of it is formed, so the model_ figures are null"));
         } else {
-            references.add(Reference.of("Gaussian model beside the record",
-                    "the Gaussian pulse model exp(-a t^2) cos(2 pi fc t) (the parameterisation of "
-                            + "scipy.signal.gausspulse) whose -6 dB edges are the measured ones by the centre-frequency "
-                            + "convention; its sampling figures by the sampling assessment's calculator "
-                            + "(POST /api/sampling-assessments with frequency_mhz the measured centre and "
-                            + "bandwidth_percent the measured bandwidth)"));
+            references.add(Reference.of("Gaussian model beside the record", Sources.WAVEFORM_MODEL));
         }
 
         BandLimitedRecord record = new BandLimitedRecord(y, fsRec);
@@ -243,9 +219,7 @@ public final class WaveformAnalyzer {
             double nyquistMhz = amplitudeMhz / 2.0;
             double samplesPerPeriod = clock.effectiveSamplingFrequencyMhz() / centreMhz;
             double above = energyAbove(power, total, nyquistMhz, resolutionMhz);
-            references.add(Reference.of("energy above the target Nyquist frequency",
-                    "fraction of the record's spectral energy above half the rate that decides amplitude (the "
-                            + "record's own band only: nothing above its Nyquist frequency is recorded)"));
+            references.add(Reference.of("energy above the target Nyquist frequency", Sources.WAVEFORM_ENERGY));
             double peak = record.peak(reading);
             double m2 = record.secondDerivativeBound();
             Optional<Double> loss = Optional.empty();
@@ -273,26 +247,14 @@ public final class WaveformAnalyzer {
                             + "sampling phase no sample reads above zero"));
                 }
             }
-            references.add(Reference.of("pulse amplitude loss of the record", "worst case over the sampling phase "
-                    + "of the record's peak read as " + (reading == PeakReading.ABSOLUTE ? "max |s|" : "the positive peak")
-                    + " at the rate that decides amplitude, on the band-limited reconstruction of the record (DFT "
-                    + "zero-padding as scipy.signal.resample, 32 points per record sample, cubic interpolation "
-                    + "between them); phase scanned in steps of the fine grid, lowest minima refined by Brent's "
-                    + "method (Apache Commons Math BrentOptimizer) (derived)"));
+            references.add(Reference.of("pulse amplitude loss of the record", Sources.WAVEFORM_LOSS));
 
             Double required = null;
             if (in.amplitudeToleranceDb() != null) {
                 double rateMhz = record.requiredRateMhz(in.amplitudeToleranceDb(), reading, 2.0 * centreMhz,
                         RequiredPulseRate.SCAN_STEP_FRACTION, RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE);
                 required = clock.rawFrequencyForAmplitudeRateMhz(rateMhz);
-                references.add(Reference.of("required sampling frequency for the record", String.format(Locale.ROOT,
-                        "the rate above which every rate keeps the record's loss within amplitude_tolerance_db: "
-                                + "start where the curvature bound peak - max|s''| dt^2/8 meets the tolerance (every "
-                                + "faster rate passes), scan down in %s %% steps while the loss passes, bisect to %s "
-                                + "relative (a failing band narrower than one step can be missed); the raw "
-                                + "sampling_frequency to set for the same decimation (derived)",
-                        num(100.0 * RequiredPulseRate.SCAN_STEP_FRACTION),
-                        num(RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE))));
+                references.add(Reference.of("required sampling frequency for the record", Sources.WAVEFORM_REQUIRED_RATE));
             }
 
             Optional<Double> modelLoss = Optional.empty();

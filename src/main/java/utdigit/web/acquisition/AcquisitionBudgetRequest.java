@@ -11,7 +11,7 @@ import utdigit.core.materials.WaveMode;
 import utdigit.web.common.VelocityFields;
 
 /**
- * POST /api/acquisition-budgets. The ranges are the contract's (DESIGN.md "API contract"); the
+ * POST /api/acquisition-budgets. The ranges are the contract's (README "Conventions"); the
  * upper bounds the contract leaves open are ours and documented on their properties:
  * decimation_factor at most 65536 (like the other counts), planned_scan_speed_mm_per_s at most
  * 100000 mm/s (100 m/s, far above any scanner), file_size_limit_megabytes at most 10^9 MB (10^15

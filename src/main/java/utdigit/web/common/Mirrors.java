@@ -18,7 +18,7 @@ import utdigit.core.materials.WaveMode;
 public final class Mirrors {
     private Mirrors() {}
 
-    /** Lowest velocity accepted, m/s (DESIGN ranges). */
+    /** Lowest velocity accepted, m/s (the contract's ranges, README and OpenAPI). */
     public static final double MIN_VELOCITY_M_PER_S = 100.0;
     /** Highest velocity accepted, m/s. */
     public static final double MAX_VELOCITY_M_PER_S = 20_000.0;
@@ -109,12 +109,12 @@ public final class Mirrors {
         }
         Material material = MaterialCatalog.find(f.material()).orElse(null);
         if (material == null) {
-            errors.add("material", "unknown material '" + f.material() + "'; built-in materials: "
+            errors.add("material", "unknown material '" + f.material() + "'; materials: "
                     + String.join(", ", MaterialCatalog.ids()));
             return null;
         }
-        if (!material.liquid() && f.temperatureC() != null) {
-            errors.add("temperature_c", "applies only with material water; solids' table values are not "
+        if (!material.temperatureDependent() && f.temperatureC() != null) {
+            errors.add("temperature_c", "applies only with material water; other materials' table values are not "
                     + "temperature-corrected");
             return null;
         }

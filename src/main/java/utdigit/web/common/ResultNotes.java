@@ -16,17 +16,18 @@ public final class ResultNotes {
             @Schema(description = "Explanation in the caller's terms") String message) {}
 
     /** A reference of an answer. */
-    @Schema(name = "Reference", description = "Where a formula or value of the answer comes from")
+    @Schema(name = "Reference", description = "Where a formula or value of the answer comes from: its topic and "
+            + "the id of its entry in the reference catalogue (GET /api/references/{id})")
     public record ReferenceView(
             @Schema(description = "What the reference is for", example = "near field length") String topic,
-            @Schema(description = "Published source, or 'common practice, no published source', or "
-                    + "'(derived)' for a model of ours") String source) {}
+            @Schema(description = "Id of the source in the reference catalogue", example = "piston-near-field")
+            String id) {}
 
     public static List<WarningView> warnings(List<Warning> warnings) {
         return warnings.stream().map(w -> new WarningView(w.code(), w.message())).toList();
     }
 
     public static List<ReferenceView> references(List<Reference> references) {
-        return references.stream().map(r -> new ReferenceView(r.topic(), r.source())).toList();
+        return references.stream().map(r -> new ReferenceView(r.topic(), r.id())).toList();
     }
 }

@@ -18,22 +18,22 @@ import utdigit.web.common.NotFoundProblem;
 
 @RestController
 @RequestMapping(path = "/api/materials", produces = MediaType.APPLICATION_JSON_VALUE)
-@Tag(name = "Materials", description = "Built-in sound velocities with their sources")
+@Tag(name = "Materials", description = "Built-in and operator sound velocities with their sources")
 class MaterialController {
 
     @GetMapping
-    @Operation(summary = "List the built-in materials",
+    @Operation(summary = "List the materials (built-in, then the operator's)",
             description = "Nominal longitudinal and shear velocities with the source of each value. "
                     + "Velocities used for sizing are measured on the part.")
     MaterialList list() {
         return new MaterialList(MaterialCatalog.all().stream()
-                .map(m -> MaterialView.of(m, m.liquid() ? WaterVelocity.DEFAULT_TEMPERATURE_C : null,
+                .map(m -> MaterialView.of(m, m.temperatureDependent() ? WaterVelocity.DEFAULT_TEMPERATURE_C : null,
                         m.longitudinalMPerS()))
                 .toList());
     }
 
     @GetMapping("/{id}")
-    @Operation(summary = "Show one built-in material",
+    @Operation(summary = "Show one material",
             description = "For water, temperature_c (0 to 95 C) gives the velocity by the Marczak (1997) "
                     + "polynomial; 20 C when not given. Unknown id: 404 problem.")
     MaterialView one(
@@ -41,8 +41,8 @@ class MaterialController {
             @Parameter(description = "Water only: temperature in C, 0 to 95", example = "20")
             @RequestParam(name = "temperature_c", required = false) Double temperatureC) {
         Material m = MaterialCatalog.find(id).orElseThrow(() -> new NotFoundProblem(
-                "no built-in material '" + id + "'; built-in: " + String.join(", ", MaterialCatalog.ids())));
-        if (!m.liquid()) {
+                "no material '" + id + "'; materials: " + String.join(", ", MaterialCatalog.ids())));
+        if (!m.temperatureDependent()) {
             if (temperatureC != null) {
                 throw InputProblem.invalid("temperature_c", "applies only to water");
             }

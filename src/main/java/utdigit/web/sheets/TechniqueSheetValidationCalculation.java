@@ -131,12 +131,17 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         errors.throwIfAny();
 
         Double c = velocity == null ? null : velocity.velocityMPerS();
+        // No velocity uncertainty given and a material that states one: its standard uncertainty is used.
+        boolean materialUncertainty = velocity != null && m.velocityUncertaintyMPerS() == null
+                && m.velocityUncertaintyPercent() == null && velocity.standardUncertaintyMPerS() != null;
+        Double velocityUncertaintyMPerS = materialUncertainty
+                ? velocity.standardUncertaintyMPerS() : m.velocityUncertaintyMPerS();
         TechniqueSheetRequest.Digitization d = q.digitization();
         TechniqueSheetRequest.Tfm tfm = q.tfm();
         TechniqueSheetRequest.Evaluation e = q.evaluation();
         SheetInput sheet = new SheetInput(q.sheetId(), q.revision(), q.technique(),
                 new SheetInput.Probe(p.frequencyMhz(), p.bandwidthPercent(), diameterMm, p.elementCount()),
-                new SheetInput.Part(c, m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm,
+                new SheetInput.Part(c, velocityUncertaintyMPerS, m.velocityUncertaintyPercent(), thicknessMm,
                         m.refractedAngleDeg()),
                 d == null ? null : new SheetInput.Digitization(d.samplingFrequencyMhz(), d.decimationFactor(),
                         d.bitDepth(), d.digitizedSignal(), d.quantizer(), d.codeMapping(), d.decimationMode(), d.signal()),
@@ -155,7 +160,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 q.probe() == null ? null : new TechniqueSheetRequest.Probe(p.frequencyMhz(), p.bandwidthPercent(),
                         diameterMm, null, p.elementCount()),
                 q.material() == null ? null : new TechniqueSheetRequest.Material(null, null, null, c, null,
-                        m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm, null,
+                        velocityUncertaintyMPerS, m.velocityUncertaintyPercent(), thicknessMm, null,
                         m.refractedAngleDeg()),
                 d,
                 q.acquisition() == null ? null : new TechniqueSheetRequest.Acquisition(a.pulseRepetitionFrequencyHz(),
@@ -169,7 +174,8 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 new TechniqueSheetValidationResponse.ProfileRef(profile.id(), profile.version(), profile.sha256(),
                         profile.verificationStatus()),
                 r.verdict(), r.findings().stream().map(TechniqueSheetValidationCalculation::view).toList(),
-                r.values(), r.cautions(), inputs, VelocitySourceView.of(velocity),
+                r.values(), r.cautions(), inputs,
+                materialUncertainty ? VelocitySourceView.usingMaterialUncertainty(velocity) : VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 

@@ -24,7 +24,7 @@ import utdigit.web.common.VelocitySourceView;
 class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionRequest> {
     static final String NAME = "thickness-resolutions";
 
-    /** Largest velocity uncertainty accepted, percent of the velocity (DESIGN ranges). */
+    /** Largest velocity uncertainty accepted, percent of the velocity (the contract's ranges, README and OpenAPI). */
     static final double MAX_VELOCITY_UNCERTAINTY_PERCENT = 20.0;
 
     @Override
@@ -67,10 +67,15 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
             throw velocityImpossible;
         }
 
+        // No velocity uncertainty given and a material that states one: its standard uncertainty is used.
+        boolean materialUncertainty = q.velocityUncertaintyMPerS() == null && q.velocityUncertaintyPercent() == null
+                && velocity.standardUncertaintyMPerS() != null;
+        Double velocityUncertaintyMPerS = materialUncertainty
+                ? velocity.standardUncertaintyMPerS() : q.velocityUncertaintyMPerS();
         ThicknessResult r = ThicknessCalculator.compute(
                 ThicknessInput.builder(q.samplingFrequencyMhz(), velocity.velocityMPerS(), thicknessMm)
                         .decimationFactor(q.decimationFactor())
-                        .velocityUncertaintyMPerS(q.velocityUncertaintyMPerS())
+                        .velocityUncertaintyMPerS(velocityUncertaintyMPerS)
                         .velocityUncertaintyPercent(q.velocityUncertaintyPercent())
                         .measurement(q.measurement())
                         .echoSpacing(q.echoSpacing())
@@ -83,13 +88,14 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         // The velocity uncertainty keeps the caller's form (a percent follows the velocity, it is not a
         // mirror). None given stays absent: an explicit 0 would add a reference and so not reproduce the answer.
         ThicknessResolutionRequest inputs = new ThicknessResolutionRequest(q.samplingFrequencyMhz(),
-                r.decimationFactor(), velocity.velocityMPerS(), null, null, null, null, q.velocityUncertaintyMPerS(),
+                r.decimationFactor(), velocity.velocityMPerS(), null, null, null, null, velocityUncertaintyMPerS,
                 q.velocityUncertaintyPercent(), thicknessMm, null, r.measurement(), r.echoSpacing(),
                 requiredResolutionMm, null, r.coverageFactor(), q.frequencyMhz(), q.bandwidthPercent());
         return new ThicknessResolutionResponse(r.thicknessResolutionMm(), r.thicknessResolutionIn(),
                 r.roundTripTimeUs(), r.samplesAcrossThickness(), r.relativeResolutionPercent(),
                 r.timingStandardUncertaintyNs(), r.timingWorstCaseErrorNs(), r.standardUncertaintyMm(),
-                r.expandedUncertaintyMm(), r.requiredSamplingFrequencyMhz(), inputs, VelocitySourceView.of(velocity),
+                r.expandedUncertaintyMm(), r.requiredSamplingFrequencyMhz(), inputs,
+                materialUncertainty ? VelocitySourceView.usingMaterialUncertainty(velocity) : VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 

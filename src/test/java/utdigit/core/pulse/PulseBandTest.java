@@ -162,7 +162,7 @@ class PulseBandTest {
     @Test
     @DisplayName("above 100 % the real pulse's lower -6 dB edge (FFT) falls below the model's, and the answer warns")
     void broadBandWarnsBecauseRealLowerEdgeDeparts() {
-        // DOMAIN.md (the project's numerical note): at bw 1.2 the real -6 dB edge is 1.89 MHz for 2.0 modelled.
+        // src/docs/methods.md 11: at bw 1.2 the real -6 dB edge is 1.89 MHz for 2.0 modelled.
         PulseResult r = arithmetic(5.0, 120);
         NumericalPulse.Band real = NumericalPulse.spectrum(t -> scipyPulse(5.0, 1.2, t)).band(-6);
         assertThat(r.lowerFrequencyMhz()).isCloseTo(2.0, within(1e-12));

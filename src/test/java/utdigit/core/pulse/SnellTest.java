@@ -12,9 +12,9 @@ class SnellTest {
 
     static final double ALLOWED_ANGLE_ERROR_DEG = 1e-9;
 
-    /** A wedge of 2730 m/s (an example value of ours; wedge materials vary, DOMAIN.md). */
+    /** A wedge of 2730 m/s (an example value of ours; wedge materials vary, src/docs/methods.md). */
     static final double WEDGE_M_PER_S = 2730.0;
-    /** ISO 22232-2 steel reference values (read in its scope, DOMAIN.md). */
+    /** ISO 22232-2 steel reference values (read in its scope). */
     static final double STEEL_SHEAR_M_PER_S = 3255.0;
     static final double STEEL_LONGITUDINAL_M_PER_S = 5920.0;
 

@@ -52,7 +52,7 @@ class IdealSqnrTest {
         // there the sine's values crowd toward the cell's outer edge, so the error crowds toward
         // q/2 and its mean square exceeds q^2/12. Clipping of the top code adds nothing measurable
         // (the sine reaches +/- A only at isolated instants). The excess falls as sqrt(q): about
-        // 0.14 dB at 8 bits, 0.035 dB at 12, 0.009 dB at 16 (DOMAIN.md: 0.01-0.14 dB).
+        // 0.14 dB at 8 bits, 0.035 dB at 12, 0.009 dB at 16 (src/docs/methods.md: 0.01-0.14 dB).
         assertThat(numerical.sqnrDb()).isLessThan(formula);
         assertThat(numerical.sqnrDb()).isCloseTo(formula, within(0.2));
         // the explanation holds: the interior cells are uniform, the outermost ones are not

@@ -15,7 +15,7 @@ import utdigit.core.common.CalculationException;
 
 /**
  * Closed-form checks of the quantization assessment. Expected values are written as their
- * derivation from the formulas of the trade (DOMAIN.md "Quantization"), never copied from the
+ * derivation from the formulas of the trade (src/docs/methods.md 4), never copied from the
  * implementation.
  */
 class QuantizationCalculatorTest {
@@ -87,7 +87,7 @@ class QuantizationCalculatorTest {
 
             assertThat(rfMax / rfFsr).isCloseTo(128.0 / 127.0, within(ALLOWED_RELATIVE_ERROR));
             assertThat(recMax / recFsr).isCloseTo(256.0 / 255.0, within(ALLOWED_RELATIVE_ERROR));
-            // DOMAIN.md: "the two differ by about 0.8 % at 8 bits" (true of RF: 0.787 %)
+            // src/docs/methods.md: "the two differ by about 0.8 % at 8 bits" (true of RF: 0.787 %)
             assertThat((rfMax / rfFsr - 1) * 100).isBetween(0.75, 0.85);
         }
 
@@ -210,7 +210,7 @@ class QuantizationCalculatorTest {
     class MinimumHeight {
 
         @Test
-        @DisplayName("ROUNDING: h_min = (LSB/2)/(1 - 10^(-X/20)) and 20 log10(h_min/100) (DOMAIN.md closed form)")
+        @DisplayName("ROUNDING: h_min = (LSB/2)/(1 - 10^(-X/20)) and 20 log10(h_min/100) (src/docs/methods.md 4.3)")
         void roundingMinimumHeightMatchesClosedForm() {
             QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withAmplitudeToleranceDb(1.0));
             double expected = (LSB_8_BIT_RF_PERCENT_FSH / 2) / (1 - Math.pow(10, -1.0 / 20));
@@ -220,7 +220,7 @@ class QuantizationCalculatorTest {
         }
 
         @Test
-        @DisplayName("TRUNCATION: h_min = LSB/(1 - 10^(-X/20)), twice the ROUNDING value (DOMAIN.md closed form)")
+        @DisplayName("TRUNCATION: h_min = LSB/(1 - 10^(-X/20)), twice the ROUNDING value (src/docs/methods.md 4.3)")
         void truncationMinimumHeightIsTwiceRounding() {
             QuantizationInput in = QuantizationInput.ofBitDepth(12).withAmplitudeToleranceDb(0.5);
             double rounding = compute(in).minimumHeightPercentFsh();
@@ -421,7 +421,7 @@ class QuantizationCalculatorTest {
                     "ideal SQNR", "amplitude error", "minimum height", "evaluation height", "averaging",
                     "digital gain", "rectifying RF after digitizing");
             assertThat(r.references()).filteredOn(ref -> ref.topic().equals("rectifying RF after digitizing"))
-                    .singleElement().satisfies(ref -> assertThat(ref.source()).contains("2^(N-1) levels"));
+                    .singleElement().satisfies(ref -> assertThat(ref.id()).isEqualTo("quantizer-code-mapping"));
         }
     }
 

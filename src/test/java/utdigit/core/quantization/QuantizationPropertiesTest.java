@@ -13,7 +13,7 @@ import org.quicktheories.core.Gen;
 
 /**
  * Properties that hold for every converter, checked over seeded random inputs (QuickTheories).
- * Each follows from the definitions in DOMAIN.md "Quantization" (derived).
+ * Each follows from the definitions in src/docs/methods.md 4 (derived).
  */
 class QuantizationPropertiesTest {
 

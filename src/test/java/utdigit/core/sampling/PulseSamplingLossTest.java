@@ -21,20 +21,20 @@ class PulseSamplingLossTest {
     static final double ALLOWED_ROUNDING_DB = 1e-12;
     /** The accuracy target of the pulse search against a fine brute-force scan. */
     static final double ALLOWED_SEARCH_ERROR_DB = 1e-4;
-    /** Values DOMAIN.md quotes to 4 decimals. */
-    static final double DOMAIN_4_DECIMALS_DB = 5e-5;
-    /** Values DOMAIN.md quotes to 2 decimals ("about"). */
-    static final double DOMAIN_2_DECIMALS_DB = 0.005;
+    /** Values src/docs/methods.md quotes to 4 decimals. */
+    static final double QUOTED_4_DECIMALS_DB = 5e-5;
+    /** Values src/docs/methods.md quotes to 2 decimals ("about"). */
+    static final double QUOTED_2_DECIMALS_DB = 0.005;
 
     private static double intervalUs(double fcMhz, double samplesPerPeriod) {
         return 1.0 / (samplesPerPeriod * fcMhz);
     }
 
     @Test
-    @DisplayName("sine bound: n = 4 gives 3.0103 dB and n = 5 gives 1.8408 dB (DOMAIN; classic DSP result)")
+    @DisplayName("sine bound: n = 4 gives 3.0103 dB and n = 5 gives 1.8408 dB (methods.md; classic DSP result)")
     void sineBoundMatchesQuotedValues() {
-        assertThat(PulseSamplingLoss.sineBoundLossDb(4.0)).isCloseTo(3.0103, within(DOMAIN_4_DECIMALS_DB));
-        assertThat(PulseSamplingLoss.sineBoundLossDb(5.0)).isCloseTo(1.8408, within(DOMAIN_4_DECIMALS_DB));
+        assertThat(PulseSamplingLoss.sineBoundLossDb(4.0)).isCloseTo(3.0103, within(QUOTED_4_DECIMALS_DB));
+        assertThat(PulseSamplingLoss.sineBoundLossDb(5.0)).isCloseTo(1.8408, within(QUOTED_4_DECIMALS_DB));
     }
 
     @ParameterizedTest
@@ -61,7 +61,7 @@ class PulseSamplingLossTest {
     }
 
     @Test
-    @DisplayName("required samples per period for 3.0103 dB is 4 and for 1.8408 dB is 5 (DOMAIN)")
+    @DisplayName("required samples per period for 3.0103 dB is 4 and for 1.8408 dB is 5 (methods.md)")
     void requiredSamplesPerPeriodForQuotedLosses() {
         assertThat(PulseSamplingLoss.requiredSamplesPerPeriod(10.0 * Math.log10(2.0))).isCloseTo(4.0, within(1e-9));
         assertThat(PulseSamplingLoss.requiredSamplesPerPeriod(1.8408)).isCloseTo(5.0, within(1e-3));
@@ -69,7 +69,7 @@ class PulseSamplingLossTest {
 
     @ParameterizedTest
     @CsvSource({"5, 0.6, 5", "5, 0.3, 4.75", "2.25, 0.1, 3", "10, 1.2, 2.2", "1, 0.05, 40"})
-    @DisplayName("envelope loss equals the closed form -20 log10(exp(-a (dt/2)^2)) (Gaussian envelope, DOMAIN)")
+    @DisplayName("envelope loss equals the closed form -20 log10(exp(-a (dt/2)^2)) (Gaussian envelope, methods.md)")
     void envelopeLossMatchesClosedForm(double fcMhz, double bw, double n) {
         double a = BruteForcePulseScan.envelopeRatePerUs2(fcMhz, bw);
         double halfUs = intervalUs(fcMhz, n) / 2.0;
@@ -79,7 +79,7 @@ class PulseSamplingLossTest {
     }
 
     @Test
-    @DisplayName("broadband closed form: 5 MHz, 60 %, n = 5 gives 1.841 + 0.112 = 1.953 dB (DOMAIN)")
+    @DisplayName("broadband closed form: 5 MHz, 60 %, n = 5 gives 1.841 + 0.112 = 1.953 dB (methods.md)")
     void broadbandClosedFormMatchesDomainExample() {
         GaussianPulse pulse = GaussianPulse.of(5.0, 0.6);
         double dt = intervalUs(5.0, 5.0);
@@ -91,7 +91,7 @@ class PulseSamplingLossTest {
 
     @ParameterizedTest
     @CsvSource({"5, 0.6, 5", "5, 0.6, 4", "5, 0.6, 12", "10, 1.0, 4", "5, 0.8, 6", "2, 1.2, 3.5"})
-    @DisplayName("broadband pulses: the search equals the closed form cos(pi/n) exp(-a dt^2/4) (DOMAIN; "
+    @DisplayName("broadband pulses: the search equals the closed form cos(pi/n) exp(-a dt^2/4) (methods.md; "
             + "cases checked equal by a scipy brute-force scan)")
     void broadbandSearchEqualsClosedForm(double fcMhz, double bw, double n) {
         double a = BruteForcePulseScan.envelopeRatePerUs2(fcMhz, bw);
@@ -102,13 +102,13 @@ class PulseSamplingLossTest {
     }
 
     @Test
-    @DisplayName("narrow band (30 %, ABSOLUTE) is not monotonic: n = 4.75 gives 0.89 dB, n = 6 gives 1.27 dB (DOMAIN)")
+    @DisplayName("narrow band (30 %, ABSOLUTE) is not monotonic: n = 4.75 gives 0.89 dB, n = 6 gives 1.27 dB (methods.md)")
     void narrowBandLossIsNotMonotonic() {
         GaussianPulse pulse = GaussianPulse.of(5.0, 0.3);
         double at475 = PulseSamplingLoss.rfLossDb(pulse, intervalUs(5.0, 4.75), PeakReading.ABSOLUTE);
         double at6 = PulseSamplingLoss.rfLossDb(pulse, intervalUs(5.0, 6.0), PeakReading.ABSOLUTE);
-        assertThat(at475).isCloseTo(0.89, within(DOMAIN_2_DECIMALS_DB));
-        assertThat(at6).isCloseTo(1.27, within(DOMAIN_2_DECIMALS_DB));
+        assertThat(at475).isCloseTo(0.89, within(QUOTED_2_DECIMALS_DB));
+        assertThat(at6).isCloseTo(1.27, within(QUOTED_2_DECIMALS_DB));
         assertThat(at475).as("fewer samples per period, yet a smaller loss").isLessThan(at6);
         // and well below the closed form at 4.75 (other samples read higher than the straddling pair)
         assertThat(at475).isLessThan(PulseSamplingLoss.closedFormBoundLossDb(pulse, intervalUs(5.0, 4.75)) - 1.0);
@@ -139,7 +139,7 @@ class PulseSamplingLossTest {
 
     @Test
     @DisplayName("random cases (seeded): loss within the closed form, POSITIVE_PEAK never below ABSOLUTE, "
-            + "ENVELOPE below the closed form (DOMAIN bound)")
+            + "ENVELOPE below the closed form (methods.md bound)")
     void randomCasesRespectTheBounds() {
         SplittableRandom random = new SplittableRandom(20240601L);
         for (int i = 0; i < 400; i++) {

@@ -21,7 +21,7 @@ class RequiredPulseRateTest {
 
     @ParameterizedTest
     @ValueSource(doubles = {0.1, 1.0, 2.0, 6.0, 20.0, 40.0})
-    @DisplayName("the start rate is where the closed form cos(pi/n) exp(-a dt^2/4) meets the tolerance (DOMAIN)")
+    @DisplayName("the start rate is where the closed form cos(pi/n) exp(-a dt^2/4) meets the tolerance (methods.md)")
     void startRateMeetsTheClosedForm(double toleranceDb) {
         GaussianPulse pulse = GaussianPulse.of(5.0, 0.3);
         double a = BruteForcePulseScan.envelopeRatePerUs2(5.0, 0.3);
@@ -66,7 +66,7 @@ class RequiredPulseRateTest {
     @CsvSource({"5, 0.3, 1.0, ABSOLUTE", "5, 0.3, 0.5, POSITIVE_PEAK", "3.5, 0.2, 2.0, ABSOLUTE",
         "5, 0.45, 1.5, ABSOLUTE"})
     @DisplayName("narrow band: the answer is the rate above which every rate passes, against an independent scan "
-            + "in 1e-5 steps from the closed-form start (DOMAIN method)")
+            + "in 1e-5 steps from the closed-form start (src/docs/methods.md 3.4)")
     void narrowBandAnswerMatchesFineScan(double fcMhz, double bw, double toleranceDb, PeakReading reading) {
         GaussianPulse pulse = GaussianPulse.of(fcMhz, bw);
         double answerMhz = RequiredPulseRate.forRf(pulse, reading, toleranceDb).amplitudeSamplingFrequencyMhz();
@@ -133,7 +133,7 @@ class RequiredPulseRateTest {
     }
 
     @Test
-    @DisplayName("30 %, 1 dB: slower rates pass (n = 4.75 reads 0.89 dB, n = 6 reads 1.27 dB; DOMAIN), and some "
+    @DisplayName("30 %, 1 dB: slower rates pass (n = 4.75 reads 0.89 dB, n = 6 reads 1.27 dB; methods.md), and some "
             + "rate between them and the answer fails")
     void narrowBandWarnsOfSlowerPassingRates() {
         GaussianPulse pulse = GaussianPulse.of(5.0, 0.3);

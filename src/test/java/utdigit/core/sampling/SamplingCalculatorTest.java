@@ -53,7 +53,7 @@ class SamplingCalculatorTest {
         }
 
         @Test
-        @DisplayName("25 MHz for 5 MHz: n = 5 and the sine bound 1.8408 dB (DOMAIN)")
+        @DisplayName("25 MHz for 5 MHz: n = 5 and the sine bound 1.8408 dB (methods.md)")
         void sineBoundAtFive() {
             assertThat(compute(SamplingInput.of(25.0, 5.0)).sineAmplitudeLossDb())
                     .hasValueSatisfying(loss -> assertThat(loss).isCloseTo(1.8408, within(5e-5)));
@@ -78,7 +78,7 @@ class SamplingCalculatorTest {
         }
 
         @Test
-        @DisplayName("ENVELOPE signal: the sine bound does not apply (empty, warning; DOMAIN)")
+        @DisplayName("ENVELOPE signal: the sine bound does not apply (empty, warning; methods.md)")
         void envelopeSignalHasNoSineBound() {
             SamplingResult r = compute(SamplingInput.of(100.0, 5.0).withSignal(SampledSignal.ENVELOPE));
             assertThat(r.sineAmplitudeLossDb()).isEmpty();
@@ -108,7 +108,7 @@ class SamplingCalculatorTest {
     @Nested
     class Decimation {
         @Test
-        @DisplayName("DROP by 4 at 100 MHz: every figure follows 25 MHz (DOMAIN)")
+        @DisplayName("DROP by 4 at 100 MHz: every figure follows 25 MHz (methods.md)")
         void dropFollowsEffectiveRate() {
             SamplingResult dropped = compute(SamplingInput.of(100.0, 5.0).withBandwidthPercent(30.0)
                     .withDecimation(4, DecimationMode.DROP));
@@ -125,7 +125,7 @@ class SamplingCalculatorTest {
 
         @Test
         @DisplayName("PEAK_PRESERVING by 4 at 100 MHz: timing and samples per period at 25 MHz, amplitude and "
-                + "Nyquist at 100 MHz (DOMAIN)")
+                + "Nyquist at 100 MHz (methods.md)")
         void peakPreservingAmplitudeFollowsRawRate() {
             SamplingResult kept = compute(SamplingInput.of(100.0, 5.0).withBandwidthPercent(30.0)
                     .withDecimation(4, DecimationMode.PEAK_PRESERVING));
@@ -177,7 +177,7 @@ class SamplingCalculatorTest {
     @Nested
     class WithBandwidth {
         @Test
-        @DisplayName("5 MHz, 60 %, 25 MHz: pulse loss 1.953 dB, the broadband closed form (DOMAIN)")
+        @DisplayName("5 MHz, 60 %, 25 MHz: pulse loss 1.953 dB, the broadband closed form (methods.md)")
         void broadbandExample() {
             SamplingResult r = compute(SamplingInput.of(25.0, 5.0).withBandwidthPercent(60.0));
             assertThat(r.pulseAmplitudeLossDb()).hasValueSatisfying(loss -> assertThat(loss).isCloseTo(1.953, within(5e-4)));
@@ -245,7 +245,7 @@ class SamplingCalculatorTest {
         }
 
         @Test
-        @DisplayName("spectral level at Nyquist above -40 dB warns (DOMAIN threshold)")
+        @DisplayName("spectral level at Nyquist above -40 dB warns (methods.md threshold)")
         void nyquistLevelWarning() {
             // 5 MHz, 60 %: -40 dB at fc + 1.5 sqrt(40/6) = 8.873 MHz, so 17.7 MHz is above -40 dB
             SamplingResult near = compute(SamplingInput.of(17.7, 5.0).withBandwidthPercent(60.0));
@@ -256,7 +256,7 @@ class SamplingCalculatorTest {
         }
 
         @Test
-        @DisplayName("bandwidth above 100 % warns (the one-sided model's lower edge moves; DOMAIN)")
+        @DisplayName("bandwidth above 100 % warns (the one-sided model's lower edge moves; methods.md)")
         void wideBandWarning() {
             assertThat(compute(SamplingInput.of(100.0, 5.0).withBandwidthPercent(120.0))
                     .hasWarning(SamplingCalculator.BANDWIDTH_ABOVE_100_PERCENT)).isTrue();
@@ -284,7 +284,7 @@ class SamplingCalculatorTest {
         }
 
         @Test
-        @DisplayName("narrow band 30 % at 23.75 MHz (n = 4.75) reads 0.89 dB, at 30 MHz (n = 6) 1.27 dB (DOMAIN)")
+        @DisplayName("narrow band 30 % at 23.75 MHz (n = 4.75) reads 0.89 dB, at 30 MHz (n = 6) 1.27 dB (methods.md)")
         void narrowBandNonMonotonic() {
             double at475 = compute(SamplingInput.of(23.75, 5.0).withBandwidthPercent(30.0)).pulseAmplitudeLossDb().orElseThrow();
             double at6 = compute(SamplingInput.of(30.0, 5.0).withBandwidthPercent(30.0)).pulseAmplitudeLossDb().orElseThrow();
@@ -350,7 +350,7 @@ class SamplingCalculatorTest {
         private final SamplingInput steel5 = SamplingInput.of(100.0, 5.0).withVelocityMPerS(5920.0);
 
         @Test
-        @DisplayName("RF image with bandwidth: -20 log10(cos(2 pi dz/lambda)) + 6 (dz/w)^2, w = v tau(-6 dB)/2 (DOMAIN, derived)")
+        @DisplayName("RF image with bandwidth: -20 log10(cos(2 pi dz/lambda)) + 6 (dz/w)^2, w = v tau(-6 dB)/2 (methods.md, derived)")
         void rfImageWithBandwidth() {
             SamplingResult r = compute(steel5.withBandwidthPercent(60.0).withTfmGridSpacingMm(0.1));
             double lambda = 5.920 / 5.0;
@@ -360,8 +360,7 @@ class SamplingCalculatorTest {
             assertThat(r.tfmGridAmplitudeLossDb()).hasValueSatisfying(loss -> assertThat(loss).isCloseTo(expected, within(1e-12)));
             assertThat(r.tfmImage()).isEqualTo(TfmImage.RF);
             assertThat(r.hasWarning(SamplingCalculator.TFM_ENVELOPE_TERM_OMITTED)).isFalse();
-            assertThat(r.references()).anySatisfy(ref -> assertThat(ref.source()).contains("derived model")
-                    .contains("amplitude-fidelity check on a reference reflector governs"));
+            assertThat(r.references()).anySatisfy(ref -> assertThat(ref.id()).isEqualTo("tfm-grid-model"));
         }
 
         @Test
@@ -407,7 +406,7 @@ class SamplingCalculatorTest {
         }
 
         @Test
-        @DisplayName("lateral: w_lat = 0.884 lambda z/A (DOMAIN, about), loss 6 (dx/w_lat)^2")
+        @DisplayName("lateral: w_lat = 0.884 lambda z/A (methods.md, about), loss 6 (dx/w_lat)^2")
         void lateralLoss() {
             SamplingResult r = compute(steel5.withTfmLateral(0.3, 32.0, 50.0));
             double wLat = 0.884 * (5.920 / 5.0) * 50.0 / 32.0;
@@ -507,7 +506,7 @@ class SamplingCalculatorTest {
         }
 
         @Test
-        @DisplayName("peak_reading with signal ENVELOPE: not applicable (DESIGN edge case)")
+        @DisplayName("peak_reading with signal ENVELOPE: not applicable (a contract edge case, README Conventions)")
         void peakReadingWithEnvelope() {
             assertNotApplicable(SamplingInput.of(100.0, 5.0).withSignal(SampledSignal.ENVELOPE)
                     .withPeakReading(PeakReading.ABSOLUTE), "peak_reading");

@@ -13,13 +13,13 @@ import org.junit.jupiter.params.provider.ValueSource;
 import utdigit.core.common.CalculationException;
 import utdigit.core.pulse.GaussianPulse;
 
-/** The TFM grid formulas: all derived models (DOMAIN "Spatial sampling of a TFM image"). */
+/** The TFM grid formulas: all derived models (src/docs/methods.md 3.7). */
 class TfmGridSamplingTest {
 
     static final double ALLOWED_ROUNDING = 1e-12;
 
     @Test
-    @DisplayName("lateral width factor: sinc(k/2)^2 = 10^(-6/20) with sinc(x) = sin(pi x)/(pi x), about 0.884 (DOMAIN)")
+    @DisplayName("lateral width factor: sinc(k/2)^2 = 10^(-6/20) with sinc(x) = sin(pi x)/(pi x), about 0.884 (methods.md)")
     void lateralWidthFactorSolvesTheSincLevel() {
         double k = TfmGridSampling.LATERAL_WIDTH_FACTOR;
         double x = k / 2.0;

@@ -268,7 +268,7 @@ class ThicknessCalculatorTest {
         assertThat(warningMessage(r, "SAMPLING_TERM_DOMINATES")).contains("rectangular").contains("100.0 %");
         assertThat(r.expandedUncertaintyMm()).isGreaterThan(2.96 * 0.005); // beyond the worst case v/2 x dt/2
         assertThat(r.references()).anyMatch(ref -> ref.topic().equals("expanded uncertainty")
-                && ref.source().contains("coverage probability not stated"));
+                && ref.id().equals("jcgm-100-2008-6.2"));
     }
 
     @Test

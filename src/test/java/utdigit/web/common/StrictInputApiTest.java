@@ -13,7 +13,7 @@ import org.junit.jupiter.api.Test;
 import utdigit.web.support.ApiTest;
 
 /**
- * The input rules every endpoint shares (DESIGN "API contract"), exercised on one endpoint since
+ * The input rules every endpoint shares (README "Conventions"), exercised on one endpoint since
  * they live in the one mapper and the one advice.
  */
 class StrictInputApiTest extends ApiTest {

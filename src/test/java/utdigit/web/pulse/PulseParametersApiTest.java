@@ -27,7 +27,7 @@ import utdigit.web.support.ApiTest;
 
 /**
  * POST /api/pulse-parameters over HTTP. Expected values are written as their derivations, each
- * with its source (DOMAIN.md "Pulse and beam" and "Conventions").
+ * with its source (src/docs/methods.md, sections 1 and 2).
  */
 class PulseParametersApiTest extends ApiTest {
     private static final String PATH = "/api/pulse-parameters";
@@ -49,7 +49,7 @@ class PulseParametersApiTest extends ApiTest {
         return velocityMPerS / 1000.0 / frequencyMhz;
     }
 
-    /** An amplitude ratio of a dB level: -X dB is 10^(-X/20) (DOMAIN "Conventions"). */
+    /** An amplitude ratio of a dB level: -X dB is 10^(-X/20) (src/docs/methods.md 1). */
     private static double ratio(double levelDb) {
         return Math.pow(10.0, levelDb / 20.0);
     }
@@ -218,7 +218,7 @@ class PulseParametersApiTest extends ApiTest {
 
     @Test
     void solvedBeamSpreadConstantsMatchTheTradesRoundedValues() {
-        // A check of this test's own solver: DOMAIN "Pulse and beam" quotes two-way -6 dB k = 0.5137,
+        // A check of this test's own solver: src/docs/methods.md 2 quotes two-way -6 dB k = 0.5137,
         // two-way -20 dB k = 0.8694, first null k = 1.2197 (4 decimals).
         assertThat(twoWayConstant(6.0)).isCloseTo(0.5137, offset(5e-5));
         assertThat(twoWayConstant(20.0)).isCloseTo(0.8694, offset(5e-5));
@@ -302,7 +302,7 @@ class PulseParametersApiTest extends ApiTest {
         // GEOMETRIC fc = sqrt(fl fu) (EN 12668-2 / ISO 22232-2, from memory); BW = (fu - fl)/fc in both
         assertThat(Math.sqrt(fl * fu)).isCloseTo(f, withinPercentage(100 * CLOSED_FORM_TOLERANCE));
         assertThat((fu - fl) / f).isCloseTo(bw, withinPercentage(100 * CLOSED_FORM_TOLERANCE));
-        // the pulse model is centred on (fl + fu)/2 with bw' = (fu - fl)/((fl + fu)/2) (DOMAIN "Conventions"),
+        // the pulse model is centred on (fl + fu)/2 with bw' = (fu - fl)/((fl + fu)/2) (src/docs/methods.md 1),
         // parameterised as scipy.signal.gausspulse
         double carrier = (fl + fu) / 2.0;
         double a = gaussA(carrier, (fu - fl) / carrier);
@@ -312,13 +312,13 @@ class PulseParametersApiTest extends ApiTest {
                 .isCloseTo(gaussDurationUs(a, 6.0), withinPercentage(100 * CLOSED_FORM_TOLERANCE));
         assertThat(answer.getDouble("cycles_6db"))
                 .isCloseTo(gaussDurationUs(a, 6.0) * carrier, withinPercentage(100 * CLOSED_FORM_TOLERANCE));
-        // period and wavelength stay at the nominal frequency (DOMAIN "Conventions")
+        // period and wavelength stay at the nominal frequency (src/docs/methods.md 1)
         assertThat(answer.getDouble("period_us")).isCloseTo(1.0 / f, withinPercentage(100 * CLOSED_FORM_TOLERANCE));
     }
 
     @Test
     void elementSmallerThanTheWavelengthHasNoBeamSpreadAndNoExactNearField() {
-        // lambda = 1.184 mm > D = 0.5 mm: k lambda / D > 1 for every constant, D^2 - lambda^2 < 0 (DOMAIN)
+        // lambda = 1.184 mm > D = 0.5 mm: k lambda / D > 1 for every constant, D^2 - lambda^2 < 0 (methods.md)
         post(PATH, """
                 {"frequency_mhz": 5, "velocity_m_per_s": 5920, "element_diameter_mm": 0.5, "distance_mm": 20}""")
                 .statusCode(200)
@@ -338,7 +338,7 @@ class PulseParametersApiTest extends ApiTest {
     @Test
     void veryWideBandHasNoFortyDecibelLowerEdgeAndSaysWhy() {
         // bw 90 %: offset (bw fc/2) sqrt(40/6) = 2.25 x 2.58 = 5.81 MHz > 5 MHz: the -40 dB lower edge
-        // would lie below 0 Hz (DOMAIN); the -20 dB one, 2.25 x 1.83 = 4.11 MHz, still exists.
+        // would lie below 0 Hz (methods.md); the -20 dB one, 2.25 x 1.83 = 4.11 MHz, still exists.
         double a = gaussA(5.0, 0.90);
         assertThat(5.0 - gaussEdgeOffsetMhz(a, 40.0)).isNegative();
         post(PATH, "{\"frequency_mhz\": 5, \"velocity_m_per_s\": 5920, \"bandwidth_percent\": 90}")

@@ -280,7 +280,7 @@ class ProfileCatalogTest {
         }
 
         @Test
-        @DisplayName("example-paut: DOMAIN 'Code requirements seen', ASME V Art. 4, 2013 ed.")
+        @DisplayName("example-paut: ASME V Art. 4, 2013 ed., read in code excerpts")
         void examplePautHoldsTheDigitizationAndTheThicknessBands() {
             RequirementProfile p = catalog.find("example-paut").orElseThrow();
             assertThat(p.documents()).singleElement().satisfies(d -> {
@@ -298,7 +298,7 @@ class ProfileCatalogTest {
         }
 
         @Test
-        @DisplayName("example-tofd: >= 4 x nominal frequency; >= 8 x with signal processing (DOMAIN)")
+        @DisplayName("example-tofd: >= 4 x nominal frequency; >= 8 x with signal processing (read on a secondary page, UNVERIFIED)")
         void exampleTofdProfilesHoldFourAndEightSamplesPerPeriod() {
             assertThat(catalog.find("example-tofd").orElseThrow().rules()).singleElement().satisfies(r -> {
                 assertThat(r.metric()).isEqualTo("samples_per_period");
@@ -316,7 +316,7 @@ class ProfileCatalogTest {
         }
 
         @Test
-        @DisplayName("example-tfm: amplitude fidelity <= 2 dB (DOMAIN, from memory)")
+        @DisplayName("example-tfm: amplitude fidelity <= 2 dB (recalled, not read: UNVERIFIED)")
         void exampleTfmLimitsTheGridAmplitudeLossToTwoDb() {
             RequirementProfile p = catalog.find("example-tfm").orElseThrow();
             assertThat(p.rules()).singleElement().satisfies(r -> {
@@ -324,7 +324,7 @@ class ProfileCatalogTest {
                 assertThat(r.comparison()).isEqualTo(Comparison.AT_MOST);
                 assertThat(r.limit().value()).isEqualTo(2.0);
                 assertThat(r.techniques()).containsExactly("TFM");
-                assertThat(r.source()).startsWith("from memory");
+                assertThat(r.source()).startsWith("recalled and not read");
             });
         }
     }

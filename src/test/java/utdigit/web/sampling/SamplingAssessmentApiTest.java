@@ -37,7 +37,7 @@ import utdigit.web.support.ApiTest;
  * POST /api/sampling-assessments over HTTP. Expected values are written as their derivations, each
  * with its source beside it: the sine bound (any DSP text), the Gaussian pulse of
  * scipy.signal.gausspulse (its parameterisation written out below), a brute-force phase scan in
- * this test, erfc of Apache Commons Math, and DOMAIN.md "Sampling adequacy" and "Spatial sampling of
+ * this test, erfc of Apache Commons Math, and src/docs/methods.md sections 3.3 to 3.7 (sampling adequacy and the spatial sampling of
  * a TFM image" for the conventions and the quoted values.
  */
 class SamplingAssessmentApiTest extends ApiTest {
@@ -53,7 +53,7 @@ class SamplingAssessmentApiTest extends ApiTest {
     /** Allowed gap between the service's exact phase search and the brute-force scan below, dB. */
     private static final double BRUTE_FORCE_ALLOWED_ERROR_DB = 1e-4;
 
-    /** Allowed error of a value quoted to 4 decimals in DOMAIN.md or a DSP text, dB. */
+    /** Allowed error of a value quoted to 4 decimals in src/docs/methods.md or a DSP text, dB. */
     private static final double QUOTED_4_DECIMALS_DB = 5e-5;
 
     /** Allowed error of a value quoted to 2 or 3 significant decimals ("about"), dB. */
@@ -105,7 +105,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         return -(x * x) / (4.0 * Math.log(ratio(-6.0)));
     }
 
-    /** Envelope loss of the peak midway between two samples: -20 log10(exp(-a (dt/2)^2)) dB (DOMAIN). */
+    /** Envelope loss of the peak midway between two samples: -20 log10(exp(-a (dt/2)^2)) dB (methods.md). */
     private static double envelopeLossDb(double a, double intervalUs) {
         return lossDb(Math.exp(-a * intervalUs * intervalUs / 4.0));
     }
@@ -166,7 +166,7 @@ class SamplingAssessmentApiTest extends ApiTest {
 
     /**
      * The rate, MHz, at which the closed form of the read amplitude of the two samples straddling the
-     * peak, cos(pi fc/fs) exp(-a/(4 fs^2)), equals 10^(-X/20) (DOMAIN: every faster rate passes;
+     * peak, cos(pi fc/fs) exp(-a/(4 fs^2)), equals 10^(-X/20) (methods.md: every faster rate passes;
      * for a broadband pulse it is the exact loss).
      */
     private static double closedFormRateMhz(double carrierMhz, double fractionalBandwidth, double toleranceDb) {
@@ -178,7 +178,7 @@ class SamplingAssessmentApiTest extends ApiTest {
     /**
      * Lateral -6 dB width factor k of w_lat = k lambda z / A: the full width where the one-way sinc
      * directivity of a line aperture, sin(pi u)/(pi u), falls to -3 dB (two-way -6 dB), paraxial
-     * (DOMAIN "about 0.884").
+     * (methods.md "about 0.884").
      */
     private static double lateralWidthFactor() {
         return 2.0 * bisect(u -> Math.sin(Math.PI * u) / (Math.PI * u) - ratio(-3.0), 0.1, 0.9);
@@ -220,7 +220,7 @@ class SamplingAssessmentApiTest extends ApiTest {
                 .body("sine_amplitude_loss_db", closeTo(3.0103, QUOTED_4_DECIMALS_DB))
                 .body("timing_error_ns", closedForm(25))
                 .body("timing_standard_uncertainty_ns", closedForm(50 / Math.sqrt(12)))
-                .body("references.source", hasItem(containsString("JCGM 100:2008 (GUM) 4.3.7")))
+                .body("references.id", hasItem("jcgm-100-2008-4.3.7"))
                 .body("inputs.decimation_factor", equalTo(1))
                 .body("inputs.decimation_mode", equalTo("DROP"))
                 .body("inputs.signal", equalTo("RF"))
@@ -269,14 +269,14 @@ class SamplingAssessmentApiTest extends ApiTest {
     // ---- the pulse model ----
 
     @Test
-    @DisplayName("5 MHz 60 %, n = 5: pulse loss = sine bound + envelope -20 log10 exp(-a dt^2/4), about 1.953 dB (DOMAIN; scipy gausspulse a)")
+    @DisplayName("5 MHz 60 %, n = 5: pulse loss = sine bound + envelope -20 log10 exp(-a dt^2/4), about 1.953 dB (methods.md; scipy gausspulse a)")
     void broadbandPulseLossIsTheSineBoundPlusTheEnvelopeLoss() {
         double a = gaussA(5, 0.6);
         double dt = 1.0 / 25;
         double expected = sineBoundDb(5) + envelopeLossDb(a, dt);
         post(PATH, "{\"sampling_frequency_mhz\": 25, \"frequency_mhz\": 5, \"bandwidth_percent\": 60}")
                 .statusCode(200)
-                // DOMAIN: 1.841 + 0.112 = 1.953 dB
+                // methods.md: 1.841 + 0.112 = 1.953 dB
                 .body("pulse_amplitude_loss_db", closeTo(expected, 1e-9))
                 .body("pulse_amplitude_loss_db", closeTo(1.953, QUOTED_ABOUT_DB))
                 .body("pulse_amplitude_loss_db", closeTo(bruteForcePulseLossDb(5, 0.6, 25, true),
@@ -285,11 +285,11 @@ class SamplingAssessmentApiTest extends ApiTest {
                 .body("samples_per_period_upper", closedForm(25 / 6.5))
                 .body("inputs.centre_frequency_convention", equalTo("ARITHMETIC"))
                 .body("inputs.bandwidth_percent", closedForm(60))
-                .body("references.source", hasItem(containsString("scipy.signal.gausspulse")));
+                .body("references.id", hasItem("scipy-gausspulse"));
     }
 
     @Test
-    @DisplayName("30 %: the pulse loss is not monotonic in fs, n = 4.75 about 0.89 dB, n = 6 about 1.27 dB (DOMAIN; brute force)")
+    @DisplayName("30 %: the pulse loss is not monotonic in fs, n = 4.75 about 0.89 dB, n = 6 about 1.27 dB (methods.md; brute force)")
     void narrowBandPulseLossIsNotMonotonicInTheSamplingFrequency() {
         String base = "{\"frequency_mhz\": 5, \"bandwidth_percent\": 30, \"sampling_frequency_mhz\": ";
         double slower = number(base + (4.75 * 5) + "}", "pulse_amplitude_loss_db");
@@ -301,7 +301,7 @@ class SamplingAssessmentApiTest extends ApiTest {
                 .isCloseTo(bruteForcePulseLossDb(5, 0.3, 6.0 * 5, true),
                         org.assertj.core.data.Offset.offset(BRUTE_FORCE_ALLOWED_ERROR_DB));
         assertThat(slower).as("the slower rate reads the narrow-band pulse better").isLessThan(faster);
-        // DOMAIN: the loss never exceeds sine bound + envelope loss
+        // methods.md: the loss never exceeds sine bound + envelope loss
         assertThat(slower).isLessThanOrEqualTo(sineBoundDb(4.75) + envelopeLossDb(gaussA(5, 0.3), 1 / 23.75));
     }
 
@@ -318,7 +318,7 @@ class SamplingAssessmentApiTest extends ApiTest {
     }
 
     @Test
-    @DisplayName("ENVELOPE signal: pulse loss -20 log10 exp(-a (dt/2)^2), no sine bound, no peak reading (DOMAIN)")
+    @DisplayName("ENVELOPE signal: pulse loss -20 log10 exp(-a (dt/2)^2), no sine bound, no peak reading (methods.md)")
     void envelopeSignalLosesOnlyTheEnvelopeTermAndHasNoSineBound() {
         post(PATH, "{\"sampling_frequency_mhz\": 25, \"frequency_mhz\": 5, \"bandwidth_percent\": 60, "
                 + "\"signal\": \"ENVELOPE\"}")
@@ -348,7 +348,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("broadband 60 %, 1 dB: the pulse rate is where the closed form meets the tolerance (DOMAIN), to 1e-4")
+        @DisplayName("broadband 60 %, 1 dB: the pulse rate is where the closed form meets the tolerance (methods.md), to 1e-4")
         void broadbandPulseRateIsTheClosedFormRate() {
             double closedFormRate = closedFormRateMhz(5, 0.6, 1.0);
             post(PATH, """
@@ -359,7 +359,7 @@ class SamplingAssessmentApiTest extends ApiTest {
                             greaterThanOrEqualTo(closedFormRate * (1 - 1e-12)),
                             lessThanOrEqualTo(closedFormRate * (1 + 1.1 * INVERSE_RELATIVE_TOLERANCE))))
                     .body("warnings.code", not(hasItem("SLOWER_RATES_ALSO_PASS")))
-                    .body("references.source", hasItem(containsString("bisect")));
+                    .body("references.id", hasItem("required-sampling-rate"));
         }
 
         @ParameterizedTest
@@ -383,7 +383,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("30 %, 1 dB: slower rates also pass (n = 4.75 reads 0.89 dB, DOMAIN) and a warning says so")
+        @DisplayName("30 %, 1 dB: slower rates also pass (n = 4.75 reads 0.89 dB, methods.md) and a warning says so")
         void narrowBandPulseRateWarnsThatSlowerRatesAlsoPass() {
             JsonPath answer = post(PATH, """
                     {"sampling_frequency_mhz": 100, "frequency_mhz": 5, "bandwidth_percent": 30,
@@ -392,7 +392,7 @@ class SamplingAssessmentApiTest extends ApiTest {
                     .body("warnings.code", hasItem("SLOWER_RATES_ALSO_PASS"))
                     .extract().jsonPath();
             double requiredMhz = answer.getDouble("required_sampling_frequency_pulse_mhz");
-            // n = 6 loses about 1.27 dB (DOMAIN): the answer lies above 6 x 5 MHz ...
+            // n = 6 loses about 1.27 dB (methods.md): the answer lies above 6 x 5 MHz ...
             assertThat(requiredMhz).isGreaterThan(30.0);
             // ... and 4.75 x 5 MHz, below it, passes with about 0.89 dB (brute force)
             assertThat(bruteForcePulseLossDb(5, 0.3, 23.75, true)).isLessThan(1.0);
@@ -447,7 +447,7 @@ class SamplingAssessmentApiTest extends ApiTest {
                  "amplitude_tolerance_db": 1, "decimation_factor": 4""";
 
         @Test
-        @DisplayName("DROP by 4: timing and amplitude follow fs/m = 25 MHz (DOMAIN)")
+        @DisplayName("DROP by 4: timing and amplitude follow fs/m = 25 MHz (methods.md)")
         void dropPutsTimingAndAmplitudeAtTheDecimatedRate() {
             post(PATH, BASE + ", \"decimation_mode\": \"DROP\"}")
                     .statusCode(200)
@@ -466,7 +466,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("PEAK_PRESERVING by 4: timing follows fs/m, amplitude the raw fs = 100 MHz (DOMAIN)")
+        @DisplayName("PEAK_PRESERVING by 4: timing follows fs/m, amplitude the raw fs = 100 MHz (methods.md)")
         void peakPreservingPutsTimingAtTheDecimatedRateAndAmplitudeAtTheRawRate() {
             post(PATH, BASE + ", \"decimation_mode\": \"PEAK_PRESERVING\"}")
                     .statusCode(200)
@@ -510,7 +510,7 @@ class SamplingAssessmentApiTest extends ApiTest {
     // ---- spectral figures and warnings ----
 
     @Test
-    @DisplayName("Nyquist level -6 ((fs/2 - fc)/(bw fc/2))^2 dB and energy 0.5 erfc((fs/2 - fc)/(sigma_f sqrt 2)) (DOMAIN; Commons Math Erf)")
+    @DisplayName("Nyquist level -6 ((fs/2 - fc)/(bw fc/2))^2 dB and energy 0.5 erfc((fs/2 - fc)/(sigma_f sqrt 2)) (methods.md; Commons Math Erf)")
     void nyquistLevelAndEnergyFollowTheGaussianModel() {
         // fs = 15 MHz: Nyquist 7.5 MHz, (7.5 - 5)/(0.6 x 5/2) = 5/3: level -6 x 25/9 = -16.67 dB, above -40
         double a = gaussA(5, 0.6);
@@ -524,8 +524,7 @@ class SamplingAssessmentApiTest extends ApiTest {
                 .body("warnings.code", hasItem("NYQUIST_LEVEL_ABOVE_MINUS_40_DB"))
                 // 15 MHz is above 2 fu = 13 MHz: the band does not alias
                 .body("warnings.code", not(hasItem("BAND_ALIASING")))
-                .body("references.source", hasItem(containsString("model value")))
-                .body("references.source", hasItem(containsString("anti-alias filter")));
+                .body("references.id", hasItem("spectral-model"));
     }
 
     @Test
@@ -541,7 +540,7 @@ class SamplingAssessmentApiTest extends ApiTest {
     @Nested
     class Warnings {
         @Test
-        @DisplayName("fs at or below twice the upper -6 dB edge aliases the band: 2 x 6.5 = 13 MHz (DOMAIN)")
+        @DisplayName("fs at or below twice the upper -6 dB edge aliases the band: 2 x 6.5 = 13 MHz (methods.md)")
         void rateAtOrBelowTwiceTheUpperEdgeAliasesTheBand() {
             String base = "{\"frequency_mhz\": 5, \"bandwidth_percent\": 60, \"sampling_frequency_mhz\": ";
             post(PATH, base + "13}").statusCode(200)
@@ -552,7 +551,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("PEAK_PRESERVING judges aliasing at the raw rate (DOMAIN)")
+        @DisplayName("PEAK_PRESERVING judges aliasing at the raw rate (methods.md)")
         void peakPreservingJudgesAliasingAtTheRawRate() {
             String base = "{\"sampling_frequency_mhz\": 40, \"frequency_mhz\": 5, \"bandwidth_percent\": 60, "
                     + "\"decimation_factor\": 4, \"decimation_mode\": ";
@@ -561,7 +560,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("n <= 2: the sine bound is null, with a warning (DOMAIN)")
+        @DisplayName("n <= 2: the sine bound is null, with a warning (methods.md)")
         void twoSamplesPerPeriodHaveNoSineBound() {
             post(PATH, "{\"sampling_frequency_mhz\": 10, \"frequency_mhz\": 5}")
                     .statusCode(200)
@@ -595,7 +594,7 @@ class SamplingAssessmentApiTest extends ApiTest {
     @Nested
     class TfmGrid {
         @Test
-        @DisplayName("RF image, no bandwidth: carrier term -20 log10 cos(2 pi dz/lambda), largest step lambda arccos(10^(-X/20))/(2 pi) (DOMAIN)")
+        @DisplayName("RF image, no bandwidth: carrier term -20 log10 cos(2 pi dz/lambda), largest step lambda arccos(10^(-X/20))/(2 pi) (methods.md)")
         void rfImageWithoutBandwidthLosesTheCarrierTermAndSaysTheEnvelopeIsOmitted() {
             double lambdaMm = STEEL_LONGITUDINAL_M_PER_S / 1000 / 5; // lambda = v/f
             post(PATH, """
@@ -610,12 +609,11 @@ class SamplingAssessmentApiTest extends ApiTest {
                     .body("inputs.tfm_image", equalTo("RF"))
                     .body("inputs.tfm_grid_spacing_mm", closedForm(0.1))
                     .body("inputs.velocity_m_per_s", closedForm(5920))
-                    .body("references.source", hasItem(containsString("derived model")))
-                    .body("references.source", hasItem(containsString("amplitude-fidelity check on a reference reflector")));
+                    .body("references.id", hasItem("tfm-grid-model"));
         }
 
         @Test
-        @DisplayName("RF image at lambda/4 and beyond: no bound, null with a warning (DOMAIN)")
+        @DisplayName("RF image at lambda/4 and beyond: no bound, null with a warning (methods.md)")
         void rfImageStepAtAQuarterWavelengthHasNoBound() {
             // 6000 m/s at 5 MHz: lambda = 1.2 mm, lambda/4 = 0.3 mm
             String base = "{\"sampling_frequency_mhz\": 100, \"frequency_mhz\": 5, \"velocity_m_per_s\": 6000, "
@@ -634,7 +632,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("RF image with bandwidth adds 6 (dz/w)^2, w = v tau(-6 dB)/2 with the scipy gausspulse tau (DOMAIN)")
+        @DisplayName("RF image with bandwidth adds 6 (dz/w)^2, w = v tau(-6 dB)/2 with the scipy gausspulse tau (methods.md)")
         void rfImageWithBandwidthAddsTheEnvelopeTerm() {
             double lambdaMm = 5.92 / 5;
             double widthMm = 5.92 * envelopeDuration6dbUs(gaussA(5, 0.6)) / 2; // mm/us x us, round trip halved
@@ -653,7 +651,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("ENVELOPE image: 6 (dz/w)^2 only, largest step w sqrt(X/6) (DOMAIN)")
+        @DisplayName("ENVELOPE image: 6 (dz/w)^2 only, largest step w sqrt(X/6) (methods.md)")
         void envelopeImageLosesOnlyTheEnvelopeTerm() {
             // carbon-steel SHEAR: 3255 m/s (ISO 22232-2 steel reference value)
             double widthMm = 3.255 * envelopeDuration6dbUs(gaussA(5, 0.6)) / 2;
@@ -670,7 +668,7 @@ class SamplingAssessmentApiTest extends ApiTest {
         }
 
         @Test
-        @DisplayName("lateral step: 6 (dx/w_lat)^2, w_lat = k lambda z/A, k from the -3 dB one-way sinc (about 0.884, DOMAIN)")
+        @DisplayName("lateral step: 6 (dx/w_lat)^2, w_lat = k lambda z/A, k from the -3 dB one-way sinc (about 0.884, methods.md)")
         void lateralStepLosesTheGaussianTermOfTheParaxialWidth() {
             double k = lateralWidthFactor();
             assertThat(k).isCloseTo(0.884, org.assertj.core.data.Offset.offset(0.001));

@@ -15,7 +15,7 @@ import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.support.ApiTest;
 
-/** Stamps prove that a value is the service's, unaltered (DESIGN "Stamp"). */
+/** Stamps prove that a value is the service's, unaltered (README "Stamps"). */
 @TestPropertySource(properties = {"utdigit.stamp.key=test-key-alpha", "utdigit.stamp.key-id=qa-test"})
 class StampVerificationApiTest extends ApiTest {
     private static final JsonMapper JSON = JsonMapper.builder().build();

@@ -181,7 +181,7 @@ class TimeOfFlightResolutionApiTest extends ApiTest {
                 .body("inputs.time_reference", equalTo("TRIGGER"))
                 .body("inputs.decimation_factor", equalTo(1))
                 // the issue asks the references to state the PCS sensitivity and the off-centre-line reading
-                .body("references.source", hasItem(containsString("dd/dS = -S/d")))
+                .body("references.topic", hasItem(containsString("dd/dS = -S/d")))
                 .body("references.topic", hasItem("flaw off the centre line"));
     }
 
