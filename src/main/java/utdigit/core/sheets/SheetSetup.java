@@ -13,15 +13,18 @@ import utdigit.core.dac.TcgMode;
  * @param angularStepDeg angle between neighbouring beams of a sector scan, deg
  * @param elementPitchMm array element pitch, mm
  * @param activeElements elements fired together
- * @param maxSteeringAngleDeg largest steering angle used, deg
+ * @param maxSteeringAngleDeg largest steering angle used, deg, in the medium of the steering
+ * @param steeringVelocityMPerS velocity of the medium where the beam is steered (a wedge's for an
+ *     array on a wedge), m/s; null: the part's velocity (a contact array)
  * @param dacSpanDb span of the DAC curve, dB
  * @param tcg how the span is corrected; null: NONE
  * @param gateStartUs TOFD gate opening time in the part, us
  * @param gateEndUs TOFD gate closing time in the part, us
  */
 public record SheetSetup(Double beamWidth6dbMm, Double soundPathMm, Double indexStepMm, Double angularStepDeg,
-                         Double elementPitchMm, Integer activeElements, Double maxSteeringAngleDeg, Double dacSpanDb,
+                         Double elementPitchMm, Integer activeElements, Double maxSteeringAngleDeg,
+                         Double steeringVelocityMPerS, Double dacSpanDb,
                          TcgMode tcg, Double gateStartUs, Double gateEndUs) {
     public static final SheetSetup EMPTY =
-            new SheetSetup(null, null, null, null, null, null, null, null, null, null, null);
+            new SheetSetup(null, null, null, null, null, null, null, null, null, null, null, null);
 }

@@ -32,7 +32,7 @@ public final class SheetSetupMetrics {
     /** Sheet inputs of the set-up section that rules may name. */
     public static final List<String> INPUTS = List.of(
             "beam_width_6db_mm", "sound_path_mm", "index_step_mm", "angular_step_deg", "element_pitch_mm",
-            "active_elements", "max_steering_angle_deg", "dac_span_db", "gate_start_us", "gate_end_us");
+            "active_elements", "max_steering_angle_deg", "steering_velocity_m_per_s", "dac_span_db", "gate_start_us", "gate_end_us");
 
     /** Computed values of the set-up that rules may name. */
     public static final List<String> COMPUTED = List.of(
@@ -64,6 +64,7 @@ public final class SheetSetupMetrics {
         put(values, "element_pitch_mm", s.elementPitchMm());
         put(values, "active_elements", s.activeElements() == null ? null : s.activeElements().doubleValue());
         put(values, "max_steering_angle_deg", s.maxSteeringAngleDeg());
+        put(values, "steering_velocity_m_per_s", s.steeringVelocityMPerS());
         put(values, "dac_span_db", s.dacSpanDb());
         put(values, "gate_start_us", s.gateStartUs());
         put(values, "gate_end_us", s.gateEndUs());
@@ -87,8 +88,10 @@ public final class SheetSetupMetrics {
             notes("scan coverage", r.warnings(), r.references(), warnings, references);
         }
 
-        if (s.elementPitchMm() != null && f != null && c != null) {
-            ArrayApertureResult r = ArrayApertureCalculator.compute(new ArrayApertureInput(f, c, s.elementPitchMm(),
+        Double steeringVelocity = s.steeringVelocityMPerS() != null ? s.steeringVelocityMPerS() : c;
+        if (s.elementPitchMm() != null && f != null && steeringVelocity != null) {
+            ArrayApertureResult r = ArrayApertureCalculator.compute(new ArrayApertureInput(f, steeringVelocity,
+                    s.elementPitchMm(),
                     s.activeElements(), null, null, s.maxSteeringAngleDeg()));
             put(values, "aperture_near_field_length_mm", r.nearFieldLengthMm());
             put(values, "aperture_beam_spread_6db_deg", r.beamSpread6dbDeg());

@@ -38,8 +38,13 @@ public record SheetSetupSection(
         @DecimalMin(value = "0", inclusive = false) Double elementPitchIn,
         @Schema(description = "Elements fired together (1 to 65536)", format = "int32", example = "16")
         @Min(1) @Max(65536) Integer activeElements,
-        @Schema(description = "Largest steering angle used, deg (0 to below 90)", format = "double", example = "45")
+        @Schema(description = "Largest steering angle used, from the array's normal in the medium where the beam is "
+                + "steered, deg (0 to below 90)", format = "double", example = "10")
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double maxSteeringAngleDeg,
+        @Schema(description = "Velocity of the medium where the beam is steered, m/s (100 to 20000): the wedge's for "
+                + "an array on a wedge; default the part's velocity (a contact array)", format = "double",
+                example = "2330")
+        @DecimalMin("100") @DecimalMax("20000") Double steeringVelocityMPerS,
         @Schema(description = "Span of the DAC curve from its highest point (at evaluation.reference_height_percent_fsh) "
                 + "to its lowest, dB (above 0, at most 60)", format = "double", example = "24")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("60") Double dacSpanDb,
@@ -65,13 +70,14 @@ public record SheetSetupSection(
                     "give the gate whole: gate_start_us and gate_end_us together");
         }
         return new SheetSetup(widthMm, pathMm, indexMm, angularStepDeg, pitchMm, activeElements, maxSteeringAngleDeg,
-                dacSpanDb, tcg, gateStartUs, gateEndUs);
+                steeringVelocityMPerS, dacSpanDb, tcg, gateStartUs, gateEndUs);
     }
 
     /** The normalised section for an answer's inputs (lengths in mm). */
     static SheetSetupSection normalised(SheetSetup s) {
         return new SheetSetupSection(s.beamWidth6dbMm(), null, s.soundPathMm(), null, s.indexStepMm(), null,
-                s.angularStepDeg(), s.elementPitchMm(), null, s.activeElements(), s.maxSteeringAngleDeg(), s.dacSpanDb(),
+                s.angularStepDeg(), s.elementPitchMm(), null, s.activeElements(), s.maxSteeringAngleDeg(),
+                s.steeringVelocityMPerS(), s.dacSpanDb(),
                 s.tcg(), s.gateStartUs(), s.gateEndUs());
     }
 }

@@ -38,7 +38,7 @@ class SheetSetupMetricsTest {
 
     @Test
     void arrayCoverageAndDacValuesEqualTheSingleCalculators() {
-        SheetSetup setup = new SheetSetup(6.0, 50.0, 3.0, null, 0.5, 16, 70.0, 30.0, TcgMode.ANALOG, null, null);
+        SheetSetup setup = new SheetSetup(6.0, 50.0, 3.0, null, 0.5, 16, 70.0, null, 30.0, TcgMode.ANALOG, null, null);
         SheetResult r = SheetEvaluator.evaluate(phasedArray(setup), PITCH);
         var array = ArrayApertureCalculator.compute(new ArrayApertureInput(5.0, 3255.0, 0.5, 16, null, null, 70.0));
         assertThat(r.values().get("max_grating_lobe_free_pitch_mm")).isEqualTo(array.maxGratingLobeFreePitchMm());
@@ -53,6 +53,10 @@ class SheetSetupMetricsTest {
         assertThat(r.values().get("dac_error_magnitude_db")).isEqualTo(-dac.analogTcgErrorUnderDb().orElseThrow());
         assertThat(r.values().get("lowest_reference_height_percent_fsh")).isEqualTo(dac.lowestReferenceHeightPercentFsh());
         assertThat(SheetMetrics.ALL).containsAll(r.values().keySet());
+        // Steered in a wedge of 2330 m/s instead: lambda = 0.466 mm, the wedge's wavelength decides.
+        SheetSetup wedge = new SheetSetup(null, null, null, null, 0.5, 16, 20.0, 2330.0, null, null, null, null);
+        assertThat(SheetEvaluator.evaluate(phasedArray(wedge), PITCH).values().get("max_grating_lobe_free_pitch_mm"))
+                .isCloseTo(0.466 / (1 + Math.sin(Math.toRadians(20))), within(1e-12));
     }
 
     @Test
@@ -61,7 +65,7 @@ class SheetSetupMetricsTest {
                 new SheetInput.Probe(10.0, 70.0, null, null), new SheetInput.Part(6000.0, null, null, 40.0, null),
                 new SheetInput.Digitization(100.0, null, 8, null, null, null, null, null), null,
                 new SheetInput.Tofd(60.0, 20.0), null, null,
-                new SheetSetup(null, null, null, null, null, null, null, null, null, 9.0, 17.0));
+                new SheetSetup(null, null, null, null, null, null, null, null, null, null, 9.0, 17.0));
         SheetResult r = SheetEvaluator.evaluate(tofd, PITCH);
         // 2S = 60, T = 40, v = 6 mm/us: lateral wave 10 us, back wall 100/6 us (Charlesworth & Temple 2.3.4).
         assertThat(r.values().get("backwall_time_us")).isCloseTo(100.0 / 6, within(1e-12));
