@@ -50,16 +50,12 @@ public final class ScanCoverageCalculator {
                     + "element_diameter and sound_path for a round probe, not both");
         }
         if (in.beamWidth6dbMm() == null) {
-            for (String[] f : new String[][] {{"frequency_mhz", String.valueOf(in.frequencyMhz())},
-                    {"velocity", String.valueOf(in.velocityMPerS())},
-                    {"element_diameter", String.valueOf(in.elementDiameterMm())},
-                    {"sound_path", String.valueOf(in.soundPathMm())}}) {
-                if ("null".equals(f[1])) {
-                    throw CalculationException.notApplicable(anyProbe ? f[0] : "beam_width_6db",
-                            "a beam width is needed: give beam_width_6db, or frequency_mhz, a velocity, "
-                                    + "element_diameter and sound_path for a round probe"
-                                    + (anyProbe ? " (" + f[0] + " is missing)" : ""));
-                }
+            String missing = in.frequencyMhz() == null ? "frequency_mhz" : in.velocityMPerS() == null ? "velocity"
+                    : in.elementDiameterMm() == null ? "element_diameter" : in.soundPathMm() == null ? "sound_path" : null;
+            if (missing != null) {
+                throw CalculationException.notApplicable(anyProbe ? missing : "beam_width_6db",
+                        "a beam width is needed: give beam_width_6db, or frequency_mhz, a velocity, element_diameter "
+                                + "and sound_path for a round probe" + (anyProbe ? " (" + missing + " is missing)" : ""));
             }
         }
         if (in.angularStepDeg() != null && in.soundPathMm() == null) {
