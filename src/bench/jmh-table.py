@@ -7,6 +7,7 @@ import sys
 US = 1_000.0
 TARGETS = [
     ("ClosedFormBenchmarks.", 2 * US, "closed form < 2 us"),
+    ("SetupCalculatorBenchmarks.", 2 * US, "closed form < 2 us"),
     ("PulseSearchBenchmarks.samplingPulseModelWithTolerance", 5_000 * US, "search + inverse < 5 ms"),
     ("PulseSearchBenchmarks.samplingPulseModel", 50 * US, "pulse-model search < 50 us"),
     ("PulseSearchBenchmarks.requiredPulseRate", 5_000 * US, "inverse < 5 ms"),

@@ -192,6 +192,10 @@ public final class SheetEvaluator {
             v.put("max_prf_without_wraparound_hz", r.maxPrfWithoutWraparoundHz());
             v.notes("acquisition", r.warnings(), r.references());
         }
+        SheetSetupMetrics.Computed setup = SheetSetupMetrics.compute(sheet);
+        setup.values().forEach(v::put);
+        v.warnings.addAll(setup.warnings());
+        v.references.addAll(setup.references());
         Double pulseLoss = v.values.get("pulse_amplitude_loss_db");
         Double evaluationError = v.values.get("evaluation_error_under_db");
         if (evaluationError != null) {

@@ -15,7 +15,13 @@ import utdigit.core.sampling.TfmImage;
  */
 public record SheetInput(String sheetId, String revision, SheetTechnique technique, Probe probe, Part part,
                          Digitization digitization, Acquisition acquisition, Tofd tofd, Tfm tfm,
-                         Evaluation evaluation) {
+                         Evaluation evaluation, SheetSetup setup) {
+
+    /** A sheet without a set-up section. */
+    public SheetInput(String sheetId, String revision, SheetTechnique technique, Probe probe, Part part,
+                      Digitization digitization, Acquisition acquisition, Tofd tofd, Tfm tfm, Evaluation evaluation) {
+        this(sheetId, revision, technique, probe, part, digitization, acquisition, tofd, tfm, evaluation, null);
+    }
 
     public SheetInput {
         Objects.requireNonNull(technique, "technique");
@@ -26,6 +32,7 @@ public record SheetInput(String sheetId, String revision, SheetTechnique techniq
         tofd = tofd == null ? Tofd.EMPTY : tofd;
         tfm = tfm == null ? Tfm.EMPTY : tfm;
         evaluation = evaluation == null ? Evaluation.EMPTY : evaluation;
+        setup = setup == null ? SheetSetup.EMPTY : setup;
     }
 
     /** The probe: nominal frequency, -6 dB bandwidth, element diameter (single element), elements. */

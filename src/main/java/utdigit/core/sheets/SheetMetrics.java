@@ -60,6 +60,8 @@ public final class SheetMetrics {
     static {
         Set<String> all = new LinkedHashSet<>(INPUTS);
         all.addAll(COMPUTED);
+        all.addAll(SheetSetupMetrics.INPUTS);
+        all.addAll(SheetSetupMetrics.COMPUTED);
         ALL = java.util.Collections.unmodifiableSet(all);
     }
 

@@ -38,7 +38,7 @@ class BatchController {
 
     @PostMapping(path = "/api/{calculation:pulse-parameters|sampling-assessments|quantization-assessments"
             + "|time-of-flight-resolutions|thickness-resolutions|acquisition-budgets|technique-sheet-validations"
-            + "|waveform-analyses}/batch")
+            + "|waveform-analyses|scan-coverages|array-apertures|tofd-setups|dac-quantizations}/batch")
     @Operation(summary = "Recalculate many requests of one calculation",
             description = """
                     The body is a JSON array of request objects (application/json), one object per line \

@@ -20,8 +20,10 @@ class OpenApiConfiguration {
             Calculations that show whether a digital UT instrument's digitization settings are adequate \
             for a technique sheet: pulse and beam parameters, sampling adequacy (samples per period, \
             aliasing, amplitude loss), quantization error in dB, time-of-flight and thickness \
-            resolution, acquisition budget (data volume, scan speed, wrap-around PRF), and validation \
-            of whole technique sheets against requirement profiles, with tamper-evident stamps.
+            resolution, acquisition budget (data volume, scan speed, wrap-around PRF), scan coverage, \
+            phased-array apertures and grating lobes, TOFD set-up, DAC and TCG against the quantization, \
+            and validation of whole technique sheets against requirement profiles, with tamper-evident \
+            stamps.
 
             Units are in every quantity's name (_mhz, _us, _ns, _mm, _in, _m_per_s, _db, _deg, \
             _percent_fsh, _megabytes with MB = 10^6 bytes). Errors are RFC 9457 problems \

@@ -41,7 +41,8 @@ public record TechniqueSheetRequest(
         @Valid Acquisition acquisition,
         @Valid Tofd tofd,
         @Valid Tfm tfm,
-        @Valid Evaluation evaluation) {
+        @Valid Evaluation evaluation,
+        @Valid SheetSetupSection setup) {
 
     /** The probe. */
     @Schema(name = "SheetProbe")

@@ -7,6 +7,7 @@ import utdigit.core.rules.Finding;
 import utdigit.core.rules.RequirementProfile;
 import utdigit.core.sheets.SheetEvaluator;
 import utdigit.core.sheets.SheetInput;
+import utdigit.core.sheets.SheetSetup;
 import utdigit.core.sheets.SheetResult;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
@@ -128,6 +129,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
             materialErrors.add("velocity_m_per_s", "a gate or sound path in mm needs the part's velocity: give "
                     + "velocity_m_per_s, velocity_in_per_us or material");
         }
+        SheetSetup setup = q.setup() == null ? null : q.setup().toCore(errors.section("setup"));
         errors.throwIfAny();
 
         Double c = velocity == null ? null : velocity.velocityMPerS();
@@ -152,7 +154,8 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 tfm == null ? null : new SheetInput.Tfm(tfm.gridSpacingMm(), tfm.lateralGridSpacingMm(),
                         tfm.apertureMm(), tfm.depthMm(), tfm.image()),
                 e == null ? null : new SheetInput.Evaluation(e.referenceHeightPercentFsh(), e.evaluationLevelDb(),
-                        e.amplitudeToleranceDb(), e.thicknessToleranceMm()));
+                        e.amplitudeToleranceDb(), e.thicknessToleranceMm()),
+                setup);
 
         SheetResult r = SheetEvaluator.evaluate(sheet, profile);
 
@@ -168,7 +171,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                         null, a.plannedScanSpeedMmPerS(), a.gateLengthUs(), gateMm, null, soundPathMm, null,
                         a.maxRoundTripUs(), a.wraparoundDecayFactor()),
                 q.tofd() == null ? null : new TechniqueSheetRequest.Tofd(pcsMm, null, depthMm, null),
-                tfm, e);
+                tfm, e, setup == null ? null : SheetSetupSection.normalised(setup));
 
         return new TechniqueSheetValidationResponse(q.sheetId(), q.revision(),
                 new TechniqueSheetValidationResponse.ProfileRef(profile.id(), profile.version(), profile.sha256(),

@@ -64,7 +64,9 @@ class CarrierPhaseAndCompressionTest {
         assertThat(extraCostOfCarrierPhaseDb(0.2, 5.3)).isBetween(0.15, 0.3);
         assertThat(extraCostOfCarrierPhaseDb(0.4, 2.8)).isBetween(0.6, 0.9);
         assertThat(SamplingCalculator.compute(SamplingInput.of(25.0, 5.0).withBandwidthPercent(30.0)).references())
-                .anySatisfy(ref -> assertThat(ref.source()).contains(SamplingCalculator.CARRIER_PHASE_NOTE));
+                .anySatisfy(ref -> assertThat(ref.id()).isEqualTo(utdigit.core.common.Sources.PULSE_SAMPLING_LOSS.id()));
+        assertThat(utdigit.core.common.Sources.PULSE_SAMPLING_LOSS.checkNote())
+                .contains("carrier phase", "0.05 dB", "0.3 dB", "0.8 dB");
     }
 
     @Test

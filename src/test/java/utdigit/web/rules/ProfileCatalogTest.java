@@ -271,10 +271,14 @@ class ProfileCatalogTest {
                             "pulse_repetition_frequency_hz AT_MOST max_prf_without_wraparound_hz",
                             "thickness_resolution_mm AT_MOST thickness_tolerance_mm",
                             "evaluation_error_magnitude_db AT_MOST amplitude_tolerance_db",
-                            "combined_amplitude_error_db AT_MOST amplitude_tolerance_db");
+                            "combined_amplitude_error_db AT_MOST amplitude_tolerance_db",
+                            "gate_start_margin_us AT_LEAST 0.0",
+                            "gate_end_margin_us AT_LEAST 0.0");
             assertThat(p.rules()).allSatisfy(r -> {
                 assertThat(r.source()).startsWith("common practice, no published source");
-                assertThat(r.techniques()).isEmpty();
+                // the TOFD gate rules are for TOFD sheets; every other rule holds for every technique
+                assertThat(r.techniques()).isEqualTo(r.metric().startsWith("gate_")
+                        ? java.util.Set.of(utdigit.core.sheets.SheetTechnique.TOFD.name()) : java.util.Set.of());
                 assertThat(r.when()).isEmpty();
             });
         }

@@ -31,7 +31,7 @@ class RequirementProfilesApiTest extends ApiTest {
                 .body("profiles.sha256", everyItem(matchesPattern(HEX_SHA256)))
                 .body("profiles[0].sha256", equalTo(CATALOG.find("common-practice").orElseThrow().sha256()))
                 .body("profiles[0].title", equalTo("Common practice for digitized UT technique sheets"))
-                .body("profiles[0].version", equalTo("1"))
+                .body("profiles[0].version", equalTo("2"))
                 .body("profiles[0]", not(hasKey("rules")));
     }
 

@@ -1,0 +1,119 @@
+package utdigit.core.dac;
+
+import java.math.MathContext;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import utdigit.core.common.CalculationException;
+import utdigit.core.common.Checks;
+import utdigit.core.common.Decibels;
+import utdigit.core.common.MessageNumbers;
+import utdigit.core.common.Reference;
+import utdigit.core.common.Sources;
+import utdigit.core.common.Warning;
+import utdigit.core.quantization.QuantizationCalculator;
+import utdigit.core.quantization.QuantizationInput;
+import utdigit.core.quantization.QuantizationResult;
+
+/**
+ * DAC quantization (POST /api/dac-quantizations): for a DAC curve spanning S dB whose highest
+ * reference point stands at h_ref, the lowest reference height, its quantization error and whether it
+ * meets the tolerance in three set-ups:
+ * <ul>
+ *   <li>no correction: the lowest point stands S dB below h_ref, h_ref 10^(-S/20), and is read with the
+ *   converter's LSB;</li>
+ *   <li>TCG before the converter (analog): each depth is amplified to h_ref before digitizing; the
+ *   span costs no resolution, every point is read at h_ref;</li>
+ *   <li>TCG applied to digitized data (a gain per depth after the converter): the lowest point is
+ *   displayed at h_ref, but its displayed LSB has grown by S dB, so its error is that of no
+ *   correction.</li>
+ * </ul>
+ * Every figure comes from {@link QuantizationCalculator}: the uncorrected point as an evaluation
+ * level of -S dB, the analog TCG as a height h_ref, the digital TCG as a height h_ref with a digital
+ * gain of S dB. No formula of the quantization is repeated here.
+ */
+public final class DacQuantizationCalculator {
+    private DacQuantizationCalculator() {}
+
+    public static final String READS_AS_ZERO = "READS_AS_ZERO";
+    public static final String OUT_OF_TOLERANCE = "OUT_OF_TOLERANCE";
+    public static final String NO_UNCORRECTED_SPAN = "NO_UNCORRECTED_SPAN";
+
+    private static final MathContext DIGITS = new MathContext(4);
+
+    /**
+     * @throws CalculationException invalid inputs outside a formula's domain (the web layer checks
+     *     ranges first); impossible (422) from the quantization (MAX_CODE with one bit of RF)
+     */
+    public static DacQuantizationResult compute(DacQuantizationInput in) {
+        Objects.requireNonNull(in, "input");
+        double spanDb = Checks.positive("dac_span_db", in.dacSpanDb());
+        double referencePercentFsh = Checks.positive("reference_height_percent_fsh", in.referenceHeightPercentFsh());
+        Double toleranceDb = in.amplitudeToleranceDb();
+
+        QuantizationResult plain = QuantizationCalculator.compute(new QuantizationInput(in.bitDepth(),
+                in.digitizedSignal(), in.quantizer(), in.codeMapping(), null, referencePercentFsh, toleranceDb,
+                referencePercentFsh, -spanDb, null));
+        QuantizationResult digital = QuantizationCalculator.compute(new QuantizationInput(in.bitDepth(),
+                in.digitizedSignal(), in.quantizer(), in.codeMapping(), spanDb, referencePercentFsh, null, null, null,
+                null));
+
+        List<Warning> warnings = new ArrayList<>();
+        List<Reference> references = new ArrayList<>(plain.references());
+        references.add(Reference.of("DAC and TCG against quantization", Sources.DAC_TCG));
+
+        double lowest = plain.evaluationHeightPercentFsh();
+        Optional<Double> uncorrected = plain.evaluationErrorUnderDb();
+        Optional<Double> analog = plain.amplitudeErrorUnderDb();
+        Optional<Double> soft = digital.amplitudeErrorUnderDb();
+        zeroWarning(uncorrected, "uncorrected_error_under_db", lowest, warnings);
+        zeroWarning(analog, "analog_tcg_error_under_db", referencePercentFsh, warnings);
+        zeroWarning(soft, "digital_tcg_error_under_db", referencePercentFsh, warnings);
+
+        Double minimum = plain.minimumHeightPercentFsh();
+        Optional<Double> maxSpan = null;
+        Boolean uncorrectedOk = null;
+        Boolean analogOk = null;
+        Boolean softOk = null;
+        if (toleranceDb != null) {
+            maxSpan = referencePercentFsh > minimum
+                    ? Optional.of(Decibels.fromRatio(referencePercentFsh / minimum)) : Optional.empty();
+            if (maxSpan.isEmpty()) {
+                warnings.add(Warning.of(NO_UNCORRECTED_SPAN, "reference_height_percent_fsh " + fmt(referencePercentFsh)
+                        + " is itself below minimum_height_percent_fsh " + fmt(minimum) + ": no span is read within "
+                        + "amplitude_tolerance_db " + fmt(toleranceDb) + " without correction; max_uncorrected_span_db is null"));
+            }
+            uncorrectedOk = within(uncorrected, toleranceDb, "uncorrected", warnings);
+            analogOk = within(analog, toleranceDb, "analog_tcg", warnings);
+            softOk = within(soft, toleranceDb, "digital_tcg", warnings);
+            references.add(Reference.of("largest span without correction", Sources.DAC_TCG));
+        }
+        return new DacQuantizationResult(plain.digitizedSignal(), plain.quantizer(), plain.codeMapping(),
+                plain.lsbPercentFsh(), lowest, uncorrected, analog, digital.lsbPercentFsh(), soft, minimum, maxSpan,
+                uncorrectedOk, analogOk, softOk, warnings, references);
+    }
+
+    private static void zeroWarning(Optional<Double> error, String field, double heightPercentFsh,
+                                    List<Warning> warnings) {
+        if (error.isEmpty()) {
+            warnings.add(Warning.of(READS_AS_ZERO, "the point read for " + field + " (" + fmt(heightPercentFsh)
+                    + " %FSH displayed) is at or below the quantizer's low bound: it can read as 0, so " + field
+                    + " has no finite value; it is null"));
+        }
+    }
+
+    private static boolean within(Optional<Double> error, double toleranceDb, String setUp, List<Warning> warnings) {
+        boolean ok = error.isPresent() && -error.get() <= toleranceDb;
+        if (!ok) {
+            warnings.add(Warning.of(OUT_OF_TOLERANCE, setUp + ": the lowest reference point can read "
+                    + (error.isPresent() ? fmt(-error.get()) + " dB low" : "as 0") + ", more than "
+                    + "amplitude_tolerance_db " + fmt(toleranceDb) + " allows"));
+        }
+        return ok;
+    }
+
+    private static String fmt(double x) {
+        return MessageNumbers.plain(x, DIGITS);
+    }
+}

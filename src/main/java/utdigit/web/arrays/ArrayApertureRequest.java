@@ -1,0 +1,86 @@
+package utdigit.web.arrays;
+
+import io.swagger.v3.oas.annotations.media.Schema;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotNull;
+import utdigit.core.materials.WaveMode;
+import utdigit.web.common.VelocityFields;
+
+/** POST /api/array-apertures. */
+@Schema(name = "ArrayApertureRequest", description = "A linear array's frequency, pitch and active aperture, and "
+        + "the velocity of the medium where the beam is formed and steered: the part for a contact array; for an "
+        + "array on a wedge, the wedge's velocity with the steering angles in the wedge. Give the velocity once: "
+        + "velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + temperature_c for water). Each length "
+        + "once: _mm or _in. The active aperture as active_elements (n x pitch) or active_aperture, not both.")
+public record ArrayApertureRequest(
+        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", format = "double", example = "5",
+                exclusiveMinimumValue = 0, maximum = "1000")
+        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        Double frequencyMhz,
+
+        @Schema(description = "Sound velocity of the medium where the beam is steered, m/s (100 to 20000)",
+                format = "double", example = "5920", minimum = "100", maximum = "20000")
+        @DecimalMin("100") @DecimalMax("20000")
+        Double velocityMPerS,
+
+        @Schema(description = "Sound velocity, in/us (equivalent of 100 to 20000 m/s)", format = "double",
+                example = "0.2331", exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double velocityInPerUs,
+
+        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
+        String material,
+
+        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
+        WaveMode waveMode,
+
+        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
+                minimum = "0", maximum = "95")
+        @DecimalMin("0") @DecimalMax("95")
+        Double temperatureC,
+
+        @Schema(description = "Element pitch, centre to centre, mm (> 0, <= 100000); required as _mm or _in",
+                format = "double", example = "0.6", exclusiveMinimumValue = 0, maximum = "100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        Double elementPitchMm,
+
+        @Schema(description = "Element pitch, in (> 0, at most 100 m)", format = "double", example = "0.024",
+                exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double elementPitchIn,
+
+        @Schema(description = "Elements fired together (integer 1 to 65536): the active aperture is active_elements x "
+                + "element_pitch", format = "int32", example = "16", minimum = "1", maximum = "65536")
+        @Min(1) @Max(65536)
+        Integer activeElements,
+
+        @Schema(description = "Active aperture length in the steering plane, mm (> 0, <= 100000; not below one "
+                + "pitch); instead of active_elements", format = "double", example = "9.6", exclusiveMinimumValue = 0,
+                maximum = "100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        Double activeApertureMm,
+
+        @Schema(description = "Active aperture length, in (> 0, at most 100 m)", format = "double", example = "0.378",
+                exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double activeApertureIn,
+
+        @Schema(description = "Element length in the passive plane (the array's width), mm (> 0, <= 100000); gives "
+                + "the passive-plane near field and beam spread", format = "double", example = "10",
+                exclusiveMinimumValue = 0, maximum = "100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        Double elementLengthMm,
+
+        @Schema(description = "Element length in the passive plane, in (> 0, at most 100 m)", format = "double",
+                example = "0.394", exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double elementLengthIn,
+
+        @Schema(description = "Largest steering angle used, either side of the aperture's normal, deg (0 to below "
+                + "90); default 0", format = "double", example = "45", minimum = "0", exclusiveMaximumValue = 90)
+        @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
+        Double maxSteeringAngleDeg) implements VelocityFields {
+}

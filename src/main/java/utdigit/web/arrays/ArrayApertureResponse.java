@@ -1,0 +1,53 @@
+package utdigit.web.arrays;
+
+import io.swagger.v3.oas.annotations.media.Schema;
+import java.util.List;
+import java.util.Optional;
+import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ResultNotes.WarningView;
+import utdigit.web.common.VelocitySourceView;
+
+/** The answer of POST /api/array-apertures. */
+@Schema(name = "ArrayAperture", description = "Near field and beam spread of a linear array's rectangular active "
+        + "aperture in the steering plane (and of the element length in the passive plane), and the element pitch "
+        + "against grating lobes up to the largest steering angle. Fields whose optional inputs were not given are "
+        + "omitted; a value that cannot exist is null with a warning.")
+record ArrayApertureResponse(
+        @Schema(description = "Wavelength in the medium of the steering, v / f, mm", format = "double",
+                example = "1.184")
+        double wavelengthMm,
+        @Schema(description = "Active aperture L used: active_elements x element_pitch, or as given, mm",
+                format = "double", example = "9.6")
+        Double activeApertureMm,
+        @Schema(description = "Steering plane: near field L^2 / (4 lambda), mm", format = "double", example = "19.46")
+        Double nearFieldLengthMm,
+        @Schema(description = "Steering plane, unsteered beam: pulse-echo -6 dB half-angle where (sin x / x)^2 falls "
+                + "to -6 dB, x = pi L sin(theta) / lambda, deg; null when the aperture is too short",
+                format = "double", example = "3.13", types = {"number", "null"})
+        Optional<Double> beamSpread6dbDeg,
+        @Schema(description = "Steering plane, unsteered beam: pulse-echo -20 dB half-angle, deg; null when the "
+                + "aperture is too short", format = "double", example = "5.2", types = {"number", "null"})
+        Optional<Double> beamSpread20dbDeg,
+        @Schema(description = "Steering plane, unsteered beam: first null, sin(theta) = lambda / L, deg; null when "
+                + "the aperture is too short", format = "double", example = "7.09", types = {"number", "null"})
+        Optional<Double> beamSpreadNullDeg,
+        @Schema(description = "Passive plane: near field W^2 / (4 lambda) of the element length W, mm",
+                format = "double", example = "21.1")
+        Double passiveNearFieldLengthMm,
+        @Schema(description = "Passive plane: pulse-echo -6 dB half-angle, deg; null when the element is too short",
+                format = "double", example = "3.0", types = {"number", "null"})
+        Optional<Double> passiveBeamSpread6dbDeg,
+        @Schema(description = "Element pitch over wavelength, p / lambda", format = "double", example = "0.507")
+        double pitchToWavelengthRatio,
+        @Schema(description = "Largest pitch with no grating lobe in the medium up to the largest steering angle, "
+                + "lambda / (1 + sin(theta_max)), mm", format = "double", example = "0.694")
+        double maxGratingLobeFreePitchMm,
+        @Schema(description = "Whether element_pitch is below max_grating_lobe_free_pitch_mm")
+        boolean gratingLobeFree,
+        @Schema(description = "The normalised request (lengths in mm, velocity in m/s, max_steering_angle_deg "
+                + "filled in); itself a valid request that reproduces this answer")
+        ArrayApertureRequest inputs,
+        VelocitySourceView velocitySource,
+        List<WarningView> warnings,
+        List<ReferenceView> references) {
+}

@@ -1,0 +1,73 @@
+package utdigit.web.coverage;
+
+import org.springframework.stereotype.Component;
+import utdigit.core.common.CalculationException;
+import utdigit.core.coverage.ScanCoverageCalculator;
+import utdigit.core.coverage.ScanCoverageInput;
+import utdigit.core.coverage.ScanCoverageResult;
+import utdigit.core.materials.VelocitySource;
+import utdigit.web.common.Calculation;
+import utdigit.web.common.FieldErrors;
+import utdigit.web.common.Mirrors;
+import utdigit.web.common.ResultNotes;
+import utdigit.web.common.VelocitySourceView;
+
+/** Request to core input, core result to answer, for scan coverages. */
+@Component
+class ScanCoverageCalculation implements Calculation<ScanCoverageRequest> {
+    static final String NAME = "scan-coverages";
+
+    @Override
+    public String name() {
+        return NAME;
+    }
+
+    @Override
+    public Class<ScanCoverageRequest> requestType() {
+        return ScanCoverageRequest.class;
+    }
+
+    @Override
+    public ScanCoverageResponse answer(ScanCoverageRequest q) {
+        FieldErrors errors = FieldErrors.create();
+        Double widthMm = Mirrors.lengthMm(errors, "beam_width_6db", q.beamWidth6dbMm(), q.beamWidth6dbIn(), false);
+        Double diameterMm = Mirrors.lengthMm(errors, "element_diameter", q.elementDiameterMm(), q.elementDiameterIn(), false);
+        Double pathMm = Mirrors.lengthMm(errors, "sound_path", q.soundPathMm(), q.soundPathIn(), false);
+        Double incrementMm = Mirrors.lengthMm(errors, "scan_increment", q.scanIncrementMm(), q.scanIncrementIn(), false);
+        Double indexMm = Mirrors.lengthMm(errors, "index_step", q.indexStepMm(), q.indexStepIn(), false);
+        VelocitySource velocity = null;
+        CalculationException velocityImpossible = null;
+        try {
+            velocity = Mirrors.velocity(errors, q, false);
+        } catch (CalculationException e) {
+            velocityImpossible = e;
+        }
+        errors.throwIfAny();
+        if (velocityImpossible != null) {
+            throw velocityImpossible;
+        }
+        Double velocityMPerS = velocity == null ? null : velocity.velocityMPerS();
+        ScanCoverageResult r = ScanCoverageCalculator.compute(new ScanCoverageInput(widthMm, q.frequencyMhz(),
+                velocityMPerS, diameterMm, pathMm, incrementMm, indexMm, q.angularStepDeg(), q.amplitudeToleranceDb()));
+        ScanCoverageRequest inputs = new ScanCoverageRequest(widthMm, null, q.frequencyMhz(), velocityMPerS, null, null,
+                null, null, diameterMm, null, pathMm, null, incrementMm, null, indexMm, null, q.angularStepDeg(),
+                q.amplitudeToleranceDb());
+        return new ScanCoverageResponse(r.beamWidth6dbMm(), r.scanIncrementLossDb(), r.indexStepLossDb(),
+                r.angularStepLossDb(), r.maxStepMm(), r.maxAngularStepDeg(), r.scanIncrementWithinTolerance(),
+                r.indexStepWithinTolerance(), r.angularStepWithinTolerance(), inputs, VelocitySourceView.of(velocity),
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+    }
+
+    @Override
+    public String pointer(String coreField, ScanCoverageRequest q) {
+        return switch (coreField) {
+            case "beam_width_6db" -> Mirrors.lengthPointer(coreField, q.beamWidth6dbIn());
+            case "element_diameter" -> Mirrors.lengthPointer(coreField, q.elementDiameterIn());
+            case "sound_path" -> Mirrors.lengthPointer(coreField, q.soundPathIn());
+            case "scan_increment" -> Mirrors.lengthPointer(coreField, q.scanIncrementIn());
+            case "index_step" -> Mirrors.lengthPointer(coreField, q.indexStepIn());
+            case "velocity", "velocity_m_per_s" -> Mirrors.velocityPointer(q);
+            default -> Calculation.super.pointer(coreField, q);
+        };
+    }
+}

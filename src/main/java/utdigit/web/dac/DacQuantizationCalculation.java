@@ -1,0 +1,50 @@
+package utdigit.web.dac;
+
+import org.springframework.stereotype.Component;
+import utdigit.core.dac.DacQuantizationCalculator;
+import utdigit.core.dac.DacQuantizationInput;
+import utdigit.core.dac.DacQuantizationResult;
+import utdigit.web.common.Calculation;
+import utdigit.web.common.ResultNotes;
+
+/** Request to core input, core result to answer, for DAC quantizations. */
+@Component
+class DacQuantizationCalculation implements Calculation<DacQuantizationRequest> {
+    static final String NAME = "dac-quantizations";
+
+    @Override
+    public String name() {
+        return NAME;
+    }
+
+    @Override
+    public Class<DacQuantizationRequest> requestType() {
+        return DacQuantizationRequest.class;
+    }
+
+    @Override
+    public DacQuantizationResponse answer(DacQuantizationRequest q) {
+        DacQuantizationResult r = DacQuantizationCalculator.compute(new DacQuantizationInput(q.bitDepth(),
+                q.dacSpanDb(), q.referenceHeightPercentFsh(), q.amplitudeToleranceDb(), q.digitizedSignal(),
+                q.quantizer(), q.codeMapping()));
+        DacQuantizationRequest inputs = new DacQuantizationRequest(q.bitDepth(), q.dacSpanDb(),
+                q.referenceHeightPercentFsh(), q.amplitudeToleranceDb(), r.digitizedSignal(), r.quantizer(),
+                r.codeMapping());
+        return new DacQuantizationResponse(r.lsbPercentFsh(), r.lowestReferenceHeightPercentFsh(),
+                r.uncorrectedErrorUnderDb(), r.analogTcgErrorUnderDb(), r.digitalTcgLsbPercentFsh(),
+                r.digitalTcgErrorUnderDb(), r.minimumHeightPercentFsh(), r.maxUncorrectedSpanDb(),
+                r.uncorrectedWithinTolerance(), r.analogTcgWithinTolerance(), r.digitalTcgWithinTolerance(), inputs,
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+    }
+
+    /** The quantization core names the heights it was given; here they are the reference height. */
+    @Override
+    public String pointer(String coreField, DacQuantizationRequest q) {
+        return switch (coreField) {
+            case "signal_height_percent_fsh", "evaluation_level_db" -> Calculation.super.pointer(
+                    coreField.equals("evaluation_level_db") ? "dac_span_db" : "reference_height_percent_fsh", q);
+            case "digital_gain_db" -> Calculation.super.pointer("dac_span_db", q);
+            default -> Calculation.super.pointer(coreField, q);
+        };
+    }
+}
