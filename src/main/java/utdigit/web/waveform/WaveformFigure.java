@@ -223,13 +223,13 @@ final class WaveformFigure {
         plot.setRenderer(renderer);
         Color edge6 = new Color(0x2a, 0x8a, 0x2a);
         Color edge20 = new Color(0x80, 0x80, 0x80);
-        marker(plot, a.path("lower_frequency_mhz"), "fl -6 dB " + num(a.path("lower_frequency_mhz")), edge6, false);
-        marker(plot, a.path("upper_frequency_mhz"), "fu -6 dB " + num(a.path("upper_frequency_mhz")), edge6, false);
-        marker(plot, a.path("lower_frequency_20db_mhz"), "-20 dB " + num(a.path("lower_frequency_20db_mhz")), edge20, true);
-        marker(plot, a.path("upper_frequency_20db_mhz"), "-20 dB " + num(a.path("upper_frequency_20db_mhz")), edge20, true);
+        marker(plot, a.path("lower_frequency_mhz"), "fl -6 dB " + num(a.path("lower_frequency_mhz")), edge6, false, true);
+        marker(plot, a.path("upper_frequency_mhz"), "fu -6 dB " + num(a.path("upper_frequency_mhz")), edge6, false, false);
+        marker(plot, a.path("lower_frequency_20db_mhz"), "-20 dB " + num(a.path("lower_frequency_20db_mhz")), edge20, true, true);
+        marker(plot, a.path("upper_frequency_20db_mhz"), "-20 dB " + num(a.path("upper_frequency_20db_mhz")), edge20, true, false);
         if (a.path("nyquist_frequency_mhz").isNumber()) {
             marker(plot, a.path("nyquist_frequency_mhz"), "target Nyquist " + num(a.path("nyquist_frequency_mhz")) + " MHz",
-                    new Color(0xc0, 0x10, 0x20), false);
+                    new Color(0xc0, 0x10, 0x20), false, false);
         }
         ValueMarker six = new ValueMarker(-6.0, edge6, new BasicStroke(0.8f));
         plot.addRangeMarker(six);
@@ -238,7 +238,8 @@ final class WaveformFigure {
         return chart;
     }
 
-    private static void marker(XYPlot plot, JsonNode value, String label, Color color, boolean low) {
+    /** A vertical line at {@code value} labelled at its top or bottom ({@code low}), to its left or right. */
+    private static void marker(XYPlot plot, JsonNode value, String label, Color color, boolean low, boolean left) {
         if (!value.isNumber()) {
             return;
         }
@@ -247,8 +248,13 @@ final class WaveformFigure {
         m.setLabelFont(new Font(Font.SANS_SERIF, Font.PLAIN, 11));
         m.setLabelPaint(color);
         m.setLabelBackgroundColor(new Color(255, 255, 255, 220));
-        m.setLabelAnchor(low ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT);
-        m.setLabelTextAnchor(low ? TextAnchor.BOTTOM_LEFT : TextAnchor.TOP_LEFT);
+        if (left) {
+            m.setLabelAnchor(low ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.TOP_LEFT);
+            m.setLabelTextAnchor(low ? TextAnchor.BOTTOM_RIGHT : TextAnchor.TOP_RIGHT);
+        } else {
+            m.setLabelAnchor(low ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.TOP_RIGHT);
+            m.setLabelTextAnchor(low ? TextAnchor.BOTTOM_LEFT : TextAnchor.TOP_LEFT);
+        }
         plot.addDomainMarker(m);
     }
 
