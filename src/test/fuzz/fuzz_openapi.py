@@ -19,7 +19,9 @@ itself, the smallest positive double and 1e-300 where a range starts above 0, th
 below an exclusive maximum). Hostile requests then take valid ones and put, at one field or
 anywhere in a stamped document sent to /api/stamp-verifications: numbers beyond double range or
 precision (1e400, -1e400, 1e-400, a 1000-digit integer, 2^53 + 1) and strings with a lone UTF-16
-surrogate; each must be refused with a 4xx problem, never a 5xx.
+surrogate; each must be refused with a 4xx problem, never a 5xx. And answered requests with every
+frequency scaled by 1e-300 (the same ratios at the bottom of the ranges): any answer but a 5xx, in
+time.
 Prints "fuzz: N passed, M failed" and exits non-zero on any failure. 127.0.0.1 only.
 
 Usage: fuzz_openapi.py [--base http://127.0.0.1:8080] [--requests 2000] [--hostile 400] [--seed 20261201]
@@ -339,7 +341,23 @@ def run_hostile(args, doc, operations, answered, hostile):
         raise SystemExit("no request was answered 200: nothing to build hostile requests from")
     for i in range(args.hostile):
         path, body, text = seeds[i % len(seeds)]
-        kind = rng.choice(["number field", "string field", "document number", "document string"])
+        kind = rng.choice(["number field", "string field", "document number", "document string", "scaled"])
+        if kind == "scaled":
+            # every frequency of an answered request times 1e-300: the same ratios (samples per period,
+            # bandwidth) at the bottom of the ranges, where a pulse model's envelope constant underflows
+            # to 0 and a search without a bound never ends; any answer but a 5xx, in time
+            bad = json.loads(json.dumps(body))
+            scaled = 0
+            for container in all_containers(bad, []):
+                if isinstance(container, dict):
+                    for key, value in container.items():
+                        if key.endswith(("_mhz", "_hz")) and isinstance(value, (int, float)) \
+                                and not isinstance(value, bool):
+                            container[key] = value * 1e-300
+                            scaled += 1
+            if scaled:
+                hostile(path, bad, json.dumps(bad), "frequencies scaled by 1e-300", False)
+            continue
         if kind in ("number field", "string field"):
             bad = json.loads(json.dumps(body))
             wanted = (lambda v: isinstance(v, (int, float)) and not isinstance(v, bool)) if kind == "number field" \
