@@ -232,8 +232,8 @@ class AnswerSchemaTest extends ApiTest {
             }
             String name = method + " " + concrete;
             if (method.equals("POST")) {
-                tests.add(problem(name + " not an object", method, concrete, 400,
-                        () -> json().body("[1]").post(concrete)));
+                tests.add(problem(name + " a string body", method, concrete, 400,
+                        () -> json().body("\"x\"").post(concrete)));
                 tests.add(problem(name + " unknown field", method, concrete, 400,
                         () -> json().body("{\"no_such_field_at_all\": 1}").post(concrete)));
                 tests.add(problem(name + " text/plain body", method, concrete, 415,
