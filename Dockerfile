@@ -4,7 +4,7 @@
 #
 # Start-up: the jar is extracted (Spring Boot's jarmode tools) and a class data sharing (CDS)
 # archive is written by a training run that starts the application context and exits; the
-# service then starts from the archive (README "Performance": time to ready, plain and with CDS).
+# service then starts from the archive (src/docs/performance.md: time to ready, plain and with CDS).
 # Spring AOT is not used: it fixes at build time which beans exist, and this service decides some
 # of them at run time from its configuration (JWT authentication, operator profile directory).
 

@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # Runs the JMH benchmarks of the core, the sheet validation and the stamp path (src/jmh/java) and
-# prints the README table: benchmark, median, target, met?
+# prints the table of src/docs/performance.md: benchmark, median, target, met?
 #
 #   src/bench/jmh.sh                      # the whole suite, about 4 minutes on 2 cores
 #   src/bench/jmh.sh 'ClosedForm.*'       # a subset (JMH regular expression)

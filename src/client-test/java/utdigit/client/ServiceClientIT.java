@@ -5,17 +5,11 @@ import static org.assertj.core.api.Assertions.within;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import java.io.BufferedReader;
-import java.io.InputStreamReader;
-import java.net.URI;
-import java.net.http.HttpRequest;
-import java.net.http.HttpResponse;
-import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
 import java.util.List;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import utdigit.client.api.AcquisitionApi;
+import utdigit.client.api.BatchesApi;
 import utdigit.client.api.MaterialsApi;
 import utdigit.client.api.PulseAndBeamApi;
 import utdigit.client.api.QuantizationApi;
@@ -27,9 +21,9 @@ import utdigit.client.api.ThicknessApi;
 import utdigit.client.api.TimeOfFlightApi;
 import utdigit.client.model.AcquisitionBudget;
 import utdigit.client.model.AcquisitionBudgetRequest;
-import utdigit.client.model.BatchRow;
 import utdigit.client.model.Material;
 import utdigit.client.model.PulseParameters;
+import utdigit.client.model.PulseParametersBatchRow;
 import utdigit.client.model.PulseParametersRequest;
 import utdigit.client.model.QuantizationAssessment;
 import utdigit.client.model.QuantizationAssessmentRequest;
@@ -182,26 +176,15 @@ class ServiceClientIT {
     }
 
     @Test
-    void batchOfPulseParameters() throws Exception {
-        // The document describes the batch answer but not its body (the operation reads the raw
-        // stream), so the request is sent with the client's HttpClient; the rows are read into the
-        // generated BatchRow model.
-        ObjectMapper mapper = client.getObjectMapper();
-        String body = mapper.writeValueAsString(pulseRequest()) + "\n" + "{\"frequency_mhz\": -5}\n";
-        HttpRequest request = HttpRequest.newBuilder(URI.create(client.getBaseUri() + "/api/pulse-parameters/batch"))
-                .header("Content-Type", "application/x-ndjson").header("Accept", "application/x-ndjson")
-                .POST(HttpRequest.BodyPublishers.ofString(body)).build();
-        HttpResponse<java.io.InputStream> response = client.getHttpClient()
-                .send(request, HttpResponse.BodyHandlers.ofInputStream());
-        assertThat(response.statusCode()).isEqualTo(200);
-        List<BatchRow> rows = new ArrayList<>();
-        try (BufferedReader lines = new BufferedReader(new InputStreamReader(response.body(), StandardCharsets.UTF_8))) {
-            for (String line = lines.readLine(); line != null; line = lines.readLine()) {
-                rows.add(mapper.readValue(line, BatchRow.class));
-            }
-        }
-        assertThat(rows).extracting(BatchRow::getRow).containsExactly(1L, 2L);
-        assertThat(rows).extracting(BatchRow::getStatus).containsExactly("OK", "INVALID");
+    void batchOfPulseParameters() throws ApiException {
+        // Each calculation's batch is its own operation with typed rows: a JSON array in, a JSON array out.
+        List<PulseParametersBatchRow> rows = new BatchesApi(client).postPulseParametersBatch(
+                List.of(pulseRequest(), new PulseParametersRequest().frequencyMhz(5.0)));
+        assertThat(rows).extracting(PulseParametersBatchRow::getRow).containsExactly(1L, 2L);
+        assertThat(rows).extracting(PulseParametersBatchRow::getStatus)
+                .containsExactly(PulseParametersBatchRow.StatusEnum.OK, PulseParametersBatchRow.StatusEnum.INVALID);
+        assertThat(rows.get(0).getResult().getPeriodUs()).isCloseTo(0.2, within(1e-15));
+        assertThat(rows.get(1).getProblem().getStatus()).isEqualTo(400);
     }
 
     private static PulseParametersRequest pulseRequest() {

@@ -16,7 +16,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.function.Function;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.DynamicTest;
@@ -194,28 +193,40 @@ class AnswerSchemaTest extends ApiTest {
         };
     }
 
-    /** Answers that hold nulls: a liquid's shear velocity, a signature nobody can check, no finite value. */
+    /**
+     * Answers that hold nulls (each checked to hold its null, so the check cannot pass vacuously): a
+     * liquid's shear velocity, a signature nobody can check, a metric with no finite value in a
+     * sheet's values and in a single answer.
+     */
     @TestFactory
     Stream<DynamicTest> answersWithNullsMatchTheirSchema() throws IOException {
         String pulse = Files.readString(ExamplesTest.DIR.resolve(ExamplesTest.STAMPED_EXAMPLE + ".answer.json"));
-        Map<String, Function<Void, Response>> requests = new LinkedHashMap<>();
-        requests.put("GET /api/materials/water", v -> given().accept("application/json").get("/api/materials/water"));
-        requests.put("GET /api/materials", v -> given().accept("application/json").get("/api/materials"));
-        // this service has no stamp key in tests: signature_valid is null
-        requests.put("POST /api/stamp-verifications", v -> json().body("{\"document\":" + pulse + "}")
-                .post("/api/stamp-verifications"));
-        // a sheet whose rules cannot all be evaluated: a finding's actual null, missing metrics
-        requests.put("POST /api/technique-sheet-validations", v -> json().body("""
-                {"sheet_id": "NULLS-1", "technique": "PULSE_ECHO", "profile_id": "common-practice",
-                 "probe": {"frequency_mhz": 5}, "digitization": {"sampling_frequency_mhz": 100}}""")
-                .post("/api/technique-sheet-validations"));
-        // a tolerance of the smallest positive double: numbers with no finite value are written as null
-        requests.put("POST /api/quantization-assessments", v -> json().body("""
-                {"bit_depth": 1, "signal_amplitude_percent_fsh": 1e-300}""").post("/api/quantization-assessments"));
-        List<DynamicTest> tests = new ArrayList<>();
-        requests.forEach((call, request) -> tests.add(DynamicTest.dynamicTest(call, () ->
-                assertMatches(call.split(" ")[0], call.split(" ")[1], request.apply(null), -1))));
-        return tests.stream();
+        record Edge(String method, String path, String nullAt, java.util.function.Supplier<Response> call) {}
+        // a tolerance of the smallest positive double: the minimum height for it has no finite value (null)
+        String sheet = """
+                {"sheet_id": "NULLS-1", "technique": "PULSE_ECHO",
+                 "probe": {"frequency_mhz": 5, "bandwidth_percent": 60},
+                 "digitization": {"sampling_frequency_mhz": 100, "bit_depth": 8},
+                 "evaluation": {"amplitude_tolerance_db": 4.9e-324, "reference_height_percent_fsh": 80,
+                                "evaluation_level_db": -14}}""";
+        List<Edge> edges = List.of(
+                new Edge("GET", "/api/materials/water", "/shear_m_per_s",
+                        () -> given().accept("application/json").get("/api/materials/water")),
+                // this service has no stamp key in tests: signature_valid is null
+                new Edge("POST", "/api/stamp-verifications", "/signature_valid",
+                        () -> json().body("{\"document\":" + pulse + "}").post("/api/stamp-verifications")),
+                new Edge("POST", "/api/technique-sheet-validations", "/values/minimum_height_percent_fsh",
+                        () -> json().body(sheet).post("/api/technique-sheet-validations")),
+                new Edge("POST", "/api/quantization-assessments", "/minimum_height_percent_fsh",
+                        () -> json().body("{\"bit_depth\": 8, \"amplitude_tolerance_db\": 4.9e-324}")
+                                .post("/api/quantization-assessments")));
+        return edges.stream().map(edge -> DynamicTest.dynamicTest(edge.method() + " " + edge.path() + " " + edge.nullAt(),
+                () -> {
+                    Response r = edge.call().get();
+                    assertThat(MAPPER.readTree(r.asString()).at(edge.nullAt()).isNull())
+                            .as("%s holds null at %s: %s", edge.path(), edge.nullAt(), r.asString()).isTrue();
+                    assertMatches(edge.method(), edge.path(), r, 200);
+                }));
     }
 
     // ---- problems ------------------------------------------------------------------------------
@@ -232,8 +243,8 @@ class AnswerSchemaTest extends ApiTest {
             }
             String name = method + " " + concrete;
             if (method.equals("POST")) {
-                tests.add(problem(name + " not an object", method, concrete, 400,
-                        () -> json().body("[1]").post(concrete)));
+                tests.add(problem(name + " a string body", method, concrete, 400,
+                        () -> json().body("\"x\"").post(concrete)));
                 tests.add(problem(name + " unknown field", method, concrete, 400,
                         () -> json().body("{\"no_such_field_at_all\": 1}").post(concrete)));
                 tests.add(problem(name + " text/plain body", method, concrete, 415,

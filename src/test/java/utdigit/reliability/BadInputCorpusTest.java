@@ -58,8 +58,8 @@ class BadInputCorpusTest extends ApiTest {
         Set<String> withoutBase = new TreeSet<>();
         for (var path : doc.path("paths").properties()) {
             JsonNode post = path.getValue().path("post");
-            if (path.getKey().contains("{")) {
-                continue;
+            if (path.getKey().contains("{") || path.getKey().endsWith("/batch")) {
+                continue; // batches: their own cases below, one per calculation
             }
             if (post.isMissingNode()) {
                 // GET endpoints: wrong methods and bad ids only

@@ -1,11 +1,6 @@
 package utdigit.web.batch;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.Parameter;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
-import io.swagger.v3.oas.annotations.responses.ApiResponse;
-import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.servlet.http.HttpServletRequest;
 import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
@@ -24,7 +19,6 @@ import utdigit.web.common.PayloadTooLargeProblem;
 
 @RestController
 @EnableConfigurationProperties(BatchLimits.class)
-@Tag(name = "Batches", description = "Bulk recalculation: one answer row per input row, streamed in order")
 class BatchController {
     static final String NDJSON = "application/x-ndjson";
     private static final List<MediaType> ACCEPTED_BODIES = List.of(MediaType.APPLICATION_JSON,
@@ -36,30 +30,13 @@ class BatchController {
         this.processor = processor;
     }
 
-    @PostMapping(path = "/api/{calculation:pulse-parameters|sampling-assessments|quantization-assessments"
-            + "|time-of-flight-resolutions|thickness-resolutions|acquisition-budgets|technique-sheet-validations"
-            + "|waveform-analyses|scan-coverages|array-apertures|tofd-setups|dac-quantizations}/batch")
-    @Operation(summary = "Recalculate many requests of one calculation",
-            description = """
-                    The body is a JSON array of request objects (application/json), one object per line \
-                    (application/x-ndjson), or CSV (text/csv: a header row of field names, dotted for nested sections \
-                    such as probe.frequency_mhz; UTF-8 with or without BOM; CRLF or LF; quoted fields; an empty \
-                    cell is an absent field). The answer is streamed in the Accept format (application/x-ndjson by \
-                    default, text/csv, or a JSON array): one row out per row in, in order, \
-                    {row (1-based), id (sheet_id when present), status OK or INVALID, result (the single \
-                    endpoint's answer) or problem}. A bad row is INVALID with its problem and never stops the batch. \
-                    A body malformed as a whole (not the format, unknown CSV columns, JSON that is not an array) is a \
-                    400 before any row. A Content-Length over utdigit.batch.max-body-bytes is a 413; a limit reached \
-                    mid-way ends the stream with one row of status LIMIT_REACHED whose first_unprocessed_row says \
-                    where to resume. In a JSON array a syntax error cannot be resynchronised: the stream ends with an \
-                    INVALID row saying where the body broke (NDJSON and CSV rows are independent).""")
-    @ApiResponse(responseCode = "200", description = "The answer rows, streamed",
-            content = {@Content(mediaType = NDJSON, schema = @Schema(implementation = BatchRowDoc.class)),
-                    @Content(mediaType = "text/csv", schema = @Schema(type = "string")),
-                    @Content(mediaType = "application/json",
-                            array = @io.swagger.v3.oas.annotations.media.ArraySchema(schema = @Schema(implementation = BatchRowDoc.class)))})
-    void batch(@Parameter(description = "The calculation, as in its single endpoint's path")
-               @PathVariable String calculation, HttpServletRequest request, HttpServletResponse response)
+    /**
+     * One handler for every calculation's batch: an unknown name is a 404 problem. The document
+     * shows one operation per calculation instead ({@link BatchOperations}), each with its typed rows.
+     */
+    @PostMapping(path = "/api/{calculation}/batch")
+    @Operation(hidden = true)
+    void batch(@PathVariable String calculation, HttpServletRequest request, HttpServletResponse response)
             throws IOException, HttpMediaTypeNotSupportedException, HttpMediaTypeNotAcceptableException {
         BatchProcessor.Format in = bodyFormat(request.getContentType());
         BatchProcessor.Format out = answerFormat(request.getHeader(HttpHeaders.ACCEPT));
@@ -132,16 +109,4 @@ class BatchController {
         }
         throw new HttpMediaTypeNotAcceptableException(ACCEPTED_BODIES);
     }
-
-    /** The shape of one answer row, for the OpenAPI document. */
-    @Schema(name = "BatchRow", description = "One answer row of a batch")
-    record BatchRowDoc(
-            @Schema(description = "1-based number of the input row", format = "int64") long row,
-            @Schema(description = "sheet_id of the input row, when present") String id,
-            @Schema(description = "OK, INVALID or LIMIT_REACHED") String status,
-            @Schema(description = "The single endpoint's answer for the row (status OK)", type = "object") Object result,
-            @Schema(description = "The row's problem (status INVALID or LIMIT_REACHED)",
-                    ref = "#/components/schemas/Problem") Object problem,
-            @Schema(description = "LIMIT_REACHED only: the first row not processed; resume from it", format = "int64")
-            Long firstUnprocessedRow) {}
 }

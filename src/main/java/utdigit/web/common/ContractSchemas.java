@@ -16,10 +16,13 @@ import org.springframework.stereotype.Component;
  * answer: a property written even when null ({@code @JsonInclude(ALWAYS)}, e.g. a liquid's shear
  * velocity, a signature nobody can check) admits null (applied by the model resolver of
  * {@link OpenApiConfiguration}), and every schema with properties says {@code type: object}
- * (without it, any JSON value validates against it).
+ * (without it, any JSON value validates against it), while a JSON tree property admits any JSON
+ * value ({@code {}}).
  */
 @Component
 class ContractSchemas implements OpenApiCustomizer {
+    /** Marks a schema that admits any JSON value (a JSON tree property); removed from the document. */
+    static final String ANY_JSON_VALUE = "x-any-json-value";
 
     /** A property written even when null ({@code @JsonInclude(ALWAYS)}). */
     static boolean writtenWhenNull(Annotation[] annotations) {
@@ -76,6 +79,14 @@ class ContractSchemas implements OpenApiCustomizer {
     @SuppressWarnings({"rawtypes", "unchecked"})
     private static void objectTypes(Schema schema) {
         if (schema == null) {
+            return;
+        }
+        if (schema.getExtensions() != null && schema.getExtensions().remove(ANY_JSON_VALUE) != null) {
+            schema.setType(null);
+            schema.setTypes(null); // any JSON value: {} in OpenAPI 3.1
+            if (schema.getExtensions().isEmpty()) {
+                schema.setExtensions(null);
+            }
             return;
         }
         if (schema.getProperties() != null && !schema.getProperties().isEmpty()) {

@@ -8,10 +8,12 @@ import io.swagger.v3.oas.models.info.License;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
+import tools.jackson.databind.JsonNode;
 
 /**
  * The OpenAPI 3.1 document's header, and the model resolver that names schema properties by the
- * same snake_case rule as the JSON mapper and lets a property written even when null admit null.
+ * same snake_case rule as the JSON mapper, lets a property written even when null admit null, and
+ * documents a JSON tree property (a document to verify, a differing value) as any JSON value.
  */
 @Configuration(proxyBeanMethods = false)
 class OpenApiConfiguration {
@@ -43,11 +45,37 @@ class OpenApiConfiguration {
                 .servers(java.util.List.of(new io.swagger.v3.oas.models.servers.Server().url("/")));
     }
 
+    /** The schema of any JSON value (OpenAPI 3.1: {@code {}}), with the property's description. */
+    private static io.swagger.v3.oas.models.media.Schema<Object> anyJsonValue(java.lang.annotation.Annotation[] annotations) {
+        var any = new io.swagger.v3.oas.models.media.Schema<Object>();
+        any.addExtension(ContractSchemas.ANY_JSON_VALUE, true); // the resolver types it later; the customizer undoes that
+        if (annotations != null) {
+            for (var a : annotations) {
+                if (a instanceof io.swagger.v3.oas.annotations.media.Schema doc && !doc.description().isEmpty()) {
+                    any.description(doc.description());
+                }
+            }
+        }
+        return any;
+    }
+
     @Bean
     ModelResolver contractNamingModelResolver() {
         var mapper = ObjectMapperFactory.createJson31();
         mapper.setPropertyNamingStrategy(new ContractNaming.Jackson2());
         return new ModelResolver(mapper) {
+            @Override
+            @SuppressWarnings("rawtypes")
+            public io.swagger.v3.oas.models.media.Schema resolve(io.swagger.v3.core.converter.AnnotatedType type,
+                    io.swagger.v3.core.converter.ModelConverterContext context,
+                    java.util.Iterator<io.swagger.v3.core.converter.ModelConverter> chain) {
+                if (type.getType() != null
+                        && JsonNode.class.isAssignableFrom(_mapper.constructType(type.getType()).getRawClass())) {
+                    return anyJsonValue(type.getCtxAnnotations()); // a JSON tree: any JSON value, not the tree's bean
+                }
+                return super.resolve(type, context, chain);
+            }
+
             @Override
             protected boolean applyBeanValidatorAnnotations(com.fasterxml.jackson.databind.introspect.BeanPropertyDefinition
                     definition, io.swagger.v3.oas.models.media.Schema property, java.lang.annotation.Annotation[] annotations,

@@ -22,7 +22,7 @@ import org.springframework.stereotype.Component;
  * operation, and the Stamp schema on every calculation answer (its schema has "references").
  */
 @Component
-class OpenApiProblems implements OpenApiCustomizer {
+public class OpenApiProblems implements OpenApiCustomizer {
     static final String PROBLEM_JSON = "application/problem+json";
 
     @Override
@@ -63,12 +63,30 @@ class OpenApiProblems implements OpenApiCustomizer {
                     if (op.getValue().getResponses().get(p.getKey()) == null) {
                         op.getValue().getResponses().addApiResponse(p.getKey(), new ApiResponse()
                                 .description(p.getValue())
-                                .content(new Content().addMediaType(PROBLEM_JSON, new MediaType()
-                                        .schema(new Schema<>().$ref("#/components/schemas/Problem")))));
+                                .content(problemContent(p.getKey())));
                     }
                 }
             }
         }
+    }
+
+    /**
+     * The content of a problem answer with this status: the Problem schema, and an example that says
+     * this status, its type and its title (the first problem type of that status).
+     */
+    public static Content problemContent(String status) {
+        MediaType media = new MediaType().schema(new Schema<>().$ref("#/components/schemas/Problem"));
+        for (ProblemType type : ProblemType.values()) {
+            if (String.valueOf(type.status().value()).equals(status)) {
+                Map<String, Object> example = new LinkedHashMap<>();
+                example.put("type", type.type().toString());
+                example.put("title", type.title());
+                example.put("status", type.status().value());
+                media.example(example);
+                break;
+            }
+        }
+        return new Content().addMediaType(PROBLEM_JSON, media);
     }
 
     private static Schema<?> problemSchema() {

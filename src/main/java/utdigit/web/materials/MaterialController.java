@@ -37,7 +37,7 @@ class MaterialController {
             description = "For water, temperature_c (0 to 95 C) gives the velocity by the Marczak (1997) "
                     + "polynomial; 20 C when not given. Unknown id: 404 problem.")
     MaterialView one(
-            @Parameter(description = "Material id, kebab-case", example = "carbon-steel") @PathVariable String id,
+            @Parameter(description = "Material id, kebab-case", example = "water") @PathVariable String id,
             @Parameter(description = "Water only: temperature in C, 0 to 95", example = "20")
             @RequestParam(name = "temperature_c", required = false) Double temperatureC) {
         Material m = MaterialCatalog.find(id).orElseThrow(() -> new NotFoundProblem(

@@ -9,6 +9,7 @@ import java.util.Map;
 import org.springframework.stereotype.Component;
 import org.springframework.web.filter.OncePerRequestFilter;
 import org.springframework.web.servlet.HandlerMapping;
+import utdigit.web.common.CalculationRunner;
 
 /**
  * Counts every request under /api/ once it is answered ({@link ServiceMetrics#REQUESTS}): the
@@ -21,9 +22,11 @@ class RequestCounting extends OncePerRequestFilter {
     private static final String API = "/api/";
 
     private final ServiceMetrics metrics;
+    private final java.util.Set<String> calculations;
 
-    RequestCounting(ServiceMetrics metrics) {
+    RequestCounting(ServiceMetrics metrics, CalculationRunner runner) {
         this.metrics = metrics;
+        this.calculations = java.util.Set.copyOf(runner.names());
     }
 
     @Override
@@ -39,12 +42,12 @@ class RequestCounting extends OncePerRequestFilter {
             chain.doFilter(request, response);
             status = response.getStatus();
         } finally {
-            metrics.request(endpoint(request), request.getMethod(), status);
+            metrics.request(endpoint(request, calculations), request.getMethod(), status);
         }
     }
 
-    /** The matched pattern below /api/, the batch's {calculation} replaced by its value. */
-    static String endpoint(HttpServletRequest request) {
+    /** The matched pattern below /api/, the batch's {calculation} replaced by its value when it is one. */
+    static String endpoint(HttpServletRequest request, java.util.Set<String> calculations) {
         Object pattern = request.getAttribute(HandlerMapping.BEST_MATCHING_PATTERN_ATTRIBUTE);
         if (!(pattern instanceof String p) || !p.startsWith(API)) {
             return UNMATCHED;
@@ -53,10 +56,9 @@ class RequestCounting extends OncePerRequestFilter {
         if (endpoint.startsWith("{calculation")) {
             Object variables = request.getAttribute(HandlerMapping.URI_TEMPLATE_VARIABLES_ATTRIBUTE);
             Object calculation = variables instanceof Map<?, ?> m ? m.get("calculation") : null;
-            if (calculation == null) {
-                return UNMATCHED;
+            if (calculation == null || !calculations.contains(calculation)) {
+                return UNMATCHED; // only the service's own calculation names become labels
             }
-            // The pattern's regular expression admits only the service's own calculation names.
             endpoint = calculation + endpoint.substring(endpoint.indexOf('}') + 1);
         }
         return endpoint;

@@ -12,7 +12,7 @@ import org.springframework.stereotype.Component;
 
 /**
  * Names every operation of the OpenAPI document after its method and path, e.g. {@code
- * postPulseParameters}, {@code getMaterialsById}, {@code postBatchByCalculation}, instead of the
+ * postPulseParameters}, {@code getMaterialsById}, {@code postPulseParametersBatch}, instead of the
  * controller method's name. Those repeat across features (two {@code assess}, two {@code resolve},
  * two {@code list}), and the suffixes that make them unique ({@code assess_1}) move whenever a
  * feature is added, renaming methods of every generated client. A name from the path is unique (one

@@ -65,7 +65,7 @@ class SecurityConfiguration {
 
     /**
      * Spring Security's own observations are off (they wrap every filter of the chain in an
-     * observation: more CPU per request than most calculations, README "Performance"); the
+     * observation: more CPU per request than most calculations, src/docs/performance.md); the
      * service exports no traces, and the actuator's http.server.requests timer stays.
      */
     @Bean

@@ -3,9 +3,6 @@ package utdigit.web.security;
 import io.swagger.v3.oas.models.OpenAPI;
 import io.swagger.v3.oas.models.Operation;
 import io.swagger.v3.oas.models.PathItem;
-import io.swagger.v3.oas.models.media.Content;
-import io.swagger.v3.oas.models.media.MediaType;
-import io.swagger.v3.oas.models.media.Schema;
 import io.swagger.v3.oas.models.responses.ApiResponse;
 import io.swagger.v3.oas.models.security.SecurityRequirement;
 import io.swagger.v3.oas.models.security.SecurityScheme;
@@ -21,7 +18,6 @@ import org.springframework.stereotype.Component;
  */
 @Component
 class SecurityOpenApi implements OpenApiCustomizer {
-    private static final String PROBLEM_JSON = "application/problem+json";
     private final boolean authenticated;
 
     SecurityOpenApi(ObjectProvider<JwtDecoder> decoders) {
@@ -55,8 +51,7 @@ class SecurityOpenApi implements OpenApiCustomizer {
     private static void add(Operation operation, String status, String description) {
         if (operation.getResponses().get(status) == null) {
             operation.getResponses().addApiResponse(status, new ApiResponse().description(description)
-                    .content(new Content().addMediaType(PROBLEM_JSON, new MediaType()
-                            .schema(new Schema<>().$ref("#/components/schemas/Problem")))));
+                    .content(utdigit.web.common.OpenApiProblems.problemContent(status)));
         }
     }
 }

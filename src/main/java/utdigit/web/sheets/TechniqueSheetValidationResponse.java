@@ -1,6 +1,7 @@
 package utdigit.web.sheets;
 
 import com.fasterxml.jackson.annotation.JsonInclude;
+import com.fasterxml.jackson.annotation.JsonProperty;
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Map;
@@ -19,7 +20,8 @@ record TechniqueSheetValidationResponse(
         @Schema(description = "The sheet's identifier, as sent") String sheetId,
         @Schema(description = "The sheet's revision, as sent") String revision,
         @Schema(description = "The profile the sheet was checked against") ProfileRef profile,
-        @Schema(description = "PASS, FAIL or INCOMPLETE") Verdict verdict,
+        @Schema(description = "PASS, FAIL or INCOMPLETE", allowableValues = {"PASS", "FAIL", "INCOMPLETE"})
+        Verdict verdict,
         @Schema(description = "One finding per applicable rule, in the profile's order") List<FindingView> findings,
         @Schema(description = "Every metric computed or given, by name (lengths in mm, velocity in m/s)")
         Map<String, Double> values,
@@ -35,7 +37,7 @@ record TechniqueSheetValidationResponse(
     record ProfileRef(
             @Schema(description = "Profile id", example = "common-practice") String id,
             @Schema(description = "Profile version", example = "1") String version,
-            @Schema(description = "SHA-256 of the profile's canonical content") String sha256,
+            @Schema(description = "SHA-256 of the profile's canonical content") @JsonProperty("sha256") String sha256,
             @Schema(description = "VERIFIED or UNVERIFIED") VerificationStatus verificationStatus) {}
 
     /** The outcome of one rule. */
@@ -52,7 +54,8 @@ record TechniqueSheetValidationResponse(
             @JsonInclude(JsonInclude.Include.ALWAYS) Double limit,
             @Schema(description = "The metric the limit names, when the limit is a metric") String limitMetric,
             @Schema(description = "AT_LEAST, AT_MOST or EQUALS") Comparison comparison,
-            @Schema(description = "PASS, FAIL or NOT_EVALUATED") Verdict verdict,
+            @Schema(description = "PASS, FAIL or NOT_EVALUATED", allowableValues = {"PASS", "FAIL", "NOT_EVALUATED"})
+            Verdict verdict,
             @Schema(description = "Where the requirement comes from") String source,
             @Schema(description = "Metrics the rule needed that the sheet does not give or allow to compute")
             List<String> missing) {}
