@@ -147,13 +147,7 @@ public final class AcquisitionCalculator {
                 ? null : Checks.positive("planned_scan_speed_mm_per_s", in.plannedScanSpeedMmPerS());
 
         // 2. Inputs impossible together (422).
-        double periodUs = 1e6 / prfHz;
-        if (exceeds(gateUs, periodUs)) {
-            throw CalculationException.impossible(String.format(Locale.ROOT,
-                    "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
-                            + " (%s us at %s Hz): the next firing would start before the gate ends",
-                    gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
-        }
+        double periodUs = checkGateWithinPeriod(gateField, gateUs, prfHz);
         double effectiveMhz = clock.effectiveSamplingFrequencyMhz();
         long samples = samplesPerAScan(gateUs, effectiveMhz, gateField, countField);
         int bytesPerSample = bytesPerSample(bitDepth);
@@ -202,8 +196,7 @@ public final class AcquisitionCalculator {
         }
 
         // 4. Scan speed: the PRF is spent on firings, each averaged firing counted.
-        double firingsPerRecordedPosition = (double) firings * averaging; // up to 2^32: exact in a double
-        double maxScanSpeedMmPerS = prfHz * scanIncrementMm / firingsPerRecordedPosition;
+        double maxScanSpeedMmPerS = maxScanSpeedMmPerS(prfHz, scanIncrementMm, firings, averaging);
         references.add(Reference.of("maximum scan speed",
                 "v_max = PRF x scan_increment / (firings per position x averaging): the PRF counts "
                         + "firings, not A-scans (" + COMMON_PRACTICE + ")"));
@@ -254,6 +247,33 @@ public final class AcquisitionCalculator {
     }
 
     /**
+     * The gate must end before the next firing: t_gate <= 1/PRF (within the relative tolerance).
+     *
+     * @param gateField the contract name of the gate as given (gate_length_us or gate_length_mm)
+     * @return the pulse repetition period 10^6/PRF, us
+     * @throws CalculationException IMPOSSIBLE_COMBINATION when the gate is longer than the period
+     */
+    public static double checkGateWithinPeriod(String gateField, double gateUs, double prfHz) {
+        double periodUs = 1e6 / prfHz;
+        if (exceeds(gateUs, periodUs)) {
+            throw CalculationException.impossible(String.format(Locale.ROOT,
+                    "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
+                            + " (%s us at %s Hz): the next firing would start before the gate ends",
+                    gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
+        }
+        return periodUs;
+    }
+
+    /**
+     * Highest scan speed at which every increment still gets all its firings: v_max = PRF x increment
+     * / (firings x averaging); the PRF counts firings, not A-scans. Common practice, no published source.
+     */
+    public static double maxScanSpeedMmPerS(double prfHz, double scanIncrementMm, long firings, int averaging) {
+        double firingsPerRecordedPosition = (double) firings * averaging; // up to 2^32: exact in a double
+        return prfHz * scanIncrementMm / firingsPerRecordedPosition;
+    }
+
+    /**
      * Samples in one A-scan: the gate times the stored rate, rounded up to a whole sample.
      *
      * <p>n = ceil(t_gate fs_eff), t_gate in us, fs_eff = fs/m in MHz, n >= 1. A product within a
@@ -301,7 +321,7 @@ public final class AcquisitionCalculator {
      * Pulse-echo time of a sound path in the part: the wave travels the path there and back.
      * t = 2 L / v, L in mm, v in m/s (1 m/s = 1e-3 mm/us), t in us. (definition)
      */
-    static double pulseEchoTimeUs(double soundPathMm, double velocityMPerS) {
+    public static double pulseEchoTimeUs(double soundPathMm, double velocityMPerS) {
         return 2.0 * soundPathMm / Units.mPerSToMmPerUs(velocityMPerS);
     }
 
@@ -311,7 +331,7 @@ public final class AcquisitionCalculator {
      * Hz with t_rt in us and q >= 1 (q = 1 is the bare physical limit). Common practice, no published
      * source.
      */
-    static double maxPrfWithoutWraparoundHz(double roundTripUs, double decayFactor) {
+    public static double maxPrfWithoutWraparoundHz(double roundTripUs, double decayFactor) {
         return 1e6 / (decayFactor * roundTripUs);
     }
 

@@ -2,6 +2,7 @@ package utdigit.web.sheets;
 
 import io.swagger.v3.oas.annotations.media.Schema;
 import jakarta.validation.Valid;
+import java.util.List;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
@@ -31,10 +32,18 @@ public record TechniqueSheetRequest(
         @Size(max = 50) String revision,
         @Schema(description = "Technique of the sheet")
         @NotNull(message = "is required") SheetTechnique technique,
-        @Schema(description = "Requirement profile to check against (GET /api/requirement-profiles); default "
-                + "common-practice", example = "common-practice")
+        @Schema(description = "One requirement profile to check against (GET /api/requirement-profiles); the "
+                + "single form of profile_ids, not both; default common-practice", example = "common-practice")
         @Size(max = 100) @Pattern(regexp = "[a-z0-9]+(-[a-z0-9]+)*", message = "must be a kebab-case profile id")
         String profileId,
+        @Schema(description = "Requirement profiles to check against, one or more (at most 20, no repeats; e.g. a "
+                + "company procedure and the code it invokes): the findings name their profile and the verdict is "
+                + "the worst. In CSV: the ids in one cell separated by ';'. Not with profile_id; default "
+                + "[common-practice]")
+        @Size(min = 1, max = 20)
+        List<@NotNull(message = "must be a profile id") @Size(max = 100)
+                @Pattern(regexp = "[a-z0-9]+(-[a-z0-9]+)*", message = "must be a kebab-case profile id") String>
+                profileIds,
         @Valid Probe probe,
         @Valid Material material,
         @Valid Digitization digitization,

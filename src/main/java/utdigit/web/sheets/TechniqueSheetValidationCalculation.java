@@ -1,14 +1,19 @@
 package utdigit.web.sheets;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import org.springframework.stereotype.Component;
+import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.rules.Finding;
 import utdigit.core.rules.RequirementProfile;
+import utdigit.core.sheets.Feasibility;
 import utdigit.core.sheets.SheetEvaluator;
 import utdigit.core.sheets.SheetInput;
 import utdigit.core.sheets.SheetResult;
 import utdigit.web.common.Calculation;
+import utdigit.web.common.FieldError;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.InputProblem;
 import utdigit.web.common.Mirrors;
@@ -89,9 +94,8 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
 
     @Override
     public TechniqueSheetValidationResponse answer(TechniqueSheetRequest q) {
-        String profileId = q.profileId() == null ? DEFAULT_PROFILE : q.profileId();
-        RequirementProfile profile = profiles.find(profileId).orElseThrow(() -> InputProblem.invalid("/profile_id",
-                "unknown requirement profile '" + profileId + "'; see GET /api/requirement-profiles"));
+        List<RequirementProfile> chosen = profiles(q);
+        List<String> profileIds = chosen.stream().map(RequirementProfile::id).toList();
 
         FieldErrors errors = FieldErrors.create();
         TechniqueSheetRequest.Probe p = q.probe() == null ? new TechniqueSheetRequest.Probe(null, null, null, null, null)
@@ -105,7 +109,17 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         FieldErrors probeErrors = errors.section("probe");
         Double diameterMm = Mirrors.lengthMm(probeErrors, "element_diameter", p.elementDiameterMm(), p.elementDiameterIn(), false);
         FieldErrors materialErrors = errors.section("material");
-        VelocitySource velocity = Mirrors.velocity(materialErrors, m, false);
+        List<Finding> inputFailures = new ArrayList<>();
+        VelocitySource velocity;
+        try {
+            velocity = Mirrors.velocity(materialErrors, m, false);
+        } catch (CalculationException e) {
+            if (!Feasibility.isFeasibilityFailure(e)) {
+                throw e;
+            }
+            inputFailures.add(Feasibility.failure("material", e));
+            velocity = null;
+        }
         Double thicknessMm = Mirrors.lengthMm(materialErrors, "thickness", m.thicknessMm(), m.thicknessIn(), false);
         if (m.velocityUncertaintyMPerS() != null && m.velocityUncertaintyPercent() != null) {
             String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s or velocity_uncertainty_percent";
@@ -124,7 +138,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         Double pcsMm = Mirrors.lengthMm(tofdErrors, "probe_centre_separation", t.probeCentreSeparationMm(),
                 t.probeCentreSeparationIn(), false);
         Double depthMm = Mirrors.lengthMm(tofdErrors, "depth_of_interest", t.depthOfInterestMm(), t.depthOfInterestIn(), false);
-        if (velocity == null && (gateMm != null || soundPathMm != null)) {
+        if (velocity == null && inputFailures.isEmpty() && (gateMm != null || soundPathMm != null)) {
             materialErrors.add("velocity_m_per_s", "a gate or sound path in mm needs the part's velocity: give "
                     + "velocity_m_per_s, velocity_in_per_us or material");
         }
@@ -149,12 +163,17 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 e == null ? null : new SheetInput.Evaluation(e.referenceHeightPercentFsh(), e.evaluationLevelDb(),
                         e.amplitudeToleranceDb(), e.thicknessToleranceMm()));
 
-        SheetResult r = SheetEvaluator.evaluate(sheet, profile);
+        SheetResult r = SheetEvaluator.evaluate(sheet, chosen, inputFailures);
 
-        TechniqueSheetRequest inputs = new TechniqueSheetRequest(q.sheetId(), q.revision(), q.technique(), profileId,
+        TechniqueSheetRequest inputs = new TechniqueSheetRequest(q.sheetId(), q.revision(), q.technique(), null,
+                profileIds,
                 q.probe() == null ? null : new TechniqueSheetRequest.Probe(p.frequencyMhz(), p.bandwidthPercent(),
                         diameterMm, null, p.elementCount()),
-                q.material() == null ? null : new TechniqueSheetRequest.Material(null, null, null, c, null,
+                q.material() == null ? null : inputFailures.isEmpty() ? new TechniqueSheetRequest.Material(null, null,
+                        null, c, null,
+                        m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm, null,
+                        m.refractedAngleDeg())
+                        : new TechniqueSheetRequest.Material(m.material(), m.waveMode(), m.temperatureC(), null, null,
                         m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm, null,
                         m.refractedAngleDeg()),
                 d,
@@ -166,16 +185,51 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 tfm, e);
 
         return new TechniqueSheetValidationResponse(q.sheetId(), q.revision(),
-                new TechniqueSheetValidationResponse.ProfileRef(profile.id(), profile.version(), profile.sha256(),
-                        profile.verificationStatus()),
-                r.verdict(), r.findings().stream().map(TechniqueSheetValidationCalculation::view).toList(),
+                r.profiles().stream().map(pv -> new TechniqueSheetValidationResponse.ProfileRef(pv.profile().id(),
+                        pv.profile().version(), pv.profile().sha256(), pv.profile().verificationStatus(),
+                        pv.verdict())).toList(),
+                r.verdict(), r.findings().stream().map(f -> view(f, q)).toList(),
                 r.values(), r.cautions(), inputs, VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 
-    private static TechniqueSheetValidationResponse.FindingView view(Finding f) {
-        return new TechniqueSheetValidationResponse.FindingView(f.ruleId(), f.title(), f.metric(), f.actual(),
-                f.limit(), f.limitMetric(), f.comparison(), f.verdict(), f.source(),
-                f.missing().isEmpty() ? null : f.missing());
+    /** The profiles asked for: profile_id or profile_ids (not both), default common-practice; each known once. */
+    private List<RequirementProfile> profiles(TechniqueSheetRequest q) {
+        if (q.profileId() != null && q.profileIds() != null) {
+            String detail = "give the profiles once: profile_id (one) or profile_ids (one or more)";
+            throw InputProblem.invalid(List.of(new FieldError("/profile_id", detail),
+                    new FieldError("/profile_ids", detail)));
+        }
+        if (q.profileIds() == null) {
+            String id = q.profileId() == null ? DEFAULT_PROFILE : q.profileId();
+            return List.of(profiles.find(id).orElseThrow(() -> InputProblem.invalid("/profile_id",
+                    "unknown requirement profile '" + id + "'; see GET /api/requirement-profiles")));
+        }
+        List<FieldError> errors = new ArrayList<>();
+        List<RequirementProfile> out = new ArrayList<>();
+        for (int i = 0; i < q.profileIds().size(); i++) {
+            String id = q.profileIds().get(i);
+            String pointer = "/profile_ids/" + i;
+            if (q.profileIds().subList(0, i).contains(id)) {
+                errors.add(new FieldError(pointer, "profile '" + id + "' is named twice"));
+                continue;
+            }
+            profiles.find(id).ifPresentOrElse(out::add, () -> errors.add(new FieldError(pointer,
+                    "unknown requirement profile '" + id + "'; see GET /api/requirement-profiles")));
+        }
+        if (!errors.isEmpty()) {
+            throw InputProblem.invalid(errors);
+        }
+        return out;
+    }
+
+    private TechniqueSheetValidationResponse.FindingView view(Finding f, TechniqueSheetRequest q) {
+        return new TechniqueSheetValidationResponse.FindingView(f.profileId(), f.ruleId(), f.title(), f.metric(),
+                f.actual(), f.limit(), f.limitMetric(), f.comparison(), f.verdict(), f.source(),
+                f.missing().isEmpty() ? null : f.missing(),
+                f.missingInputs().isEmpty() ? null : f.missingInputs(),
+                f.reason(),
+                f.settings().isEmpty() ? null : f.settings().stream().map(name -> pointer(name, q)).distinct()
+                        .toList());
     }
 }
