@@ -12,6 +12,7 @@ import utdigit.core.acquisition.AcquisitionInput;
 import utdigit.core.acquisition.AcquisitionResult;
 import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldError;
 import utdigit.web.common.FieldErrors;
@@ -137,7 +138,15 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                 r.fileSizeMegabytes(), r.maxScanSpeedMmPerS(), r.dataRateMegabytesPerS(),
                 r.maxPrfWithoutWraparoundHz(), r.maxScanLengthPerFileMm(), r.effectiveSamplingFrequencyMhz(),
                 r.gateLengthUsedUs(), r.pulseRepetitionPeriodUs(), r.dataRateScanSpeedMmPerS(),
-                r.maxRoundTripUsedUs(), inputs, VelocitySourceView.of(velocity),
+                r.maxRoundTripUsedUs(), ToleranceCheck.builder()
+                        .atMost("planned_scan_speed_mm_per_s", q.plannedScanSpeedMmPerS(), "max_scan_speed_mm_per_s",
+                                r.maxScanSpeedMmPerS())
+                        .atMost("pulse_repetition_frequency_hz", q.pulseRepetitionFrequencyHz(),
+                                "max_prf_without_wraparound_hz", r.maxPrfWithoutWraparoundHz())
+                        .atMost("file_size_megabytes", r.fileSizeMegabytes(), "file_size_limit_megabytes",
+                                q.fileSizeLimitMegabytes())
+                        .build(),
+                inputs, VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 

@@ -90,6 +90,8 @@ final class CsvSink implements RowSink {
                 } else if (item.has("rule_id")) {
                     parts.add((item.has("profile_id") ? item.get("profile_id").asString() + "/" : "")
                             + item.get("rule_id").asString() + "=" + item.path("verdict").asString());
+                } else if (item.has("figure") && item.has("within")) {
+                    parts.add(item.get("figure").asString() + "=" + (item.get("within").asBoolean() ? "WITHIN" : "OUTSIDE"));
                 } else if (item.has("id") && item.has("verdict")) {
                     parts.add(item.get("id").asString() + "=" + item.get("verdict").asString());
                 } else {

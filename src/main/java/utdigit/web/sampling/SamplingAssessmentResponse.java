@@ -4,6 +4,7 @@ import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.ResultNotes.WarningView;
 import utdigit.web.common.VelocitySourceView;
 
@@ -97,6 +98,11 @@ record SamplingAssessmentResponse(
                 + "w_lat = 0.8845 lambda z/A, dB; only with tfm_lateral_grid_spacing, tfm_aperture and tfm_depth",
                 format = "double", example = "0.35")
         Double tfmLateralAmplitudeLossDb,
+
+        @Schema(description = "Each figure compared with a tolerance or requirement of the request: "
+                + "sine_amplitude_loss_db, pulse_amplitude_loss_db, tfm_grid_amplitude_loss_db and "
+                + "tfm_lateral_amplitude_loss_db at most amplitude_tolerance_db; only with amplitude_tolerance_db")
+        List<ToleranceCheck> toleranceChecks,
 
         @Schema(description = "The normalised request (lengths in mm, velocity in m/s), with every default that has "
                 + "an effect; itself a valid request that reproduces this answer")
