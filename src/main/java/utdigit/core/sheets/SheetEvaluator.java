@@ -13,6 +13,7 @@ import utdigit.core.acquisition.AcquisitionResult;
 import utdigit.core.acquisition.CaptureMode;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Reference;
+import utdigit.core.common.ReportingFloors;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.PulseCalculator;
 import utdigit.core.pulse.PulseInput;
@@ -130,8 +131,8 @@ public final class SheetEvaluator {
             v.put("nyquist_frequency_mhz", r.nyquistFrequencyMhz());
             v.put("sine_amplitude_loss_db", r.sineAmplitudeLossDb());
             v.put("pulse_amplitude_loss_db", r.pulseAmplitudeLossDb());
-            v.put("spectral_level_at_nyquist_db", r.spectralLevelAtNyquistDb());
-            v.put("energy_above_nyquist_fraction", r.energyAboveNyquistFraction());
+            v.put("spectral_level_at_nyquist_db", ReportingFloors.level(r.spectralLevelAtNyquistDb()));
+            v.put("energy_above_nyquist_fraction", ReportingFloors.fraction(r.energyAboveNyquistFraction()));
             v.put("timing_error_ns", r.timingErrorNs());
             v.put("timing_standard_uncertainty_ns", r.timingStandardUncertaintyNs());
             v.put("tfm_grid_amplitude_loss_db", r.tfmGridAmplitudeLossDb());

@@ -76,6 +76,8 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
         Double scanIncrementMm =
                 Mirrors.lengthMm(errors, "scan_increment", q.scanIncrementMm(), q.scanIncrementIn(), true);
         Double scanLengthMm = Mirrors.lengthMm(errors, "scan_length", q.scanLengthMm(), q.scanLengthIn(), false);
+        Double plannedMmPerS = Mirrors.speedMmPerS(errors, "planned_scan_speed", q.plannedScanSpeedMmPerS(),
+                q.plannedScanSpeedInPerS());
 
         boolean velocityNeeded = !gateLengthForms.isEmpty() || !soundPathForms.isEmpty();
         List<String> velocityGiven = given("velocity_m_per_s", q.velocityMPerS(), "velocity_in_per_us",
@@ -114,7 +116,7 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                 .capture(q.capture())
                 .averaging(q.averaging())
                 .scanLengthMm(scanLengthMm)
-                .plannedScanSpeedMmPerS(q.plannedScanSpeedMmPerS())
+                .plannedScanSpeedMmPerS(plannedMmPerS)
                 .maxRoundTripUs(q.maxRoundTripUs())
                 .maxSoundPathMm(soundPathMm)
                 .wraparoundDecayFactor(q.wraparoundDecayFactor())
@@ -131,7 +133,7 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                 r.options().decimationFactor(), q.bitDepth(), q.gateLengthUs(), gateMm, null, velocityMPerS, null,
                 null, null, null, r.options().focalLaws(), q.fmcElementCount(), r.options().capture(),
                 r.options().averaging(), scanIncrementMm, null, scanLengthMm, null, q.pulseRepetitionFrequencyHz(),
-                q.plannedScanSpeedMmPerS(), q.maxRoundTripUs(), soundPathMm, null,
+                plannedMmPerS, null, q.maxRoundTripUs(), soundPathMm, null,
                 r.options().wraparoundDecayFactor(), q.fileSizeLimitMegabytes());
         return new AcquisitionBudgetResponse(r.samplesPerAScan(), r.bytesPerSample(), r.bytesPerAScan(),
                 r.firingsPerPosition(), r.aScansPerPosition(), r.bytesPerPosition(), r.megabytesPerMetre(),
@@ -139,7 +141,7 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                 r.maxPrfWithoutWraparoundHz(), r.maxScanLengthPerFileMm(), r.effectiveSamplingFrequencyMhz(),
                 r.gateLengthUsedUs(), r.pulseRepetitionPeriodUs(), r.dataRateScanSpeedMmPerS(),
                 r.maxRoundTripUsedUs(), ToleranceCheck.builder()
-                        .atMost("planned_scan_speed_mm_per_s", q.plannedScanSpeedMmPerS(), "max_scan_speed_mm_per_s",
+                        .atMost("planned_scan_speed_mm_per_s", plannedMmPerS, "max_scan_speed_mm_per_s",
                                 r.maxScanSpeedMmPerS())
                         .atMost("pulse_repetition_frequency_hz", q.pulseRepetitionFrequencyHz(),
                                 "max_prf_without_wraparound_hz", r.maxPrfWithoutWraparoundHz())
@@ -186,6 +188,9 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
         }
         if (q.maxSoundPathIn() != null) {
             renames.put("max_sound_path_mm", "max_sound_path_in");
+        }
+        if (q.plannedScanSpeedInPerS() != null) {
+            renames.put("planned_scan_speed_mm_per_s", "planned_scan_speed_in_per_s");
         }
         return renames;
     }

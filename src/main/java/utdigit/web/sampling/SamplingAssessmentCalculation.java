@@ -2,6 +2,7 @@ package utdigit.web.sampling;
 
 import java.util.List;
 import org.springframework.stereotype.Component;
+import utdigit.core.common.ReportingFloors;
 import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.sampling.SamplingCalculator;
@@ -97,8 +98,8 @@ class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentReq
                 r.signal(), r.peakReading(), q.amplitudeToleranceDb(), gridMm, null, velocityMPerS, null, null, null,
                 null, r.tfmImage(), lateralMm, null, apertureMm, null, depthMm, null);
         return new SamplingAssessmentResponse(r.effectiveSamplingFrequencyMhz(), r.samplingIntervalNs(),
-                r.samplesPerPeriod(), r.samplesPerPeriodUpper(), r.nyquistFrequencyMhz(), r.spectralLevelAtNyquistDb(),
-                r.energyAboveNyquistFraction(), r.sineAmplitudeLossDb(), r.pulseAmplitudeLossDb(), r.timingErrorNs(),
+                r.samplesPerPeriod(), r.samplesPerPeriodUpper(), r.nyquistFrequencyMhz(),
+                ReportingFloors.level(r.spectralLevelAtNyquistDb()), ReportingFloors.fraction(r.energyAboveNyquistFraction()), r.sineAmplitudeLossDb(), r.pulseAmplitudeLossDb(), r.timingErrorNs(),
                 r.timingStandardUncertaintyNs(), r.requiredSamplesPerPeriod(), r.requiredSamplingFrequencyMhz(),
                 r.requiredSamplingFrequencyPulseMhz(), r.tfmGridAmplitudeLossDb(), r.tfmMaxGridSpacingMm(),
                 r.tfmLateralAmplitudeLossDb(), tolerance(r, q.amplitudeToleranceDb()), inputs,

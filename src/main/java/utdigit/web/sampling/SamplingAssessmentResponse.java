@@ -37,12 +37,14 @@ record SamplingAssessmentResponse(
 
         @Schema(description = "Model value: the Gaussian pulse model's spectral level at the Nyquist frequency, "
                 + "-6 ((fs/2 - fc)/(bw fc/2))^2 dB; optimistic for real probes, the instrument's anti-alias filter "
-                + "decides what aliases; only with bandwidth_percent", format = "double", example = "-150")
+                + "decides what aliases; a level below -200 dB is reported as -200 (the model means nothing "
+                + "there); only with bandwidth_percent", format = "double", example = "-150")
         Double spectralLevelAtNyquistDb,
 
         @Schema(description = "Model value: the fraction (0 to 1) of the Gaussian pulse model's energy above the "
                 + "Nyquist frequency; optimistic for real probes, the instrument's anti-alias filter decides what "
-                + "aliases; only with bandwidth_percent", format = "double", example = "4.7e-17")
+                + "aliases; a fraction below 1e-20 is reported as 1e-20 (the model means nothing there); only with "
+                + "bandwidth_percent", format = "double", example = "4.7e-17")
         Double energyAboveNyquistFraction,
 
         @Schema(description = "Classic sine bound: a peak sampled n times per period (at the rate that decides "

@@ -125,6 +125,8 @@ public record TechniqueSheetRequest(
             @DecimalMin(value = "0", inclusive = false) Double scanLengthIn,
             @Schema(description = "Planned scan speed, mm/s", format = "double", example = "50")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double plannedScanSpeedMmPerS,
+            @Schema(description = "Planned scan speed, in/s (1 in/s = 25.4 mm/s)", format = "double", example = "2")
+            @DecimalMin(value = "0", inclusive = false) Double plannedScanSpeedInPerS,
             @Schema(description = "Gate length, us (> 0, <= 100000)", format = "double", example = "40")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gateLengthUs,
             @Schema(description = "Gate length as a pulse-echo sound path in the part, mm", format = "double", example = "100")
@@ -157,12 +159,20 @@ public record TechniqueSheetRequest(
     public record Tfm(
             @Schema(description = "Depth step of the image grid, mm", format = "double", example = "0.1")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gridSpacingMm,
+            @Schema(description = "Depth step of the image grid, in", format = "double", example = "0.004")
+            @DecimalMin(value = "0", inclusive = false) Double gridSpacingIn,
             @Schema(description = "Lateral step of the image grid, mm", format = "double", example = "0.2")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double lateralGridSpacingMm,
+            @Schema(description = "Lateral step of the image grid, in", format = "double", example = "0.008")
+            @DecimalMin(value = "0", inclusive = false) Double lateralGridSpacingIn,
             @Schema(description = "Active aperture for the lateral check, mm", format = "double", example = "38")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double apertureMm,
+            @Schema(description = "Active aperture for the lateral check, in", format = "double", example = "1.5")
+            @DecimalMin(value = "0", inclusive = false) Double apertureIn,
             @Schema(description = "Depth of the lateral check, mm", format = "double", example = "20")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double depthMm,
+            @Schema(description = "Depth of the lateral check, in", format = "double", example = "0.8")
+            @DecimalMin(value = "0", inclusive = false) Double depthIn,
             @Schema(description = "RF or ENVELOPE image; default RF") TfmImage image) {}
 
     /** The evaluation. */
@@ -175,5 +185,7 @@ public record TechniqueSheetRequest(
             @Schema(description = "Amplitude tolerance of the evaluation, dB (> 0, <= 40)", format = "double", example = "2")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("40") Double amplitudeToleranceDb,
             @Schema(description = "Thickness measurement tolerance, mm", format = "double", example = "0.1")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double thicknessToleranceMm) {}
+            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double thicknessToleranceMm,
+            @Schema(description = "Thickness measurement tolerance, in", format = "double", example = "0.004")
+            @DecimalMin(value = "0", inclusive = false) Double thicknessToleranceIn) {}
 }

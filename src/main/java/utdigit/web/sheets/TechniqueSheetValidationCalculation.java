@@ -10,9 +10,11 @@ import utdigit.core.rules.Finding;
 import utdigit.core.rules.RequirementProfile;
 import utdigit.core.sheets.Feasibility;
 import utdigit.core.sheets.SheetEvaluator;
+import utdigit.core.sheets.SheetMetrics;
 import utdigit.core.sheets.SheetInput;
 import utdigit.core.sheets.SheetResult;
 import utdigit.web.common.Calculation;
+import utdigit.web.common.ContractNaming;
 import utdigit.web.common.FieldError;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.InputProblem;
@@ -78,6 +80,34 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
 
     @Override
     public String pointer(String coreField, TechniqueSheetRequest q) {
+        return inCallerForm(sheetPointer(coreField, q), q);
+    }
+
+    /** The pointer of a length the caller gave in inches names the inch field (/material/thickness_in). */
+    private static String inCallerForm(String pointer, TechniqueSheetRequest q) {
+        String[] parts = pointer.split("/");
+        if (parts.length != 3 || !parts[2].endsWith("_mm")) {
+            return pointer;
+        }
+        String inchName = parts[2].substring(0, parts[2].length() - "_mm".length()) + "_in";
+        Object section = component(q, parts[1]);
+        return section != null && component(section, inchName) != null ? "/" + parts[1] + "/" + inchName : pointer;
+    }
+
+    private static Object component(Object record, String jsonName) {
+        for (java.lang.reflect.RecordComponent c : record.getClass().getRecordComponents()) {
+            if (ContractNaming.snake(c.getName()).equals(jsonName)) {
+                try {
+                    return c.getAccessor().invoke(record);
+                } catch (ReflectiveOperationException e) {
+                    return null;
+                }
+            }
+        }
+        return null;
+    }
+
+    private String sheetPointer(String coreField, TechniqueSheetRequest q) {
         String p = SHEET_POINTERS.get(coreField);
         if (p != null) {
             return p;
@@ -103,7 +133,10 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         TechniqueSheetRequest.Material m = q.material() == null ? new TechniqueSheetRequest.Material(null, null, null,
                 null, null, null, null, null, null, null) : q.material();
         TechniqueSheetRequest.Acquisition a = q.acquisition() == null ? new TechniqueSheetRequest.Acquisition(null, null,
-                null, null, null, null, null, null, null, null, null, null, null, null, null, null, null) : q.acquisition();
+                null, null, null, null, null, null, null, null, null, null, null, null, null, null, null, null)
+                : q.acquisition();
+        TechniqueSheetRequest.Tfm tfm = q.tfm() == null ? null : q.tfm();
+        TechniqueSheetRequest.Evaluation e = q.evaluation();
         TechniqueSheetRequest.Tofd t = q.tofd() == null ? new TechniqueSheetRequest.Tofd(null, null, null, null) : q.tofd();
 
         FieldErrors probeErrors = errors.section("probe");
@@ -113,11 +146,11 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         VelocitySource velocity;
         try {
             velocity = Mirrors.velocity(materialErrors, m, false);
-        } catch (CalculationException e) {
-            if (!Feasibility.isFeasibilityFailure(e)) {
-                throw e;
+        } catch (CalculationException failure) {
+            if (!Feasibility.isFeasibilityFailure(failure)) {
+                throw failure;
             }
-            inputFailures.add(Feasibility.failure("material", e));
+            inputFailures.add(Feasibility.failure("material", failure));
             velocity = null;
         }
         Double thicknessMm = Mirrors.lengthMm(materialErrors, "thickness", m.thicknessMm(), m.thicknessIn(), false);
@@ -134,6 +167,19 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
             acqErrors.add("gate_length_us", detail).add(a.gateLengthMm() != null ? "gate_length_mm" : "gate_length_in", detail);
         }
         Double soundPathMm = Mirrors.lengthMm(acqErrors, "max_sound_path", a.maxSoundPathMm(), a.maxSoundPathIn(), false);
+        Double plannedMmPerS = Mirrors.speedMmPerS(acqErrors, "planned_scan_speed", a.plannedScanSpeedMmPerS(),
+                a.plannedScanSpeedInPerS());
+        FieldErrors tfmErrors = errors.section("tfm");
+        Double gridMm = tfm == null ? null
+                : Mirrors.lengthMm(tfmErrors, "grid_spacing", tfm.gridSpacingMm(), tfm.gridSpacingIn(), false);
+        Double lateralMm = tfm == null ? null : Mirrors.lengthMm(tfmErrors, "lateral_grid_spacing",
+                tfm.lateralGridSpacingMm(), tfm.lateralGridSpacingIn(), false);
+        Double apertureMm = tfm == null ? null
+                : Mirrors.lengthMm(tfmErrors, "aperture", tfm.apertureMm(), tfm.apertureIn(), false);
+        Double tfmDepthMm = tfm == null ? null
+                : Mirrors.lengthMm(tfmErrors, "depth", tfm.depthMm(), tfm.depthIn(), false);
+        Double toleranceMm = e == null ? null : Mirrors.lengthMm(errors.section("evaluation"), "thickness_tolerance",
+                e.thicknessToleranceMm(), e.thicknessToleranceIn(), false);
         FieldErrors tofdErrors = errors.section("tofd");
         Double pcsMm = Mirrors.lengthMm(tofdErrors, "probe_centre_separation", t.probeCentreSeparationMm(),
                 t.probeCentreSeparationIn(), false);
@@ -146,8 +192,6 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
 
         Double c = velocity == null ? null : velocity.velocityMPerS();
         TechniqueSheetRequest.Digitization d = q.digitization();
-        TechniqueSheetRequest.Tfm tfm = q.tfm();
-        TechniqueSheetRequest.Evaluation e = q.evaluation();
         SheetInput sheet = new SheetInput(q.sheetId(), q.revision(), q.technique(),
                 new SheetInput.Probe(p.frequencyMhz(), p.bandwidthPercent(), diameterMm, p.elementCount()),
                 new SheetInput.Part(c, m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm,
@@ -155,13 +199,12 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 d == null ? null : new SheetInput.Digitization(d.samplingFrequencyMhz(), d.decimationFactor(),
                         d.bitDepth(), d.digitizedSignal(), d.quantizer(), d.codeMapping(), d.decimationMode(), d.signal()),
                 new SheetInput.Acquisition(a.pulseRepetitionFrequencyHz(), a.focalLaws(), a.fmcElementCount(),
-                        a.capture(), a.averaging(), incrementMm, lengthMm, a.plannedScanSpeedMmPerS(), a.gateLengthUs(),
+                        a.capture(), a.averaging(), incrementMm, lengthMm, plannedMmPerS, a.gateLengthUs(),
                         gateMm, soundPathMm, a.maxRoundTripUs(), a.wraparoundDecayFactor()),
                 new SheetInput.Tofd(pcsMm, depthMm),
-                tfm == null ? null : new SheetInput.Tfm(tfm.gridSpacingMm(), tfm.lateralGridSpacingMm(),
-                        tfm.apertureMm(), tfm.depthMm(), tfm.image()),
+                tfm == null ? null : new SheetInput.Tfm(gridMm, lateralMm, apertureMm, tfmDepthMm, tfm.image()),
                 e == null ? null : new SheetInput.Evaluation(e.referenceHeightPercentFsh(), e.evaluationLevelDb(),
-                        e.amplitudeToleranceDb(), e.thicknessToleranceMm()));
+                        e.amplitudeToleranceDb(), toleranceMm));
 
         SheetResult r = SheetEvaluator.evaluate(sheet, chosen, inputFailures);
 
@@ -179,18 +222,29 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 d,
                 q.acquisition() == null ? null : new TechniqueSheetRequest.Acquisition(a.pulseRepetitionFrequencyHz(),
                         a.focalLaws(), a.fmcElementCount(), a.capture(), a.averaging(), incrementMm, null, lengthMm,
-                        null, a.plannedScanSpeedMmPerS(), a.gateLengthUs(), gateMm, null, soundPathMm, null,
+                        null, plannedMmPerS, null, a.gateLengthUs(), gateMm, null, soundPathMm, null,
                         a.maxRoundTripUs(), a.wraparoundDecayFactor()),
                 q.tofd() == null ? null : new TechniqueSheetRequest.Tofd(pcsMm, null, depthMm, null),
-                tfm, e);
+                tfm == null ? null : new TechniqueSheetRequest.Tfm(gridMm, null, lateralMm, null, apertureMm, null,
+                        tfmDepthMm, null, tfm.image()),
+                e == null ? null : new TechniqueSheetRequest.Evaluation(e.referenceHeightPercentFsh(),
+                        e.evaluationLevelDb(), e.amplitudeToleranceDb(), toleranceMm, null));
 
         return new TechniqueSheetValidationResponse(q.sheetId(), q.revision(),
                 r.profiles().stream().map(pv -> new TechniqueSheetValidationResponse.ProfileRef(pv.profile().id(),
                         pv.profile().version(), pv.profile().sha256(), pv.profile().verificationStatus(),
                         pv.verdict())).toList(),
                 r.verdict(), r.findings().stream().map(f -> view(f, q)).toList(),
-                r.values(), r.cautions(), inputs, VelocitySourceView.of(velocity),
+                presented(r.values()), r.cautions(), inputs, VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+    }
+
+    /** The values as answered: counts as integers (exact in a double below 2^53), the rest as they are. */
+    private static Map<String, Number> presented(Map<String, Double> values) {
+        Map<String, Number> out = new java.util.LinkedHashMap<>();
+        values.forEach((metric, value) -> out.put(metric, SheetMetrics.COUNTS.contains(metric)
+                && value == Math.rint(value) && Math.abs(value) < 0x1p53 ? (Number) value.longValue() : value));
+        return out;
     }
 
     /** The profiles asked for: profile_id or profile_ids (not both), default common-practice; each known once. */

@@ -28,8 +28,9 @@ record TechniqueSheetValidationResponse(
         @Schema(description = "The failed feasibility checks of the service (profile_id service-feasibility) "
                 + "first, then one finding per applicable rule of each profile, in the profiles' order")
         List<FindingView> findings,
-        @Schema(description = "Every metric computed or given, by name (lengths in mm, velocity in m/s)")
-        Map<String, Double> values,
+        @Schema(description = "Every metric computed or given, by name (lengths in mm, velocity in m/s); counts "
+                + "(bit_depth, focal_laws, levels, samples_per_a_scan, bytes_per_position...) as integers")
+        Map<String, Number> values,
         @Schema(description = "The profiles' cautions, then the service's") List<String> cautions,
         @Schema(description = "The normalised sheet; itself a valid request that reproduces this answer")
         TechniqueSheetRequest inputs,

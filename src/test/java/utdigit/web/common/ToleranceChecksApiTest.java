@@ -98,6 +98,19 @@ class ToleranceChecksApiTest extends ApiTest {
     }
 
     @Test
+    void aPlannedSpeedInInchesPerSecondIsCheckedLikeItsMillimetreForm() {
+        // 6 in/s = 152.4 mm/s (1 in = 25.4 mm exactly) > 5000 Hz x 1 mm / 61 = 82.0 mm/s
+        JsonPath answer = post("/api/acquisition-budgets", """
+                {"sampling_frequency_mhz": 100, "bit_depth": 12, "gate_length_us": 10, "focal_laws": 61,
+                 "scan_increment_mm": 1, "pulse_repetition_frequency_hz": 5000, "planned_scan_speed_in_per_s": 6}""")
+                .statusCode(200).extract().jsonPath();
+        assertThat(answer.getDouble("inputs.planned_scan_speed_mm_per_s")).isCloseTo(152.4, within(1e-12));
+        Map<String, Object> c = check(answer, "planned_scan_speed_mm_per_s");
+        assertThat((Double) c.get("value")).isCloseTo(152.4, within(1e-12));
+        assertThat(c.get("within")).isEqualTo(false);
+    }
+
+    @Test
     void anAcquisitionPlanAgainstItsOwnLimits() {
         // 5000 Hz / 61 focal laws x 1 mm = 82.0 mm/s < 150 planned; 2 x 450 mm / 5.92 mm/us x 2 = 304 us:
         // 3289 Hz < 5000; 12 bits in 2 bytes x 1000 samples (10 us at 100 MHz) x 61 = 122 000 bytes per

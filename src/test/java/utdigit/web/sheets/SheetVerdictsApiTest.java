@@ -269,6 +269,105 @@ class SheetVerdictsApiTest extends ApiTest {
         }
     }
 
+    /** Sheets written in inches: the same verdicts and values as their millimetre twins (1 in = 25.4 mm exactly). */
+    @Nested
+    class InchSheets {
+        @Test
+        void aSheetInInchesThroughoutMatchesItsMillimetreTwin() {
+            ObjectNode mm = passing();
+            section(mm, "tfm").put("grid_spacing_mm", 0.1).put("lateral_grid_spacing_mm", 0.2)
+                    .put("aperture_mm", 38).put("depth_mm", 20);
+            ObjectNode in = mm.deepCopy();
+            ObjectNode material = section(in, "material");
+            material.remove("thickness_mm");
+            material.put("thickness_in", 25 / 25.4);
+            ObjectNode acquisition = section(in, "acquisition");
+            for (String[] f : new String[][] {{"scan_increment_mm", "scan_increment_in"},
+                    {"scan_length_mm", "scan_length_in"}, {"max_sound_path_mm", "max_sound_path_in"},
+                    {"planned_scan_speed_mm_per_s", "planned_scan_speed_in_per_s"}}) {
+                double v = acquisition.get(f[0]).asDouble();
+                acquisition.remove(f[0]);
+                acquisition.put(f[1], v / 25.4);
+            }
+            ObjectNode tfm = section(in, "tfm");
+            for (String base : new String[] {"grid_spacing", "lateral_grid_spacing", "aperture", "depth"}) {
+                double v = tfm.get(base + "_mm").asDouble();
+                tfm.remove(base + "_mm");
+                tfm.put(base + "_in", v / 25.4);
+            }
+            ObjectNode evaluation = section(in, "evaluation");
+            evaluation.remove("thickness_tolerance_mm");
+            evaluation.put("thickness_tolerance_in", 0.1 / 25.4);
+
+            JsonPath inches = validate(in);
+            JsonPath millimetres = validate(mm);
+            assertThat(inches.getString("verdict")).isEqualTo(millimetres.getString("verdict")).isEqualTo("PASS");
+            Map<String, Object> expected = millimetres.getMap("values");
+            Map<String, Object> actual = inches.getMap("values");
+            assertThat(actual.keySet()).isEqualTo(expected.keySet());
+            for (String metric : expected.keySet()) {
+                double e = ((Number) expected.get(metric)).doubleValue();
+                assertThat(((Number) actual.get(metric)).doubleValue()).as(metric)
+                        .isCloseTo(e, within(1e-9 * Math.max(1, Math.abs(e))));
+            }
+            assertThat(actual).containsKeys("tfm_grid_amplitude_loss_db", "tfm_lateral_amplitude_loss_db");
+            // the normalised sheet is in mm: itself a valid request
+            assertThat(inches.getDouble("inputs.acquisition.planned_scan_speed_mm_per_s")).isCloseTo(20, within(1e-12));
+            assertThat(inches.getDouble("inputs.tfm.grid_spacing_mm")).isCloseTo(0.1, within(1e-15));
+        }
+
+        @Test
+        void aFeasibilityFailurePointsAtTheInchFieldsTheSheetGave() {
+            ObjectNode sheet = (ObjectNode) JSON.readTree("""
+                    {"sheet_id": "HVW-TOFD-10", "technique": "TOFD", "profile_id": "example-tofd",
+                     "probe": {"frequency_mhz": 10, "bandwidth_percent": 70},
+                     "material": {"velocity_m_per_s": 5920, "thickness_in": 0.75},
+                     "digitization": {"sampling_frequency_mhz": 100},
+                     "tofd": {"probe_centre_separation_in": 2.5, "depth_of_interest_in": 1.25}}""");
+            Map<String, Object> f = feasibilityFailure(validate(sheet), "tofd-depth-within-wall");
+            assertThat(f.get("settings")).isEqualTo(List.of("/tofd/depth_of_interest_in", "/material/thickness_in"));
+        }
+
+        @Test
+        void aSpeedInBothUnitsIsRefused() {
+            ObjectNode sheet = passing();
+            section(sheet, "acquisition").put("planned_scan_speed_in_per_s", 1);
+            assertInvalid(PATH, sheet.toString(), "/acquisition/planned_scan_speed_in_per_s");
+        }
+    }
+
+    /** Numbers as a reader of the sheet expects them. */
+    @Nested
+    class Numbers {
+        @Test
+        void countsAreIntegers() {
+            String body = post(PATH, TechniqueSheetValidationApiTest.PASSING).statusCode(200).extract().asString();
+            JsonNode values = JSON.readTree(body).path("values");
+            for (String count : List.of("bit_depth", "decimation_factor", "focal_laws", "element_count", "levels",
+                    "samples_per_a_scan", "firings_per_position", "a_scans_per_position", "bytes_per_position")) {
+                assertThat(values.path(count).isIntegralNumber()).as(count + " = " + values.path(count)).isTrue();
+            }
+            assertThat(values.path("bit_depth").asLong()).isEqualTo(12);
+            assertThat(values.path("levels").asLong()).isEqualTo(4096); // 2^12 codes
+            assertThat(values.path("samples_per_period").isIntegralNumber()).isFalse(); // a ratio stays a number
+        }
+
+        @Test
+        void modelLevelsAndFractionsStopAtTheDocumentedFloor() {
+            // 5 MHz, 60 %, 50 MHz effective: the model's level at 25 MHz is -6 ((25 - 5)/1.5)^2 = -1067 dB,
+            // reported at the floor of -200 dB; its energy above 25 MHz (about 1e-115) at 1e-20.
+            JsonNode values = JSON.readTree(post(PATH, TechniqueSheetValidationApiTest.PASSING).statusCode(200)
+                    .extract().asString()).path("values");
+            assertThat(values.path("spectral_level_at_nyquist_db").asDouble()).isEqualTo(-200.0);
+            assertThat(values.path("energy_above_nyquist_fraction").asDouble()).isEqualTo(1e-20);
+            JsonPath single = post("/api/sampling-assessments", """
+                    {"sampling_frequency_mhz": 100, "decimation_factor": 2, "frequency_mhz": 5, "bandwidth_percent": 60}""")
+                    .statusCode(200).extract().jsonPath();
+            assertThat(single.getDouble("spectral_level_at_nyquist_db")).isEqualTo(-200.0);
+            assertThat(single.getDouble("energy_above_nyquist_fraction")).isEqualTo(1e-20);
+        }
+    }
+
     @Nested
     class InBulk {
         @Test
