@@ -1,5 +1,6 @@
 package utdigit.core.acquisition;
 
+import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.ArrayList;
@@ -173,8 +174,9 @@ public final class AcquisitionCalculator {
                             + "(e.g. two 12-bit samples in 3 bytes) stores %s bytes per sample: check its "
                             + "file format", bitDepth, bytesPerSample, fmt(bitDepth / 8.0))));
         }
-        double positionsPerMetre = 1000.0 / scanIncrementMm;
-        double megabytesPerMetre = bytesPerPosition * positionsPerMetre / BYTES_PER_MEGABYTE;
+        // bytes x 1000 / increment / 10^6 = bytes / (increment x 1000), in decimal (no float noise)
+        double megabytesPerMetre = ratio(BigDecimal.valueOf(bytesPerPosition),
+                decimal(scanIncrementMm).multiply(BigDecimal.valueOf(1000)));
         references.add(Reference.of("data volume",
                 "bytes per position = bytes per A-scan x A-scans per position; MB per metre = bytes per "
                         + "position x 1000/scan_increment_mm / 10^6; file size = MB per metre x length; headers, "
@@ -182,7 +184,9 @@ public final class AcquisitionCalculator {
         references.add(Reference.of("megabyte",
                 "MB = 10^6 bytes (SI prefix mega; not the binary MiB of 2^20 bytes)"));
 
-        Double fileSizeMegabytes = scanLengthMm == null ? null : megabytesPerMetre * scanLengthMm / 1000.0;
+        Double fileSizeMegabytes = scanLengthMm == null ? null : ratio(
+                BigDecimal.valueOf(bytesPerPosition).multiply(decimal(scanLengthMm)),
+                decimal(scanIncrementMm).multiply(BigDecimal.valueOf(1_000_000)));
         Double maxScanLengthPerFileMm = null;
         if (fileSizeLimitMegabytes != null) {
             maxScanLengthPerFileMm = fileSizeLimitMegabytes / megabytesPerMetre * 1000.0;
@@ -209,8 +213,8 @@ public final class AcquisitionCalculator {
                     fmt(plannedSpeedMmPerS), fmt(maxScanSpeedMmPerS), fmt(prfHz), firings, averaging,
                     fmt(scanIncrementMm))));
         }
-        double dataRateMegabytesPerS =
-                bytesPerPosition * (dataRateSpeedMmPerS / scanIncrementMm) / BYTES_PER_MEGABYTE;
+        double dataRateMegabytesPerS = ratio(BigDecimal.valueOf(bytesPerPosition).multiply(decimal(dataRateSpeedMmPerS)),
+                decimal(scanIncrementMm).multiply(BigDecimal.valueOf(1_000_000)));
         references.add(Reference.of("data rate",
                 "bytes per position x scan speed / scan_increment / 10^6, at the planned speed when given, "
                         + "else at the maximum (" + COMMON_PRACTICE + ")"));
@@ -269,8 +273,8 @@ public final class AcquisitionCalculator {
      * / (firings x averaging); the PRF counts firings, not A-scans. Common practice, no published source.
      */
     public static double maxScanSpeedMmPerS(double prfHz, double scanIncrementMm, long firings, int averaging) {
-        double firingsPerRecordedPosition = (double) firings * averaging; // up to 2^32: exact in a double
-        return prfHz * scanIncrementMm / firingsPerRecordedPosition;
+        return ratio(decimal(prfHz).multiply(decimal(scanIncrementMm)),
+                BigDecimal.valueOf(firings).multiply(BigDecimal.valueOf(averaging)));
     }
 
     /**
@@ -332,7 +336,21 @@ public final class AcquisitionCalculator {
      * source.
      */
     public static double maxPrfWithoutWraparoundHz(double roundTripUs, double decayFactor) {
-        return 1e6 / (decayFactor * roundTripUs);
+        return ratio(BigDecimal.valueOf(1_000_000), decimal(decayFactor).multiply(decimal(roundTripUs)));
+    }
+
+    /**
+     * A double as the decimal it prints as (the shortest that reads back as the same double): the
+     * caller's 0.3 mm is 0.3, not 0.299999999999999988898. Ratios of such decimals that are exact
+     * (8192 MB, 13562.5 Hz) then come out exact, without binary float noise. (derived)
+     */
+    private static BigDecimal decimal(double x) {
+        return new BigDecimal(Double.toString(x));
+    }
+
+    /** numerator / denominator to 34 significant digits, rounded once to the nearest double. */
+    private static double ratio(BigDecimal numerator, BigDecimal denominator) {
+        return numerator.divide(denominator, MathContext.DECIMAL128).doubleValue();
     }
 
     /** {@code value} above {@code limit} by more than the relative tolerance (rounding is not a breach). */
