@@ -66,7 +66,8 @@ def main():
     print(f"{rows} rows: {statuses['OK']} OK, {statuses['INVALID']} INVALID"
           + (f", {statuses['LIMIT_REACHED']} LIMIT_REACHED" if statuses["LIMIT_REACHED"] else ""))
     if verdicts:
-        print("verdicts: " + ", ".join(f"{verdicts[v]} {v}" for v in ("PASS", "FAIL", "INCOMPLETE") if verdicts[v]))
+        print("verdicts: " + ", ".join(f"{verdicts[v]} {v}" for v in ("PASS", "FAIL", "INCOMPLETE", "NOT_COVERED")
+                                       if verdicts[v]))
         for number, sheet, verdict, findings in not_passed:
             print(f"  row {number} {sheet}: {verdict}")
             for f in findings:
@@ -86,7 +87,10 @@ def main():
 
 
 def describe(finding):
-    """One finding in a line: rule, verdict, the metric's value against its limit."""
+    """One finding in a line: rule, verdict, the metric's value against its limit (or the reason of a
+    failed feasibility check), and the sheet inputs to add when the rule could not be evaluated."""
+    if finding.get("reason"):
+        return f"{finding.get('profile_id')}/{finding.get('rule_id')}: {finding.get('verdict')}: {finding['reason']}"
     words = {"AT_LEAST": ">=", "AT_MOST": "<=", "EQUALS": "=", "ABOVE": ">", "BELOW": "<"}
     comparison = words.get(finding.get("comparison"), finding.get("comparison", ""))
     limit = finding.get("limit_metric") or ""
@@ -94,7 +98,9 @@ def describe(finding):
     limit_text = f"{limit} = {limit_value}" if limit and limit_value != "n/a" else (limit or limit_value)
     text = (f"{finding.get('rule_id')}: {finding.get('verdict')}: {finding.get('metric')} = "
             f"{number(finding.get('actual'))}, required {comparison} {limit_text}")
-    if finding.get("missing"):
+    if finding.get("missing_inputs"):
+        text += " (add: " + ", ".join(finding["missing_inputs"]) + ")"
+    elif finding.get("missing"):
         text += " (missing: " + ", ".join(finding["missing"]) + ")"
     return text
 

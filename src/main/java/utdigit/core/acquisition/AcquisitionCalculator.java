@@ -1,5 +1,6 @@
 package utdigit.core.acquisition;
 
+import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.ArrayList;
@@ -142,13 +143,7 @@ public final class AcquisitionCalculator {
                 ? null : Checks.positive("planned_scan_speed_mm_per_s", in.plannedScanSpeedMmPerS());
 
         // 2. Inputs impossible together (422).
-        double periodUs = 1e6 / prfHz;
-        if (exceeds(gateUs, periodUs)) {
-            throw CalculationException.impossible(String.format(Locale.ROOT,
-                    "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
-                            + " (%s us at %s Hz): the next firing would start before the gate ends",
-                    gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
-        }
+        double periodUs = checkGateWithinPeriod(gateField, gateUs, prfHz);
         double effectiveMhz = clock.effectiveSamplingFrequencyMhz();
         long samples = samplesPerAScan(gateUs, effectiveMhz, gateField, countField);
         int bytesPerSample = bytesPerSample(bitDepth);
@@ -170,12 +165,15 @@ public final class AcquisitionCalculator {
                             + "(e.g. two 12-bit samples in 3 bytes) stores %s bytes per sample: check its "
                             + "file format", bitDepth, bytesPerSample, fmt(bitDepth / 8.0))));
         }
-        double positionsPerMetre = 1000.0 / scanIncrementMm;
-        double megabytesPerMetre = bytesPerPosition * positionsPerMetre / BYTES_PER_MEGABYTE;
+        // bytes x 1000 / increment / 10^6 = bytes / (increment x 1000), in decimal (no float noise)
+        double megabytesPerMetre = ratio(BigDecimal.valueOf(bytesPerPosition),
+                decimal(scanIncrementMm).multiply(BigDecimal.valueOf(1000)));
         references.add(Reference.of("data volume", Sources.ACQUISITION_COUNTING));
         references.add(Reference.of("megabyte", Sources.DEFINITIONS));
 
-        Double fileSizeMegabytes = scanLengthMm == null ? null : megabytesPerMetre * scanLengthMm / 1000.0;
+        Double fileSizeMegabytes = scanLengthMm == null ? null : ratio(
+                BigDecimal.valueOf(bytesPerPosition).multiply(decimal(scanLengthMm)),
+                decimal(scanIncrementMm).multiply(BigDecimal.valueOf(1_000_000)));
         Double maxScanLengthPerFileMm = null;
         if (fileSizeLimitMegabytes != null) {
             maxScanLengthPerFileMm = fileSizeLimitMegabytes / megabytesPerMetre * 1000.0;
@@ -189,8 +187,7 @@ public final class AcquisitionCalculator {
         }
 
         // 4. Scan speed: the PRF is spent on firings, each averaged firing counted.
-        double firingsPerRecordedPosition = (double) firings * averaging; // up to 2^32: exact in a double
-        double maxScanSpeedMmPerS = prfHz * scanIncrementMm / firingsPerRecordedPosition;
+        double maxScanSpeedMmPerS = maxScanSpeedMmPerS(prfHz, scanIncrementMm, firings, averaging);
         references.add(Reference.of("maximum scan speed", Sources.SCAN_SPEED));
         double dataRateSpeedMmPerS = plannedSpeedMmPerS == null ? maxScanSpeedMmPerS : plannedSpeedMmPerS;
         if (plannedSpeedMmPerS != null && exceeds(plannedSpeedMmPerS, maxScanSpeedMmPerS)) {
@@ -201,8 +198,8 @@ public final class AcquisitionCalculator {
                     fmt(plannedSpeedMmPerS), fmt(maxScanSpeedMmPerS), fmt(prfHz), firings, averaging,
                     fmt(scanIncrementMm))));
         }
-        double dataRateMegabytesPerS =
-                bytesPerPosition * (dataRateSpeedMmPerS / scanIncrementMm) / BYTES_PER_MEGABYTE;
+        double dataRateMegabytesPerS = ratio(BigDecimal.valueOf(bytesPerPosition).multiply(decimal(dataRateSpeedMmPerS)),
+                decimal(scanIncrementMm).multiply(BigDecimal.valueOf(1_000_000)));
         references.add(Reference.of("data rate", Sources.ACQUISITION_COUNTING));
 
         // 5. Wrap-around limit.
@@ -232,6 +229,33 @@ public final class AcquisitionCalculator {
                 megabytesPerMetre, fileSizeMegabytes, maxScanSpeedMmPerS, dataRateMegabytesPerS, maxPrfHz,
                 maxScanLengthPerFileMm, effectiveMhz, gateUs, periodUs, dataRateSpeedMmPerS, roundTripUs,
                 options, warnings, references);
+    }
+
+    /**
+     * The gate must end before the next firing: t_gate <= 1/PRF (within the relative tolerance).
+     *
+     * @param gateField the contract name of the gate as given (gate_length_us or gate_length_mm)
+     * @return the pulse repetition period 10^6/PRF, us
+     * @throws CalculationException IMPOSSIBLE_COMBINATION when the gate is longer than the period
+     */
+    public static double checkGateWithinPeriod(String gateField, double gateUs, double prfHz) {
+        double periodUs = 1e6 / prfHz;
+        if (exceeds(gateUs, periodUs)) {
+            throw CalculationException.impossible(String.format(Locale.ROOT,
+                    "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
+                            + " (%s us at %s Hz): the next firing would start before the gate ends",
+                    gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
+        }
+        return periodUs;
+    }
+
+    /**
+     * Highest scan speed at which every increment still gets all its firings: v_max = PRF x increment
+     * / (firings x averaging); the PRF counts firings, not A-scans. Common practice, no published source.
+     */
+    public static double maxScanSpeedMmPerS(double prfHz, double scanIncrementMm, long firings, int averaging) {
+        return ratio(decimal(prfHz).multiply(decimal(scanIncrementMm)),
+                BigDecimal.valueOf(firings).multiply(BigDecimal.valueOf(averaging)));
     }
 
     /**
@@ -282,7 +306,7 @@ public final class AcquisitionCalculator {
      * Pulse-echo time of a sound path in the part: the wave travels the path there and back.
      * t = 2 L / v, L in mm, v in m/s (1 m/s = 1e-3 mm/us), t in us. (definition)
      */
-    static double pulseEchoTimeUs(double soundPathMm, double velocityMPerS) {
+    public static double pulseEchoTimeUs(double soundPathMm, double velocityMPerS) {
         return 2.0 * soundPathMm / Units.mPerSToMmPerUs(velocityMPerS);
     }
 
@@ -292,8 +316,22 @@ public final class AcquisitionCalculator {
      * Hz with t_rt in us and q >= 1 (q = 1 is the bare physical limit). Common practice, no published
      * source.
      */
-    static double maxPrfWithoutWraparoundHz(double roundTripUs, double decayFactor) {
-        return 1e6 / (decayFactor * roundTripUs);
+    public static double maxPrfWithoutWraparoundHz(double roundTripUs, double decayFactor) {
+        return ratio(BigDecimal.valueOf(1_000_000), decimal(decayFactor).multiply(decimal(roundTripUs)));
+    }
+
+    /**
+     * A double as the decimal it prints as (the shortest that reads back as the same double): the
+     * caller's 0.3 mm is 0.3, not 0.299999999999999988898. Ratios of such decimals that are exact
+     * (8192 MB, 13562.5 Hz) then come out exact, without binary float noise. (derived)
+     */
+    private static BigDecimal decimal(double x) {
+        return new BigDecimal(Double.toString(x));
+    }
+
+    /** numerator / denominator to 34 significant digits, rounded once to the nearest double. */
+    private static double ratio(BigDecimal numerator, BigDecimal denominator) {
+        return numerator.divide(denominator, MathContext.DECIMAL128).doubleValue();
     }
 
     /** {@code value} above {@code limit} by more than the relative tolerance (rounding is not a breach). */

@@ -7,8 +7,9 @@ import java.util.Map;
 /**
  * Checks a sheet's values against a profile. A rule applies when the sheet's technique is one of
  * its techniques and all its conditions hold; a condition on a metric the sheet lacks leaves the
- * rule NOT_EVALUATED (it might apply). The sheet's verdict is FAIL when any applicable rule fails,
- * else INCOMPLETE when any could not be evaluated, else PASS.
+ * rule NOT_EVALUATED (it might apply). The profile's verdict is FAIL when any applicable rule fails,
+ * else INCOMPLETE when any could not be evaluated, else NOT_COVERED when no rule applies, else PASS:
+ * PASS needs at least one applicable rule, and all of them passed.
  */
 public final class RuleEvaluator {
     private RuleEvaluator() {}
@@ -43,14 +44,21 @@ public final class RuleEvaluator {
             }
             Verdict verdict = !missing.isEmpty() ? Verdict.NOT_EVALUATED
                     : rule.comparison().holds(actual, limit) ? Verdict.PASS : Verdict.FAIL;
-            findings.add(new Finding(rule.id(), rule.title(), rule.metric(), actual, limit, rule.limit().metric(),
-                    rule.comparison(), verdict, rule.source(), missing));
+            findings.add(new Finding(profile.id(), rule.id(), rule.title(), rule.metric(), actual, limit,
+                    rule.limit().metric(), rule.comparison(), verdict, rule.source(), missing, List.of(), null,
+                    List.of()));
         }
         return findings;
     }
 
-    /** FAIL if any finding failed; else INCOMPLETE if any was not evaluated; else PASS. */
+    /**
+     * FAIL if any finding failed; else INCOMPLETE if any was not evaluated; else NOT_COVERED when
+     * there is no finding (no rule applies); else PASS.
+     */
     public static Verdict verdict(List<Finding> findings) {
+        if (findings.isEmpty()) {
+            return Verdict.NOT_COVERED;
+        }
         boolean incomplete = false;
         for (Finding f : findings) {
             if (f.verdict() == Verdict.FAIL) {

@@ -54,6 +54,14 @@ public final class SheetMetrics {
             // the sheet's own consistency
             "evaluation_error_magnitude_db", "combined_amplitude_error_db");
 
+    /**
+     * Metrics that are counts: reported as integers ({@code "bit_depth": 8}, not 8.0). Each is an
+     * integer input or an exact integer result of its calculator.
+     */
+    public static final Set<String> COUNTS = Set.of("element_count", "decimation_factor", "bit_depth",
+            "focal_laws", "fmc_element_count", "averaging", "levels", "samples_per_a_scan", "firings_per_position",
+            "a_scans_per_position", "bytes_per_position");
+
     /** Every metric name, inputs first. */
     public static final Set<String> ALL;
 

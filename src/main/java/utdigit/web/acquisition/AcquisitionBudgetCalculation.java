@@ -12,6 +12,7 @@ import utdigit.core.acquisition.AcquisitionInput;
 import utdigit.core.acquisition.AcquisitionResult;
 import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldError;
 import utdigit.web.common.FieldErrors;
@@ -75,6 +76,8 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
         Double scanIncrementMm =
                 Mirrors.lengthMm(errors, "scan_increment", q.scanIncrementMm(), q.scanIncrementIn(), true);
         Double scanLengthMm = Mirrors.lengthMm(errors, "scan_length", q.scanLengthMm(), q.scanLengthIn(), false);
+        Double plannedMmPerS = Mirrors.speedMmPerS(errors, "planned_scan_speed", q.plannedScanSpeedMmPerS(),
+                q.plannedScanSpeedInPerS());
 
         boolean velocityNeeded = !gateLengthForms.isEmpty() || !soundPathForms.isEmpty();
         List<String> velocityGiven = given("velocity_m_per_s", q.velocityMPerS(), "velocity_in_per_us",
@@ -113,7 +116,7 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                 .capture(q.capture())
                 .averaging(q.averaging())
                 .scanLengthMm(scanLengthMm)
-                .plannedScanSpeedMmPerS(q.plannedScanSpeedMmPerS())
+                .plannedScanSpeedMmPerS(plannedMmPerS)
                 .maxRoundTripUs(q.maxRoundTripUs())
                 .maxSoundPathMm(soundPathMm)
                 .wraparoundDecayFactor(q.wraparoundDecayFactor())
@@ -130,14 +133,22 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                 r.options().decimationFactor(), q.bitDepth(), q.gateLengthUs(), gateMm, null, velocityMPerS, null,
                 null, null, null, r.options().focalLaws(), q.fmcElementCount(), r.options().capture(),
                 r.options().averaging(), scanIncrementMm, null, scanLengthMm, null, q.pulseRepetitionFrequencyHz(),
-                q.plannedScanSpeedMmPerS(), q.maxRoundTripUs(), soundPathMm, null,
+                plannedMmPerS, null, q.maxRoundTripUs(), soundPathMm, null,
                 r.options().wraparoundDecayFactor(), q.fileSizeLimitMegabytes());
         return new AcquisitionBudgetResponse(r.samplesPerAScan(), r.bytesPerSample(), r.bytesPerAScan(),
                 r.firingsPerPosition(), r.aScansPerPosition(), r.bytesPerPosition(), r.megabytesPerMetre(),
                 r.fileSizeMegabytes(), r.maxScanSpeedMmPerS(), r.dataRateMegabytesPerS(),
                 r.maxPrfWithoutWraparoundHz(), r.maxScanLengthPerFileMm(), r.effectiveSamplingFrequencyMhz(),
                 r.gateLengthUsedUs(), r.pulseRepetitionPeriodUs(), r.dataRateScanSpeedMmPerS(),
-                r.maxRoundTripUsedUs(), inputs, VelocitySourceView.of(velocity),
+                r.maxRoundTripUsedUs(), ToleranceCheck.builder()
+                        .atMost("planned_scan_speed_mm_per_s", plannedMmPerS, "max_scan_speed_mm_per_s",
+                                r.maxScanSpeedMmPerS())
+                        .atMost("pulse_repetition_frequency_hz", q.pulseRepetitionFrequencyHz(),
+                                "max_prf_without_wraparound_hz", r.maxPrfWithoutWraparoundHz())
+                        .atMost("file_size_megabytes", r.fileSizeMegabytes(), "file_size_limit_megabytes",
+                                q.fileSizeLimitMegabytes())
+                        .build(),
+                inputs, VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 
@@ -177,6 +188,9 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
         }
         if (q.maxSoundPathIn() != null) {
             renames.put("max_sound_path_mm", "max_sound_path_in");
+        }
+        if (q.plannedScanSpeedInPerS() != null) {
+            renames.put("planned_scan_speed_mm_per_s", "planned_scan_speed_in_per_s");
         }
         return renames;
     }

@@ -133,6 +133,11 @@ public record AcquisitionBudgetRequest(
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double plannedScanSpeedMmPerS,
 
+        @Schema(description = "Planned scan speed, in/s (1 in/s = 25.4 mm/s; > 0, at most 3937 in/s); or give "
+                + "planned_scan_speed_mm_per_s", format = "double", example = "2", exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double plannedScanSpeedInPerS,
+
         @Schema(description = "Longest round trip of a firing, summed over all media (water, wedge, part), us "
                 + "(> 0, <= 100000); gives max_prf_without_wraparound_hz. Or give max_sound_path_mm/_in",
                 format = "double", example = "40", exclusiveMinimumValue = 0, maximum = "100000")

@@ -3,6 +3,7 @@ package utdigit.web.acquisition;
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.ResultNotes.WarningView;
 import utdigit.web.common.VelocitySourceView;
 
@@ -60,6 +61,12 @@ record AcquisitionBudgetResponse(
         @Schema(description = "The round trip used for the wrap-around limit, us (2 L / v when given as a sound "
                 + "path); only with a round trip", format = "double", example = "33.78")
         Double maxRoundTripUsedUs,
+        @Schema(description = "Each figure compared with a tolerance or requirement of the request: "
+                + "planned_scan_speed_mm_per_s at most max_scan_speed_mm_per_s, pulse_repetition_frequency_hz at "
+                + "most max_prf_without_wraparound_hz, file_size_megabytes at most file_size_limit_megabytes; each "
+                + "only when its inputs were given")
+        List<ToleranceCheck> toleranceChecks,
+
         @Schema(description = "The normalised request (lengths in mm, velocity in m/s), with every default that "
                 + "has an effect; itself a valid request that reproduces this answer")
         AcquisitionBudgetRequest inputs,

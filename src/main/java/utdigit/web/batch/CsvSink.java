@@ -88,7 +88,12 @@ final class CsvSink implements RowSink {
                 if (item.has("code")) {
                     parts.add(item.get("code").asString());
                 } else if (item.has("rule_id")) {
-                    parts.add(item.get("rule_id").asString() + "=" + item.path("verdict").asString());
+                    parts.add((item.has("profile_id") ? item.get("profile_id").asString() + "/" : "")
+                            + item.get("rule_id").asString() + "=" + item.path("verdict").asString());
+                } else if (item.has("figure") && item.has("within")) {
+                    parts.add(item.get("figure").asString() + "=" + (item.get("within").asBoolean() ? "WITHIN" : "OUTSIDE"));
+                } else if (item.has("id") && item.has("verdict")) {
+                    parts.add(item.get("id").asString() + "=" + item.get("verdict").asString());
                 } else {
                     parts.add(item.isValueNode() ? item.asString() : item.toString());
                 }

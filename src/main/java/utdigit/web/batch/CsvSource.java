@@ -111,6 +111,12 @@ final class CsvSource implements RowSource {
         pointer = JsonPointers.child(pointer, leaf);
         switch (shape.kind(column)) {
             case TEXT -> target.put(leaf, cell);
+            case TEXT_LIST -> {
+                var items = target.putArray(leaf);
+                for (String item : cell.split(";", -1)) {
+                    items.add(item.trim());
+                }
+            }
             case NUMBER -> {
                 Double v = parseDecimal(cell.trim());
                 if (v == null) {

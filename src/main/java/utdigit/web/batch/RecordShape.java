@@ -17,7 +17,7 @@ import utdigit.web.common.ContractNaming;
  */
 final class RecordShape {
     /** How a CSV cell of a leaf is turned into JSON. */
-    enum Kind { NUMBER, INTEGER, TEXT }
+    enum Kind { NUMBER, INTEGER, TEXT, TEXT_LIST }
 
     private final Map<String, Kind> leaves;
 
@@ -44,6 +44,8 @@ final class RecordShape {
                 out.put(name, Kind.TEXT);
             } else if (t.isRecord()) {
                 collectRequest(t, name + ".", out);
+            } else if (List.class.isAssignableFrom(t)) {
+                out.put(name, Kind.TEXT_LIST); // a list of texts (profile ids): one cell, items separated by ';'
             }
         }
     }

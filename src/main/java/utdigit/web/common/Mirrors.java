@@ -55,6 +55,29 @@ public final class Mirrors {
     }
 
     /**
+     * The speed in mm/s of the input {@code base} given as {@code base_mm_per_s} or {@code base_in_per_s}
+     * (1 in/s = 25.4 mm/s exactly), or null when neither is given.
+     */
+    public static Double speedMmPerS(FieldErrors errors, String base, Double mmPerS, Double inPerS) {
+        String mmName = base + "_mm_per_s";
+        String inName = base + "_in_per_s";
+        if (mmPerS != null && inPerS != null) {
+            String detail = "give " + base + " once: " + mmName + " or " + inName + ", not both";
+            errors.add(mmName, detail).add(inName, detail);
+            return null;
+        }
+        if (inPerS == null) {
+            return mmPerS;
+        }
+        double converted = Units.inToMm(inPerS);
+        if (!(converted > 0 && converted <= MAX_LENGTH_MM)) {
+            errors.add(inName, "must be above 0 and at most " + (MAX_LENGTH_MM / Units.MM_PER_IN) + " in/s");
+            return null;
+        }
+        return converted;
+    }
+
+    /**
      * The velocity of {@code f}: the caller's (m/s or in/us) or a built-in material's; null when
      * none is given and it is optional.
      *

@@ -1,9 +1,11 @@
 package utdigit.web.quantization;
 
+import java.util.List;
 import org.springframework.stereotype.Component;
 import utdigit.core.quantization.QuantizationCalculator;
 import utdigit.core.quantization.QuantizationInput;
 import utdigit.core.quantization.QuantizationResult;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.ResultNotes;
 
@@ -33,7 +35,19 @@ class QuantizationAssessmentCalculation implements Calculation<QuantizationAsses
         return new QuantizationAssessmentResponse(r.levels(), r.lsbPercentFsh(), r.dynamicRangeDb(),
                 r.idealSqnrDb(), r.amplitudeErrorOverDb(), r.amplitudeErrorUnderDb(), r.minimumHeightPercentFsh(),
                 r.minimumHeightDb(), r.evaluationHeightPercentFsh(), r.evaluationErrorUnderDb(),
-                r.averagingSnrGainDb(), inputs, ResultNotes.warnings(r.warnings()),
+                r.averagingSnrGainDb(), tolerance(r, q.amplitudeToleranceDb()), inputs,
+                ResultNotes.warnings(r.warnings()),
                 ResultNotes.references(r.references()));
+    }
+
+    /** Each reading error within the caller's amplitude tolerance: over at most +X dB, under at least -X dB. */
+    private static List<ToleranceCheck> tolerance(QuantizationResult r, Double toleranceDb) {
+        String field = "amplitude_tolerance_db";
+        Double below = toleranceDb == null ? null : -toleranceDb;
+        return ToleranceCheck.builder()
+                .atMost("amplitude_error_over_db", r.amplitudeErrorOverDb(), field, toleranceDb)
+                .atLeast("amplitude_error_under_db", r.amplitudeErrorUnderDb(), field, below)
+                .atLeast("evaluation_error_under_db", r.evaluationErrorUnderDb(), field, below)
+                .build();
     }
 }

@@ -4,6 +4,7 @@ import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.ResultNotes.WarningView;
 
 /** The answer of POST /api/quantization-assessments. */
@@ -41,6 +42,11 @@ record QuantizationAssessmentResponse(
         @Schema(description = "SNR gain of averaging uncorrelated noise, 10 log10(M), dB", format = "double",
                 example = "6.02")
         Double averagingSnrGainDb,
+        @Schema(description = "Each figure compared with a tolerance or requirement of the request: "
+                + "amplitude_error_over_db at most amplitude_tolerance_db, amplitude_error_under_db and "
+                + "evaluation_error_under_db at least its negative; only with amplitude_tolerance_db")
+        List<ToleranceCheck> toleranceChecks,
+
         @Schema(description = "The normalised request, with every default that has an effect; itself a valid "
                 + "request that reproduces this answer")
         QuantizationAssessmentRequest inputs,

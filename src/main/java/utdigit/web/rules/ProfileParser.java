@@ -111,6 +111,10 @@ final class ProfileParser {
     private RequirementProfile profile(RawProfile raw, TokenStreamLocation start) {
         Text id = required(raw.id(), "id", "the profile", start);
         kebab(id, "profile id");
+        if (id.value().equals(utdigit.core.rules.Finding.FEASIBILITY)) {
+            throw failure(id.at(), "profile id '" + id.value() + "' is reserved for the service's own feasibility "
+                    + "checks; choose another id");
+        }
         String title = required(raw.title(), "title", "the profile", start).value();
         String version = required(raw.version(), "version", "the profile", start).value();
         Text status = required(raw.verificationStatus(), "verification_status", "the profile", start);

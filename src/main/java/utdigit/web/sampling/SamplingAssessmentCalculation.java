@@ -1,11 +1,14 @@
 package utdigit.web.sampling;
 
+import java.util.List;
 import org.springframework.stereotype.Component;
+import utdigit.core.common.ReportingFloors;
 import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.sampling.SamplingCalculator;
 import utdigit.core.sampling.SamplingInput;
 import utdigit.core.sampling.SamplingResult;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.Mirrors;
@@ -95,11 +98,23 @@ class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentReq
                 r.signal(), r.peakReading(), q.amplitudeToleranceDb(), gridMm, null, velocityMPerS, null, null, null,
                 null, r.tfmImage(), lateralMm, null, apertureMm, null, depthMm, null);
         return new SamplingAssessmentResponse(r.effectiveSamplingFrequencyMhz(), r.samplingIntervalNs(),
-                r.samplesPerPeriod(), r.samplesPerPeriodUpper(), r.nyquistFrequencyMhz(), r.spectralLevelAtNyquistDb(),
-                r.energyAboveNyquistFraction(), r.sineAmplitudeLossDb(), r.pulseAmplitudeLossDb(), r.timingErrorNs(),
+                r.samplesPerPeriod(), r.samplesPerPeriodUpper(), r.nyquistFrequencyMhz(),
+                ReportingFloors.level(r.spectralLevelAtNyquistDb()), ReportingFloors.fraction(r.energyAboveNyquistFraction()), r.sineAmplitudeLossDb(), r.pulseAmplitudeLossDb(), r.timingErrorNs(),
                 r.timingStandardUncertaintyNs(), r.requiredSamplesPerPeriod(), r.requiredSamplingFrequencyMhz(),
                 r.requiredSamplingFrequencyPulseMhz(), r.tfmGridAmplitudeLossDb(), r.tfmMaxGridSpacingMm(),
-                r.tfmLateralAmplitudeLossDb(), inputs, VelocitySourceView.of(velocity),
+                r.tfmLateralAmplitudeLossDb(), tolerance(r, q.amplitudeToleranceDb()), inputs,
+                VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+    }
+
+    /** Each loss at most the caller's amplitude tolerance. */
+    private static List<ToleranceCheck> tolerance(SamplingResult r, Double toleranceDb) {
+        String field = "amplitude_tolerance_db";
+        return ToleranceCheck.builder()
+                .atMost("sine_amplitude_loss_db", r.sineAmplitudeLossDb(), field, toleranceDb)
+                .atMost("pulse_amplitude_loss_db", r.pulseAmplitudeLossDb(), field, toleranceDb)
+                .atMost("tfm_grid_amplitude_loss_db", r.tfmGridAmplitudeLossDb(), field, toleranceDb)
+                .atMost("tfm_lateral_amplitude_loss_db", r.tfmLateralAmplitudeLossDb(), field, toleranceDb)
+                .build();
     }
 }

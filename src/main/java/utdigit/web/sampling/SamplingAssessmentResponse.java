@@ -4,6 +4,7 @@ import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.ResultNotes.WarningView;
 import utdigit.web.common.VelocitySourceView;
 
@@ -37,13 +38,15 @@ record SamplingAssessmentResponse(
         @Schema(description = "Model value: the Gaussian pulse model's spectral level at the Nyquist frequency, "
                 + "-6 ((fs/2 - fc)/(bw fc/2))^2 dB; with signal ENVELOPE the detected envelope's spectrum, centred at "
                 + "0 Hz: -6 ((fs/2)/(bw fc/2))^2 dB; optimistic for real probes, the instrument's anti-alias filter "
-                + "decides what aliases; only with bandwidth_percent", format = "double", example = "-150")
+                + "decides what aliases; a level below -200 dB is reported as -200 (the model means nothing there); "
+                + "only with bandwidth_percent", format = "double", example = "-150")
         Double spectralLevelAtNyquistDb,
 
         @Schema(description = "Model value: the fraction (0 to 1) of the Gaussian pulse model's energy above the "
                 + "Nyquist frequency; with signal ENVELOPE of the detected envelope's energy at |f| above it (both "
                 + "tails of its spectrum about 0 Hz); optimistic for real probes, the instrument's anti-alias filter "
-                + "decides what aliases; only with bandwidth_percent", format = "double", example = "4.7e-17")
+                + "decides what aliases; a fraction below 1e-20 is reported as 1e-20 (the model means nothing there); "
+                + "only with bandwidth_percent", format = "double", example = "4.7e-17")
         Double energyAboveNyquistFraction,
 
         @Schema(description = "Classic sine bound: a peak sampled n times per period (at the rate that decides "
@@ -100,6 +103,11 @@ record SamplingAssessmentResponse(
                 + "w_lat = 0.8845 lambda z/A, dB; only with tfm_lateral_grid_spacing, tfm_aperture and tfm_depth",
                 format = "double", example = "0.35")
         Double tfmLateralAmplitudeLossDb,
+
+        @Schema(description = "Each figure compared with a tolerance or requirement of the request: "
+                + "sine_amplitude_loss_db, pulse_amplitude_loss_db, tfm_grid_amplitude_loss_db and "
+                + "tfm_lateral_amplitude_loss_db at most amplitude_tolerance_db; only with amplitude_tolerance_db")
+        List<ToleranceCheck> toleranceChecks,
 
         @Schema(description = "The normalised request (lengths in mm, velocity in m/s), with every default that has "
                 + "an effect; itself a valid request that reproduces this answer")

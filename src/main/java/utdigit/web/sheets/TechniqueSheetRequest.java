@@ -2,6 +2,7 @@ package utdigit.web.sheets;
 
 import io.swagger.v3.oas.annotations.media.Schema;
 import jakarta.validation.Valid;
+import java.util.List;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
@@ -31,10 +32,18 @@ public record TechniqueSheetRequest(
         @Size(max = 50) String revision,
         @Schema(description = "Technique of the sheet")
         @NotNull(message = "is required") SheetTechnique technique,
-        @Schema(description = "Requirement profile to check against (GET /api/requirement-profiles); default "
-                + "common-practice", example = "common-practice")
+        @Schema(description = "One requirement profile to check against (GET /api/requirement-profiles); the "
+                + "single form of profile_ids, not both; default common-practice", example = "common-practice")
         @Size(max = 100) @Pattern(regexp = "[a-z0-9]+(-[a-z0-9]+)*", message = "must be a kebab-case profile id")
         String profileId,
+        @Schema(description = "Requirement profiles to check against, one or more (at most 20, no repeats; e.g. a "
+                + "company procedure and the code it invokes): the findings name their profile and the verdict is "
+                + "the worst. In CSV: the ids in one cell separated by ';'. Not with profile_id; default "
+                + "[common-practice]")
+        @Size(min = 1, max = 20)
+        List<@NotNull(message = "must be a profile id") @Size(max = 100)
+                @Pattern(regexp = "[a-z0-9]+(-[a-z0-9]+)*", message = "must be a kebab-case profile id") String>
+                profileIds,
         @Valid Probe probe,
         @Valid Material material,
         @Valid Digitization digitization,
@@ -117,6 +126,8 @@ public record TechniqueSheetRequest(
             @DecimalMin(value = "0", inclusive = false) Double scanLengthIn,
             @Schema(description = "Planned scan speed, mm/s", format = "double", example = "50")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double plannedScanSpeedMmPerS,
+            @Schema(description = "Planned scan speed, in/s (1 in/s = 25.4 mm/s)", format = "double", example = "2")
+            @DecimalMin(value = "0", inclusive = false) Double plannedScanSpeedInPerS,
             @Schema(description = "Gate length, us (> 0, <= 100000)", format = "double", example = "40")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gateLengthUs,
             @Schema(description = "Gate length as a pulse-echo sound path in the part, mm", format = "double", example = "100")
@@ -149,12 +160,20 @@ public record TechniqueSheetRequest(
     public record Tfm(
             @Schema(description = "Depth step of the image grid, mm", format = "double", example = "0.1")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gridSpacingMm,
+            @Schema(description = "Depth step of the image grid, in", format = "double", example = "0.004")
+            @DecimalMin(value = "0", inclusive = false) Double gridSpacingIn,
             @Schema(description = "Lateral step of the image grid, mm", format = "double", example = "0.2")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double lateralGridSpacingMm,
+            @Schema(description = "Lateral step of the image grid, in", format = "double", example = "0.008")
+            @DecimalMin(value = "0", inclusive = false) Double lateralGridSpacingIn,
             @Schema(description = "Active aperture for the lateral check, mm", format = "double", example = "38")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double apertureMm,
+            @Schema(description = "Active aperture for the lateral check, in", format = "double", example = "1.5")
+            @DecimalMin(value = "0", inclusive = false) Double apertureIn,
             @Schema(description = "Depth of the lateral check, mm", format = "double", example = "20")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double depthMm,
+            @Schema(description = "Depth of the lateral check, in", format = "double", example = "0.8")
+            @DecimalMin(value = "0", inclusive = false) Double depthIn,
             @Schema(description = "RF or ENVELOPE image; default RF") TfmImage image) {}
 
     /** The evaluation. */
@@ -167,5 +186,7 @@ public record TechniqueSheetRequest(
             @Schema(description = "Amplitude tolerance of the evaluation, dB (> 0, <= 40)", format = "double", example = "2")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("40") Double amplitudeToleranceDb,
             @Schema(description = "Thickness measurement tolerance, mm", format = "double", example = "0.1")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double thicknessToleranceMm) {}
+            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double thicknessToleranceMm,
+            @Schema(description = "Thickness measurement tolerance, in", format = "double", example = "0.004")
+            @DecimalMin(value = "0", inclusive = false) Double thicknessToleranceIn) {}
 }

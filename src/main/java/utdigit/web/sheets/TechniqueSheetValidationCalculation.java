@@ -1,15 +1,22 @@
 package utdigit.web.sheets;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import org.springframework.stereotype.Component;
+import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.rules.Finding;
 import utdigit.core.rules.RequirementProfile;
+import utdigit.core.sheets.Feasibility;
 import utdigit.core.sheets.SheetEvaluator;
+import utdigit.core.sheets.SheetMetrics;
 import utdigit.core.sheets.SheetInput;
 import utdigit.core.sheets.SheetSetup;
 import utdigit.core.sheets.SheetResult;
 import utdigit.web.common.Calculation;
+import utdigit.web.common.ContractNaming;
+import utdigit.web.common.FieldError;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.InputProblem;
 import utdigit.web.common.Mirrors;
@@ -74,6 +81,34 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
 
     @Override
     public String pointer(String coreField, TechniqueSheetRequest q) {
+        return inCallerForm(sheetPointer(coreField, q), q);
+    }
+
+    /** The pointer of a length the caller gave in inches names the inch field (/material/thickness_in). */
+    private static String inCallerForm(String pointer, TechniqueSheetRequest q) {
+        String[] parts = pointer.split("/");
+        if (parts.length != 3 || !parts[2].endsWith("_mm")) {
+            return pointer;
+        }
+        String inchName = parts[2].substring(0, parts[2].length() - "_mm".length()) + "_in";
+        Object section = component(q, parts[1]);
+        return section != null && component(section, inchName) != null ? "/" + parts[1] + "/" + inchName : pointer;
+    }
+
+    private static Object component(Object record, String jsonName) {
+        for (java.lang.reflect.RecordComponent c : record.getClass().getRecordComponents()) {
+            if (ContractNaming.snake(c.getName()).equals(jsonName)) {
+                try {
+                    return c.getAccessor().invoke(record);
+                } catch (ReflectiveOperationException e) {
+                    return null;
+                }
+            }
+        }
+        return null;
+    }
+
+    private String sheetPointer(String coreField, TechniqueSheetRequest q) {
         String p = SHEET_POINTERS.get(coreField);
         if (p != null) {
             return p;
@@ -90,9 +125,8 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
 
     @Override
     public TechniqueSheetValidationResponse answer(TechniqueSheetRequest q) {
-        String profileId = q.profileId() == null ? DEFAULT_PROFILE : q.profileId();
-        RequirementProfile profile = profiles.find(profileId).orElseThrow(() -> InputProblem.invalid("/profile_id",
-                "unknown requirement profile '" + profileId + "'; see GET /api/requirement-profiles"));
+        List<RequirementProfile> chosen = profiles(q);
+        List<String> profileIds = chosen.stream().map(RequirementProfile::id).toList();
 
         FieldErrors errors = FieldErrors.create();
         TechniqueSheetRequest.Probe p = q.probe() == null ? new TechniqueSheetRequest.Probe(null, null, null, null, null)
@@ -100,13 +134,26 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         TechniqueSheetRequest.Material m = q.material() == null ? new TechniqueSheetRequest.Material(null, null, null,
                 null, null, null, null, null, null, null) : q.material();
         TechniqueSheetRequest.Acquisition a = q.acquisition() == null ? new TechniqueSheetRequest.Acquisition(null, null,
-                null, null, null, null, null, null, null, null, null, null, null, null, null, null, null) : q.acquisition();
+                null, null, null, null, null, null, null, null, null, null, null, null, null, null, null, null)
+                : q.acquisition();
+        TechniqueSheetRequest.Tfm tfm = q.tfm() == null ? null : q.tfm();
+        TechniqueSheetRequest.Evaluation e = q.evaluation();
         TechniqueSheetRequest.Tofd t = q.tofd() == null ? new TechniqueSheetRequest.Tofd(null, null, null, null) : q.tofd();
 
         FieldErrors probeErrors = errors.section("probe");
         Double diameterMm = Mirrors.lengthMm(probeErrors, "element_diameter", p.elementDiameterMm(), p.elementDiameterIn(), false);
         FieldErrors materialErrors = errors.section("material");
-        VelocitySource velocity = Mirrors.velocity(materialErrors, m, false);
+        List<Finding> inputFailures = new ArrayList<>();
+        VelocitySource velocity;
+        try {
+            velocity = Mirrors.velocity(materialErrors, m, false);
+        } catch (CalculationException failure) {
+            if (!Feasibility.isFeasibilityFailure(failure)) {
+                throw failure;
+            }
+            inputFailures.add(Feasibility.failure("material", failure));
+            velocity = null;
+        }
         Double thicknessMm = Mirrors.lengthMm(materialErrors, "thickness", m.thicknessMm(), m.thicknessIn(), false);
         if (m.velocityUncertaintyMPerS() != null && m.velocityUncertaintyPercent() != null) {
             String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s or velocity_uncertainty_percent";
@@ -121,11 +168,24 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
             acqErrors.add("gate_length_us", detail).add(a.gateLengthMm() != null ? "gate_length_mm" : "gate_length_in", detail);
         }
         Double soundPathMm = Mirrors.lengthMm(acqErrors, "max_sound_path", a.maxSoundPathMm(), a.maxSoundPathIn(), false);
+        Double plannedMmPerS = Mirrors.speedMmPerS(acqErrors, "planned_scan_speed", a.plannedScanSpeedMmPerS(),
+                a.plannedScanSpeedInPerS());
+        FieldErrors tfmErrors = errors.section("tfm");
+        Double gridMm = tfm == null ? null
+                : Mirrors.lengthMm(tfmErrors, "grid_spacing", tfm.gridSpacingMm(), tfm.gridSpacingIn(), false);
+        Double lateralMm = tfm == null ? null : Mirrors.lengthMm(tfmErrors, "lateral_grid_spacing",
+                tfm.lateralGridSpacingMm(), tfm.lateralGridSpacingIn(), false);
+        Double apertureMm = tfm == null ? null
+                : Mirrors.lengthMm(tfmErrors, "aperture", tfm.apertureMm(), tfm.apertureIn(), false);
+        Double tfmDepthMm = tfm == null ? null
+                : Mirrors.lengthMm(tfmErrors, "depth", tfm.depthMm(), tfm.depthIn(), false);
+        Double toleranceMm = e == null ? null : Mirrors.lengthMm(errors.section("evaluation"), "thickness_tolerance",
+                e.thicknessToleranceMm(), e.thicknessToleranceIn(), false);
         FieldErrors tofdErrors = errors.section("tofd");
         Double pcsMm = Mirrors.lengthMm(tofdErrors, "probe_centre_separation", t.probeCentreSeparationMm(),
                 t.probeCentreSeparationIn(), false);
         Double depthMm = Mirrors.lengthMm(tofdErrors, "depth_of_interest", t.depthOfInterestMm(), t.depthOfInterestIn(), false);
-        if (velocity == null && (gateMm != null || soundPathMm != null)) {
+        if (velocity == null && inputFailures.isEmpty() && (gateMm != null || soundPathMm != null)) {
             materialErrors.add("velocity_m_per_s", "a gate or sound path in mm needs the part's velocity: give "
                     + "velocity_m_per_s, velocity_in_per_us or material");
         }
@@ -139,8 +199,6 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         Double velocityUncertaintyMPerS = materialUncertainty
                 ? velocity.standardUncertaintyMPerS() : m.velocityUncertaintyMPerS();
         TechniqueSheetRequest.Digitization d = q.digitization();
-        TechniqueSheetRequest.Tfm tfm = q.tfm();
-        TechniqueSheetRequest.Evaluation e = q.evaluation();
         SheetInput sheet = new SheetInput(q.sheetId(), q.revision(), q.technique(),
                 new SheetInput.Probe(p.frequencyMhz(), p.bandwidthPercent(), diameterMm, p.elementCount()),
                 new SheetInput.Part(c, velocityUncertaintyMPerS, m.velocityUncertaintyPercent(), thicknessMm,
@@ -148,43 +206,94 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 d == null ? null : new SheetInput.Digitization(d.samplingFrequencyMhz(), d.decimationFactor(),
                         d.bitDepth(), d.digitizedSignal(), d.quantizer(), d.codeMapping(), d.decimationMode(), d.signal()),
                 new SheetInput.Acquisition(a.pulseRepetitionFrequencyHz(), a.focalLaws(), a.fmcElementCount(),
-                        a.capture(), a.averaging(), incrementMm, lengthMm, a.plannedScanSpeedMmPerS(), a.gateLengthUs(),
+                        a.capture(), a.averaging(), incrementMm, lengthMm, plannedMmPerS, a.gateLengthUs(),
                         gateMm, soundPathMm, a.maxRoundTripUs(), a.wraparoundDecayFactor()),
                 new SheetInput.Tofd(pcsMm, depthMm),
-                tfm == null ? null : new SheetInput.Tfm(tfm.gridSpacingMm(), tfm.lateralGridSpacingMm(),
-                        tfm.apertureMm(), tfm.depthMm(), tfm.image()),
+                tfm == null ? null : new SheetInput.Tfm(gridMm, lateralMm, apertureMm, tfmDepthMm, tfm.image()),
                 e == null ? null : new SheetInput.Evaluation(e.referenceHeightPercentFsh(), e.evaluationLevelDb(),
-                        e.amplitudeToleranceDb(), e.thicknessToleranceMm()),
+                        e.amplitudeToleranceDb(), toleranceMm),
                 setup);
 
-        SheetResult r = SheetEvaluator.evaluate(sheet, profile);
+        SheetResult r = SheetEvaluator.evaluate(sheet, chosen, inputFailures);
 
-        TechniqueSheetRequest inputs = new TechniqueSheetRequest(q.sheetId(), q.revision(), q.technique(), profileId,
+        TechniqueSheetRequest inputs = new TechniqueSheetRequest(q.sheetId(), q.revision(), q.technique(), null,
+                profileIds,
                 q.probe() == null ? null : new TechniqueSheetRequest.Probe(p.frequencyMhz(), p.bandwidthPercent(),
                         diameterMm, null, p.elementCount()),
-                q.material() == null ? null : new TechniqueSheetRequest.Material(null, null, null, c, null,
+                q.material() == null ? null : inputFailures.isEmpty() ? new TechniqueSheetRequest.Material(null, null,
+                        null, c, null,
                         velocityUncertaintyMPerS, m.velocityUncertaintyPercent(), thicknessMm, null,
+                        m.refractedAngleDeg())
+                        : new TechniqueSheetRequest.Material(m.material(), m.waveMode(), m.temperatureC(), null, null,
+                        m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm, null,
                         m.refractedAngleDeg()),
                 d,
                 q.acquisition() == null ? null : new TechniqueSheetRequest.Acquisition(a.pulseRepetitionFrequencyHz(),
                         a.focalLaws(), a.fmcElementCount(), a.capture(), a.averaging(), incrementMm, null, lengthMm,
-                        null, a.plannedScanSpeedMmPerS(), a.gateLengthUs(), gateMm, null, soundPathMm, null,
+                        null, plannedMmPerS, null, a.gateLengthUs(), gateMm, null, soundPathMm, null,
                         a.maxRoundTripUs(), a.wraparoundDecayFactor()),
                 q.tofd() == null ? null : new TechniqueSheetRequest.Tofd(pcsMm, null, depthMm, null),
-                tfm, e, setup == null ? null : SheetSetupSection.normalised(setup));
+                tfm == null ? null : new TechniqueSheetRequest.Tfm(gridMm, null, lateralMm, null, apertureMm, null,
+                        tfmDepthMm, null, tfm.image()),
+                e == null ? null : new TechniqueSheetRequest.Evaluation(e.referenceHeightPercentFsh(),
+                        e.evaluationLevelDb(), e.amplitudeToleranceDb(), toleranceMm, null),
+                setup == null ? null : SheetSetupSection.normalised(setup));
 
         return new TechniqueSheetValidationResponse(q.sheetId(), q.revision(),
-                new TechniqueSheetValidationResponse.ProfileRef(profile.id(), profile.version(), profile.sha256(),
-                        profile.verificationStatus()),
-                r.verdict(), r.findings().stream().map(TechniqueSheetValidationCalculation::view).toList(),
-                r.values(), r.cautions(), inputs,
+                r.profiles().stream().map(pv -> new TechniqueSheetValidationResponse.ProfileRef(pv.profile().id(),
+                        pv.profile().version(), pv.profile().sha256(), pv.profile().verificationStatus(),
+                        pv.verdict())).toList(),
+                r.verdict(), r.findings().stream().map(f -> view(f, q)).toList(),
+                presented(r.values()), r.cautions(), inputs,
                 materialUncertainty ? VelocitySourceView.usingMaterialUncertainty(velocity) : VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 
-    private static TechniqueSheetValidationResponse.FindingView view(Finding f) {
-        return new TechniqueSheetValidationResponse.FindingView(f.ruleId(), f.title(), f.metric(), f.actual(),
-                f.limit(), f.limitMetric(), f.comparison(), f.verdict(), f.source(),
-                f.missing().isEmpty() ? null : f.missing());
+    /** The values as answered: counts as integers (exact in a double below 2^53), the rest as they are. */
+    private static Map<String, Number> presented(Map<String, Double> values) {
+        Map<String, Number> out = new java.util.LinkedHashMap<>();
+        values.forEach((metric, value) -> out.put(metric, SheetMetrics.COUNTS.contains(metric)
+                && value == Math.rint(value) && Math.abs(value) < 0x1p53 ? (Number) value.longValue() : value));
+        return out;
+    }
+
+    /** The profiles asked for: profile_id or profile_ids (not both), default common-practice; each known once. */
+    private List<RequirementProfile> profiles(TechniqueSheetRequest q) {
+        if (q.profileId() != null && q.profileIds() != null) {
+            String detail = "give the profiles once: profile_id (one) or profile_ids (one or more)";
+            throw InputProblem.invalid(List.of(new FieldError("/profile_id", detail),
+                    new FieldError("/profile_ids", detail)));
+        }
+        if (q.profileIds() == null) {
+            String id = q.profileId() == null ? DEFAULT_PROFILE : q.profileId();
+            return List.of(profiles.find(id).orElseThrow(() -> InputProblem.invalid("/profile_id",
+                    "unknown requirement profile '" + id + "'; see GET /api/requirement-profiles")));
+        }
+        List<FieldError> errors = new ArrayList<>();
+        List<RequirementProfile> out = new ArrayList<>();
+        for (int i = 0; i < q.profileIds().size(); i++) {
+            String id = q.profileIds().get(i);
+            String pointer = "/profile_ids/" + i;
+            if (q.profileIds().subList(0, i).contains(id)) {
+                errors.add(new FieldError(pointer, "profile '" + id + "' is named twice"));
+                continue;
+            }
+            profiles.find(id).ifPresentOrElse(out::add, () -> errors.add(new FieldError(pointer,
+                    "unknown requirement profile '" + id + "'; see GET /api/requirement-profiles")));
+        }
+        if (!errors.isEmpty()) {
+            throw InputProblem.invalid(errors);
+        }
+        return out;
+    }
+
+    private TechniqueSheetValidationResponse.FindingView view(Finding f, TechniqueSheetRequest q) {
+        return new TechniqueSheetValidationResponse.FindingView(f.profileId(), f.ruleId(), f.title(), f.metric(),
+                f.actual(), f.limit(), f.limitMetric(), f.comparison(), f.verdict(), f.source(),
+                f.missing().isEmpty() ? null : f.missing(),
+                f.missingInputs().isEmpty() ? null : f.missingInputs(),
+                f.reason(),
+                f.settings().isEmpty() ? null : f.settings().stream().map(name -> pointer(name, q)).distinct()
+                        .toList());
     }
 }

@@ -1,5 +1,6 @@
 package utdigit.web.thickness;
 
+import java.util.List;
 import java.util.Locale;
 import org.springframework.stereotype.Component;
 import utdigit.core.common.CalculationException;
@@ -7,6 +8,7 @@ import utdigit.core.materials.VelocitySource;
 import utdigit.core.thickness.ThicknessCalculator;
 import utdigit.core.thickness.ThicknessInput;
 import utdigit.core.thickness.ThicknessResult;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.JsonPointers;
@@ -94,7 +96,10 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         return new ThicknessResolutionResponse(r.thicknessResolutionMm(), r.thicknessResolutionIn(),
                 r.roundTripTimeUs(), r.samplesAcrossThickness(), r.relativeResolutionPercent(),
                 r.timingStandardUncertaintyNs(), r.timingWorstCaseErrorNs(), r.standardUncertaintyMm(),
-                r.expandedUncertaintyMm(), r.requiredSamplingFrequencyMhz(), inputs,
+                r.expandedUncertaintyMm(), r.requiredSamplingFrequencyMhz(),
+                ToleranceCheck.builder().atMost("thickness_resolution_mm", r.thicknessResolutionMm(),
+                        "required_resolution_mm", requiredResolutionMm).build(),
+                inputs,
                 materialUncertainty ? VelocitySourceView.usingMaterialUncertainty(velocity) : VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }

@@ -3,6 +3,7 @@ package utdigit.web.thickness;
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import utdigit.web.common.ResultNotes.ReferenceView;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.ResultNotes.WarningView;
 import utdigit.web.common.VelocitySourceView;
 
@@ -40,6 +41,10 @@ record ThicknessResolutionResponse(
         @Schema(description = "With required_resolution: the raw sampling frequency to set (same decimation) for "
                 + "that resolution, decimation_factor x v / (2 m r), MHz", format = "double", example = "59.2")
         Double requiredSamplingFrequencyMhz,
+        @Schema(description = "Each figure compared with a tolerance or requirement of the request: "
+                + "thickness_resolution_mm at most required_resolution_mm; only with required_resolution")
+        List<ToleranceCheck> toleranceChecks,
+
         @Schema(description = "The normalised request (lengths in mm, velocity in m/s, the velocity uncertainty in "
                 + "the form given (absent when none: 0), and measurement, echo_spacing, decimation_factor and "
                 + "coverage_factor filled in); itself a valid request that reproduces this answer")

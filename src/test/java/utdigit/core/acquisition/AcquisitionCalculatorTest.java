@@ -576,4 +576,35 @@ class AcquisitionCalculatorTest {
                     "capture");
         }
     }
+
+    @Nested
+    @DisplayName("exact quantities come out exact")
+    class ExactQuantities {
+        @Test
+        void aFileSizeThatIsAWholeNumberOfMegabytes() {
+            // 25 MHz x 64 us = 1600 samples, 1 byte each, 16 focal laws: 25 600 bytes per position; 1500 mm at
+            // 0.3 mm is 5000 positions: 128 000 000 bytes = 128 MB exactly (arithmetic). In binary floating
+            // point 25 600 x (1000/0.3) / 1e6 x 1500 / 1000 gives 128.00000000000003.
+            AcquisitionResult r = AcquisitionCalculator.compute(AcquisitionInput.builder(25, 8, 0.3, 1000.0)
+                    .gateLengthUs(64.0).focalLaws(16).scanLengthMm(1500.0).build());
+            assertThat(25600 * (1000 / 0.3) / 1e6 * 1500 / 1000).isNotEqualTo(128.0); // the noise this avoids
+            assertThat(r.fileSizeMegabytes()).isEqualTo(128.0);
+            assertThat(r.megabytesPerMetre()).isEqualTo(25600 / 300.0); // one correctly rounded division
+        }
+
+        @Test
+        void aWrapAroundLimitThatIsAnExactDecimal() {
+            // 1e6 / (1.6 x 0.8 us) = 1e6 / 1.28 = 781 250 Hz exactly (arithmetic); binary floating point gives
+            // 781 249.9999999999 because 1.6 x 0.8 is not 1.28 in binary.
+            assertThat(1e6 / (1.6 * 0.8)).isNotEqualTo(781250.0); // the noise this avoids
+            assertThat(AcquisitionCalculator.maxPrfWithoutWraparoundHz(0.8, 1.6)).isEqualTo(781250.0);
+        }
+
+        @Test
+        void aScanSpeedThatIsAnExactDecimal() {
+            // 1500 Hz x 1.1 mm / 3 firings = 550 mm/s exactly (arithmetic); 1500 x 1.1 / 3 in binary is 550.0000000000001.
+            assertThat(1500 * 1.1 / 3).isNotEqualTo(550.0);
+            assertThat(AcquisitionCalculator.maxScanSpeedMmPerS(1500, 1.1, 3, 1)).isEqualTo(550.0);
+        }
+    }
 }

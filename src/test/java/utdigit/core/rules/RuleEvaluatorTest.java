@@ -37,11 +37,38 @@ class RuleEvaluatorTest {
         }
 
         @Test
-        void noApplicableRuleIsAPass() {
+        void noApplicableRuleIsNotCoveredNeverAPass() {
+            // A TOFD-only profile says nothing about a pulse-echo sheet: nothing was checked.
             Rule tofdOnly = rule("a", "x", Comparison.AT_LEAST, Limit.of(1), Set.of("TOFD"), List.of());
-            List<Finding> findings = RuleEvaluator.evaluate(profile(tofdOnly), "PULSE_ECHO", Map.of());
+            List<Finding> findings = RuleEvaluator.evaluate(profile(tofdOnly), "PULSE_ECHO", Map.of("x", 2.0));
             assertThat(findings).isEmpty();
-            assertThat(RuleEvaluator.verdict(findings)).isEqualTo(Verdict.PASS);
+            assertThat(RuleEvaluator.verdict(findings)).isEqualTo(Verdict.NOT_COVERED);
+        }
+
+        @Test
+        void aRuleWhoseConditionExcludesTheSheetDoesNotCoverIt() {
+            // A thickness band that the sheet lies outside of applies no rule: NOT_COVERED, not PASS.
+            Rule thin = rule("a", "x", Comparison.AT_LEAST, Limit.of(1), Set.of(),
+                    List.of(new Condition("t", Comparison.AT_MOST, 75)));
+            assertThat(RuleEvaluator.verdict(RuleEvaluator.evaluate(profile(thin), "TOFD", Map.of("x", 2.0, "t", 80.0))))
+                    .isEqualTo(Verdict.NOT_COVERED);
+            assertThat(RuleEvaluator.verdict(RuleEvaluator.evaluate(profile(thin), "TOFD", Map.of("x", 2.0, "t", 70.0))))
+                    .isEqualTo(Verdict.PASS);
+        }
+
+        @Test
+        void theWorstVerdictOrdersFailIncompleteNotCoveredPass() {
+            assertThat(Verdict.worst(Verdict.PASS, Verdict.NOT_COVERED)).isEqualTo(Verdict.NOT_COVERED);
+            assertThat(Verdict.worst(Verdict.INCOMPLETE, Verdict.NOT_COVERED)).isEqualTo(Verdict.INCOMPLETE);
+            assertThat(Verdict.worst(Verdict.INCOMPLETE, Verdict.FAIL)).isEqualTo(Verdict.FAIL);
+            assertThat(Verdict.worst(Verdict.PASS, Verdict.PASS)).isEqualTo(Verdict.PASS);
+        }
+
+        @Test
+        void findingsNameTheirProfile() {
+            Rule passes = rule("a", "x", Comparison.AT_LEAST, Limit.of(1), Set.of(), List.of());
+            assertThat(RuleEvaluator.evaluate(profile(passes), "TOFD", Map.of("x", 2.0)))
+                    .extracting(Finding::profileId).containsExactly("p");
         }
     }
 

@@ -254,6 +254,12 @@ class BatchCsvApiTest extends BatchApiTest {
                     assertThat(cell).as(column).isEmpty();
                 } else if (value.isNumber()) {
                     assertThat(Double.parseDouble(cell)).as(column).isEqualTo(value.asDouble());
+                } else if (value.isArray()) {
+                    // tolerance checks: figure=WITHIN or figure=OUTSIDE, ';'-separated
+                    List<String> items = new java.util.ArrayList<>();
+                    value.forEach(c -> items.add(c.path("figure").asString() + "="
+                            + (c.path("within").asBoolean() ? "WITHIN" : "OUTSIDE")));
+                    assertThat(cell).as(column).isEqualTo(String.join(";", items));
                 } else {
                     assertThat(cell).as(column).isEqualTo(value.asString());
                 }

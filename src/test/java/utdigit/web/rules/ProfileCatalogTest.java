@@ -496,6 +496,13 @@ class ProfileCatalogTest {
         }
 
         @Test
+        void onTheIdReservedForTheServicesFeasibilityChecks() throws IOException {
+            // Findings of the feasibility checks carry profile_id service-feasibility: no profile may share it.
+            String yaml = replace(GOOD, "id: acme-pulse-echo", "id: service-feasibility");
+            assertAt(failure(yaml), yaml, position(yaml, "service-feasibility"), "is reserved");
+        }
+
+        @Test
         void onAnUnknownVerificationStatus() throws IOException {
             String yaml = replace(GOOD, "verification_status: VERIFIED", "verification_status: CHECKED");
             assertAt(failure(yaml), yaml, position(yaml, "CHECKED"), "VERIFIED or UNVERIFIED, not 'CHECKED'");
