@@ -93,8 +93,8 @@ public final class PistonBeam {
      * through the refracting interface, D_eff = D cos(beta) / cos(alpha) (alpha the incident angle in
      * the wedge, beta the refracted angle in the part). The plane perpendicular to incidence keeps D.
      *
-     * <p>Reference: Krautkraemer, Ultrasonic Testing of Materials (from memory): the virtual probe
-     * of an angle-beam probe.
+     * <p>Reference: src/docs/methods.md 2.9 (derived there from the ray geometry at the interface:
+     * the beam's width along the interface is D/cos(alpha) on both sides).
      *
      * @param elementDiameterMm element diameter D, mm, > 0
      * @param incidentAngleDeg alpha, degrees, in [0, 90)
@@ -118,8 +118,8 @@ public final class PistonBeam {
      * near field D_eff^2 / (4 lambda).
      *
      * <p>Reference: paraxial beam transfer through an oblique plane interface, the tangential-plane
-     * ray matrix diag(cos(beta)/cos(alpha), (v cos(alpha))/(v_w cos(beta))) of paraxial optics
-     * (from memory), applied to sound (derived).
+     * ray matrix diag(cos(beta)/cos(alpha), (v cos(alpha))/(v_w cos(beta))), applied to sound
+     * (derived in src/docs/methods.md 2.9).
      *
      * @param wedgePathMm sound path w in the wedge, mm, > 0
      * @param wedgeVelocityMPerS v_w, m/s, > 0

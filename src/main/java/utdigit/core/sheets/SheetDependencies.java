@@ -49,7 +49,16 @@ public final class SheetDependencies {
             Map.entry("reference_height_percent_fsh", "/evaluation/reference_height_percent_fsh"),
             Map.entry("evaluation_level_db", "/evaluation/evaluation_level_db"),
             Map.entry("amplitude_tolerance_db", "/evaluation/amplitude_tolerance_db"),
-            Map.entry("thickness_tolerance_mm", "/evaluation/thickness_tolerance_mm"));
+            Map.entry("thickness_tolerance_mm", "/evaluation/thickness_tolerance_mm"),
+            Map.entry("beam_width_6db_mm", "/setup/beam_width_6db_mm"),
+            Map.entry("sound_path_mm", "/setup/sound_path_mm"),
+            Map.entry("index_step_mm", "/setup/index_step_mm"),
+            Map.entry("angular_step_deg", "/setup/angular_step_deg"),
+            Map.entry("element_pitch_mm", "/setup/element_pitch_mm"),
+            Map.entry("active_elements", "/setup/active_elements"),
+            Map.entry("dac_span_db", "/setup/dac_span_db"),
+            Map.entry("gate_start_us", "/setup/gate_start_us"),
+            Map.entry("gate_end_us", "/setup/gate_end_us"));
 
     private static final String FS = "sampling_frequency_mhz";
     private static final String F = "frequency_mhz";
@@ -120,7 +129,22 @@ public final class SheetDependencies {
             Map.entry("max_scan_speed_mm_per_s", List.of("pulse_repetition_frequency_hz", "scan_increment_mm")),
             Map.entry("max_prf_without_wraparound_hz", List.of("max_sound_path_mm|max_round_trip_us")),
             Map.entry("evaluation_error_magnitude_db", List.of("evaluation_error_under_db")),
-            Map.entry("combined_amplitude_error_db", List.of("pulse_amplitude_loss_db", "evaluation_error_under_db")));
+            Map.entry("combined_amplitude_error_db", List.of("pulse_amplitude_loss_db", "evaluation_error_under_db")),
+            // The setup section's metrics (SheetSetupMetrics): the beam width is given, or comes from
+            // the round probe at the sound path; its pointer names the given form.
+            Map.entry("scan_increment_loss_db", List.of("beam_width_6db_mm", "scan_increment_mm")),
+            Map.entry("index_step_loss_db", List.of("beam_width_6db_mm", "index_step_mm")),
+            Map.entry("angular_step_loss_db", List.of("beam_width_6db_mm", "angular_step_deg", "sound_path_mm")),
+            Map.entry("aperture_near_field_length_mm", List.of(F, C, "element_pitch_mm", "active_elements")),
+            Map.entry("aperture_beam_spread_6db_deg", List.of(F, C, "element_pitch_mm", "active_elements")),
+            Map.entry("max_grating_lobe_free_pitch_mm", List.of(F, C, "element_pitch_mm")),
+            Map.entry("lowest_reference_height_percent_fsh",
+                    List.of("bit_depth", "dac_span_db", "reference_height_percent_fsh")),
+            Map.entry("dac_error_magnitude_db", List.of("bit_depth", "dac_span_db", "reference_height_percent_fsh")),
+            Map.entry("backwall_time_us", List.of(C, PCS, "thickness_mm")),
+            Map.entry("gate_start_margin_us", List.of(C, PCS, "thickness_mm", "gate_start_us", "gate_end_us")),
+            Map.entry("gate_end_margin_us", List.of(C, PCS, "thickness_mm", "gate_start_us", "gate_end_us")),
+            Map.entry("tofd_timing_depth_uncertainty_mm", List.of(FS, C, PCS, "thickness_mm", "depth_of_interest_mm")));
 
     /** A TOFD sheet's depth step per sample is the TOFD geometry's, not an angle beam's. */
     private static final List<String> TOFD_DEPTH_RESOLUTION = List.of(FS, C, PCS, "depth_of_interest_mm");

@@ -205,6 +205,7 @@ public final class SheetEvaluator {
         acquisition(sheet, v);
         SheetSetupMetrics.Computed setup = SheetSetupMetrics.compute(sheet);
         setup.values().forEach(v::put);
+        SheetSetupMetrics.INPUTS.stream().filter(v.values::containsKey).forEach(v.given::add);
         v.warnings.addAll(setup.warnings());
         v.references.addAll(setup.references());
         Double pulseLoss = v.values.get("pulse_amplitude_loss_db");
