@@ -9,6 +9,7 @@ import org.apache.commons.math3.optim.univariate.BrentOptimizer;
 import org.apache.commons.math3.optim.univariate.SearchInterval;
 import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 import utdigit.core.common.Decibels;
+import utdigit.core.common.SearchBudget;
 import utdigit.core.sampling.PeakReading;
 
 /**
@@ -36,6 +37,13 @@ final class BandLimitedRecord {
     static final int UPSAMPLING = 32;
     /** Local minima of the phase scan that are refined. */
     private static final int REFINED_MINIMA = 4;
+    /**
+     * Work bound of one worst-case search over the sampling phase, in values of the reconstruction
+     * read (about 20 ns each warm): the search answers or reports its bound for every record and rate.
+     */
+    public static final long LOSS_SEARCH_BUDGET = 4_000_000;
+    /** Work bound of the required-rate search (its scan and bisection), in values of the reconstruction. */
+    public static final long RATE_SEARCH_BUDGET = 16_000_000;
     /** Margin on the largest second derivative read from the fine grid's second differences. */
     private static final double SECOND_DERIVATIVE_MARGIN = 1.02;
 
@@ -154,7 +162,9 @@ final class BandLimitedRecord {
      *
      * @return {ratio of the worst read peak to the true peak, the worst phase in us from the record's first sample}
      */
-    double[] worstCase(double intervalUs, PeakReading reading, double peak, double secondDerivative) {
+    double[] worstCase(double intervalUs, PeakReading reading, double peak, double secondDerivative,
+                       SearchBudget budget) {
+        budget.spend(fine.length);
         double floor = peak - secondDerivative * intervalUs * intervalUs / 8.0;
         double slack = secondDerivative * fineIntervalUs * fineIntervalUs;
         List<double[]> stretches = new ArrayList<>();
@@ -177,7 +187,7 @@ final class BandLimitedRecord {
         double step = intervalUs / phases;
         double[] r = new double[phases];
         for (int p = 0; p < phases; p++) {
-            r[p] = readPeak(p * step, intervalUs, reading, parts);
+            r[p] = readPeak(p * step, intervalUs, reading, parts, budget);
         }
         // The lowest local minima of the (periodic) scan, refined.
         Integer[] order = new Integer[phases];
@@ -199,7 +209,7 @@ final class BandLimitedRecord {
             refined++;
             double centre = p * step;
             var point = optimizer.optimize(new MaxEval(400), GoalType.MINIMIZE,
-                    new UnivariateObjectiveFunction(phi -> readPeak(phi, intervalUs, reading, parts)),
+                    new UnivariateObjectiveFunction(phi -> readPeak(phi, intervalUs, reading, parts, budget)),
                     new SearchInterval(centre - step, centre + step, centre));
             if (point.getValue() < worst) {
                 worst = point.getValue();
@@ -211,11 +221,16 @@ final class BandLimitedRecord {
     }
 
     /** max over samples phi + k dt inside the stretches of the read value. */
-    private double readPeak(double phaseUs, double intervalUs, PeakReading reading, double[][] parts) {
+    private double readPeak(double phaseUs, double intervalUs, PeakReading reading, double[][] parts,
+                            SearchBudget budget) {
         double max = Double.NEGATIVE_INFINITY;
         for (double[] part : parts) {
             long from = (long) StrictMath.ceil((part[0] - phaseUs) / intervalUs);
             long to = (long) StrictMath.floor((part[1] - phaseUs) / intervalUs);
+            if (budget.wouldExceed((double) to - from + 1.0)) {
+                throw SearchBudget.Exhausted.predicted(budget);
+            }
+            budget.spend(StrictMath.max(0L, to - from + 1));
             for (long k = from; k <= to; k++) {
                 max = StrictMath.max(max, read(value(phaseUs + k * intervalUs), reading));
             }
@@ -228,21 +243,23 @@ final class BandLimitedRecord {
      * start where the curvature bound peak - M2 dt^2/8 meets 10^(-X/20) of the peak (every faster rate
      * passes), scan down in {@code scanStep} relative steps while the loss passes, then bisect the
      * last passing and first failing rate to {@code bisection} relative. Rates at or below
-     * {@code floorMhz} count as failing.
+     * {@code floorMhz} count as failing. Every evaluation spends from {@code budget}.
+     *
+     * @throws SearchBudget.Exhausted when the search reaches its bound
      */
     double requiredRateMhz(double toleranceDb, PeakReading reading, double floorMhz, double scanStep,
-                           double bisection) {
+                           double bisection, SearchBudget budget) {
         double peak = peak(reading);
         double m2 = secondDerivativeBound();
         double ratio = Decibels.toRatio(-toleranceDb);
         double passing = 1.0 / StrictMath.sqrt(8.0 * peak * (1.0 - ratio) / m2);
-        for (int i = 0; i < 64 && !passes(passing, toleranceDb, reading, peak, m2, floorMhz); i++) {
+        for (int i = 0; i < 64 && !passes(passing, toleranceDb, reading, peak, m2, floorMhz, budget); i++) {
             passing *= 1.01; // interpolation rounding at the bound itself
         }
         double failing;
         while (true) {
             double next = passing * (1.0 - scanStep);
-            if (!passes(next, toleranceDb, reading, peak, m2, floorMhz)) {
+            if (!passes(next, toleranceDb, reading, peak, m2, floorMhz, budget)) {
                 failing = next;
                 break;
             }
@@ -250,7 +267,7 @@ final class BandLimitedRecord {
         }
         while (passing - failing > bisection * passing) {
             double middle = 0.5 * (passing + failing);
-            if (passes(middle, toleranceDb, reading, peak, m2, floorMhz)) {
+            if (passes(middle, toleranceDb, reading, peak, m2, floorMhz, budget)) {
                 passing = middle;
             } else {
                 failing = middle;
@@ -260,11 +277,11 @@ final class BandLimitedRecord {
     }
 
     private boolean passes(double rateMhz, double toleranceDb, PeakReading reading, double peak, double m2,
-                           double floorMhz) {
+                           double floorMhz, SearchBudget budget) {
         if (!(rateMhz > floorMhz)) {
             return false;
         }
-        double ratio = worstCase(1.0 / rateMhz, reading, peak, m2)[0];
+        double ratio = worstCase(1.0 / rateMhz, reading, peak, m2, budget)[0];
         return ratio > 0.0 && -Decibels.fromRatio(ratio) <= toleranceDb;
     }
 }

@@ -10,6 +10,7 @@ import utdigit.core.common.CalculationException;
 import utdigit.core.common.Decibels;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
+import utdigit.core.common.SearchBudget;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.CentreFrequencyConvention;
@@ -230,8 +231,19 @@ public final class WaveformAnalyzer {
                                 + "samples per period of the measured centre frequency (%s MHz)",
                         num(amplitudeMhz), num(centreMhz))));
             } else {
-                double[] worst = record.worstCase(1.0 / amplitudeMhz, reading, peak, m2);
-                if (worst[0] > 0.0) {
+                double[] worst;
+                try {
+                    worst = record.worstCase(1.0 / amplitudeMhz, reading, peak, m2,
+                            SearchBudget.of(BandLimitedRecord.LOSS_SEARCH_BUDGET));
+                } catch (SearchBudget.Exhausted e) {
+                    worst = null;
+                    warnings.add(Warning.of(SamplingCalculator.SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
+                            "pulse_amplitude_loss_db is null: the search over the sampling phase reached its bound "
+                                    + "of %d values of the reconstructed record", e.limit())));
+                }
+                if (worst == null) {
+                    // reported above
+                } else if (worst[0] > 0.0) {
                     loss = Optional.of(-Decibels.fromRatio(worst[0]));
                     phaseNs = Optional.of(worst[1] * 1000.0);
                     double intervalUs = 1.0 / amplitudeMhz;
@@ -249,11 +261,20 @@ public final class WaveformAnalyzer {
             }
             references.add(Reference.of("pulse amplitude loss of the record", Sources.WAVEFORM_LOSS));
 
-            Double required = null;
+            Optional<Double> required = null;
             if (in.amplitudeToleranceDb() != null) {
-                double rateMhz = record.requiredRateMhz(in.amplitudeToleranceDb(), reading, 2.0 * centreMhz,
-                        RequiredPulseRate.SCAN_STEP_FRACTION, RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE);
-                required = clock.rawFrequencyForAmplitudeRateMhz(rateMhz);
+                required = Optional.empty();
+                try {
+                    double rateMhz = record.requiredRateMhz(in.amplitudeToleranceDb(), reading, 2.0 * centreMhz,
+                            RequiredPulseRate.SCAN_STEP_FRACTION, RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE,
+                            SearchBudget.of(BandLimitedRecord.RATE_SEARCH_BUDGET));
+                    required = Optional.of(clock.rawFrequencyForAmplitudeRateMhz(rateMhz));
+                } catch (SearchBudget.Exhausted e) {
+                    warnings.add(Warning.of(SamplingCalculator.SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
+                            "required_sampling_frequency_pulse_mhz is null: the search for the record's rate reached "
+                                    + "its bound of %d values of the reconstructed record (amplitude_tolerance_db too "
+                                    + "small to resolve on this record)", e.limit())));
+                }
                 references.add(Reference.of("required sampling frequency for the record", Sources.WAVEFORM_REQUIRED_RATE));
             }
 

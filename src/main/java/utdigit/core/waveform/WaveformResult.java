@@ -103,7 +103,7 @@ public record WaveformResult(
             Optional<Double> pulseAmplitudeLossDb,
             Optional<Double> worstPhaseNs,
             double energyAboveNyquistFraction,
-            Double requiredSamplingFrequencyPulseMhz,
+            Optional<Double> requiredSamplingFrequencyPulseMhz,
             Optional<Double> modelPulseAmplitudeLossDb,
             Optional<Double> modelEnergyAboveNyquistFraction,
             Optional<Double> modelRequiredSamplingFrequencyPulseMhz,

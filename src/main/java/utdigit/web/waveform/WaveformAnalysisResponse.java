@@ -104,7 +104,7 @@ record WaveformAnalysisResponse(
         @Schema(description = "The raw sampling frequency to set (same decimation) above which every rate keeps the "
                 + "recorded pulse's loss within amplitude_tolerance_db, MHz; only with amplitude_tolerance_db",
                 format = "double", example = "34.37")
-        Double requiredSamplingFrequencyPulseMhz,
+        Optional<Double> requiredSamplingFrequencyPulseMhz,
 
         @Schema(description = "The Gaussian model's pulse_amplitude_loss_db at the target (as the sampling "
                 + "assessment computes it); null where it has none", format = "double", example = "1.953",

@@ -156,7 +156,7 @@ class WaveformAnalyzerTest {
         double lossTolerance = bandwidthPercent > 80 ? 0.005 : 0.002;
         assertThat(r.target().pulseAmplitudeLossDb().orElseThrow()).isCloseTo(modelLoss, within(lossTolerance));
         double required = RequiredPulseRate.forRf(g, PeakReading.ABSOLUTE, 1.0).amplitudeSamplingFrequencyMhz();
-        assertThat(r.target().requiredSamplingFrequencyPulseMhz()).isCloseTo(required,
+        assertThat(r.target().requiredSamplingFrequencyPulseMhz().orElseThrow()).isCloseTo(required,
                 within((bandwidthPercent > 80 ? 1e-3 : 3e-4) * required));
         // The model figures beside them are the sampling calculator's for the measured band, so they
         // agree with the true model's to the band's measurement error.
@@ -181,7 +181,7 @@ class WaveformAnalyzerTest {
         // The definition (the rate above which every rate passes), read back at the answer for the ringing record.
         double[] x = samples("ringing-5mhz");
         WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.of(x, RECORD_MHZ).withTarget(25.0, null, null, null, 1.0));
-        double rate = r.target().requiredSamplingFrequencyPulseMhz();
+        double rate = r.target().requiredSamplingFrequencyPulseMhz().orElseThrow();
         double at = WaveformAnalyzer.analyse(WaveformInput.of(x, RECORD_MHZ).withTarget(rate, null, null, null, null))
                 .target().pulseAmplitudeLossDb().orElseThrow();
         double below = WaveformAnalyzer.analyse(WaveformInput.of(x, RECORD_MHZ)
