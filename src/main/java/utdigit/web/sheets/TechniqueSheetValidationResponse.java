@@ -20,7 +20,8 @@ record TechniqueSheetValidationResponse(
         @Schema(description = "The sheet's identifier, as sent") String sheetId,
         @Schema(description = "The sheet's revision, as sent") String revision,
         @Schema(description = "The profile the sheet was checked against") ProfileRef profile,
-        @Schema(description = "PASS, FAIL or INCOMPLETE", allowableValues = {"PASS", "FAIL", "INCOMPLETE"})
+        @Schema(description = "PASS, FAIL or INCOMPLETE", implementation = String.class,
+                allowableValues = {"PASS", "FAIL", "INCOMPLETE"})
         Verdict verdict,
         @Schema(description = "One finding per applicable rule, in the profile's order") List<FindingView> findings,
         @Schema(description = "Every metric computed or given, by name (lengths in mm, velocity in m/s)")
@@ -54,7 +55,8 @@ record TechniqueSheetValidationResponse(
             @JsonInclude(JsonInclude.Include.ALWAYS) Double limit,
             @Schema(description = "The metric the limit names, when the limit is a metric") String limitMetric,
             @Schema(description = "AT_LEAST, AT_MOST or EQUALS") Comparison comparison,
-            @Schema(description = "PASS, FAIL or NOT_EVALUATED", allowableValues = {"PASS", "FAIL", "NOT_EVALUATED"})
+            @Schema(description = "PASS, FAIL or NOT_EVALUATED", implementation = String.class,
+                    allowableValues = {"PASS", "FAIL", "NOT_EVALUATED"})
             Verdict verdict,
             @Schema(description = "Where the requirement comes from") String source,
             @Schema(description = "Metrics the rule needed that the sheet does not give or allow to compute")
