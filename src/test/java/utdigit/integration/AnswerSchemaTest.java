@@ -355,6 +355,34 @@ class AnswerSchemaTest extends ApiTest {
         assertThat(untyped).as("schemas with properties but no type object").isEmpty();
     }
 
+    /** An enum lists each value once (a generated client's enum type would not compile otherwise). */
+    @Test
+    void noEnumListsAValueTwice() {
+        List<String> twice = new ArrayList<>();
+        duplicateEnums("#", document(), twice);
+        assertThat(twice).as("enums with a value listed twice").isEmpty();
+    }
+
+    private static void duplicateEnums(String where, JsonNode node, List<String> found) {
+        if (node instanceof ObjectNode object) {
+            if (object.path("enum").isArray()) {
+                Set<String> seen = new java.util.HashSet<>();
+                for (JsonNode v : object.get("enum")) {
+                    if (!seen.add(v.toString())) {
+                        found.add(where + " " + v);
+                    }
+                }
+            }
+            for (var e : object.properties()) {
+                duplicateEnums(where + "/" + e.getKey(), e.getValue(), found);
+            }
+        } else if (node instanceof ArrayNode array) {
+            for (int i = 0; i < array.size(); i++) {
+                duplicateEnums(where + "/" + i, array.get(i), found);
+            }
+        }
+    }
+
     private static void untypedObjects(String where, JsonNode node, List<String> found, boolean schemaMap) {
         if (node instanceof ObjectNode object) {
             if (!schemaMap && object.has("properties") && object.get("properties").isObject()

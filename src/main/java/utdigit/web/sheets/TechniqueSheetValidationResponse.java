@@ -25,7 +25,8 @@ record TechniqueSheetValidationResponse(
         @Schema(description = "The profiles the sheet was checked against, in the order asked, each with its own "
                 + "verdict") List<ProfileRef> profiles,
         @Schema(description = "PASS, FAIL, INCOMPLETE or NOT_COVERED: the worst of the profiles' verdicts, FAIL "
-                + "when a feasibility check failed") Verdict verdict,
+                + "when a feasibility check failed", implementation = String.class,
+                allowableValues = {"PASS", "FAIL", "INCOMPLETE", "NOT_COVERED"}) Verdict verdict,
         @Schema(description = "The failed feasibility checks of the service (profile_id service-feasibility) "
                 + "first, then one finding per applicable rule of each profile, in the profiles' order")
         List<FindingView> findings,
@@ -47,7 +48,8 @@ record TechniqueSheetValidationResponse(
             @Schema(description = "SHA-256 of the profile's canonical content") @JsonProperty("sha256") String sha256,
             @Schema(description = "VERIFIED or UNVERIFIED") VerificationStatus verificationStatus,
             @Schema(description = "The profile's verdict on the sheet: FAIL, INCOMPLETE, NOT_COVERED (no rule of "
-                    + "the profile applies to the sheet) or PASS") Verdict verdict) {}
+                    + "the profile applies to the sheet) or PASS", implementation = String.class,
+                    allowableValues = {"PASS", "FAIL", "INCOMPLETE", "NOT_COVERED"}) Verdict verdict) {}
 
     /** The outcome of one rule, or of a failed feasibility check. */
     @Schema(name = "Finding")
@@ -65,7 +67,9 @@ record TechniqueSheetValidationResponse(
             @JsonInclude(JsonInclude.Include.ALWAYS) Double limit,
             @Schema(description = "The metric the limit names, when the limit is a metric") String limitMetric,
             @Schema(description = "AT_LEAST, AT_MOST or EQUALS; absent for a feasibility check") Comparison comparison,
-            @Schema(description = "PASS, FAIL or NOT_EVALUATED") Verdict verdict,
+            @Schema(description = "PASS, FAIL or NOT_EVALUATED", implementation = String.class,
+                    allowableValues = {"PASS", "FAIL", "NOT_EVALUATED"})
+            Verdict verdict,
             @Schema(description = "Where the requirement comes from") String source,
             @Schema(description = "Metrics the rule needed that the sheet does not give or allow to compute")
             List<String> missing,
