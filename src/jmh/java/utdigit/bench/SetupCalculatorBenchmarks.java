@@ -23,7 +23,7 @@ import utdigit.core.timing.TofdSetupResult;
 
 /**
  * The scan coverage, array aperture, TOFD set-up and DAC calculators, one call each with every
- * optional input given. Target (DESIGN "Non-functional targets"): closed form, under 2 us median.
+ * optional input given. Target (src/docs/performance.md): closed form, under 2 us median.
  */
 @State(Scope.Thread)
 @BenchmarkMode(Mode.SampleTime)

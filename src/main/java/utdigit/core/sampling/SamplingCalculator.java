@@ -282,7 +282,7 @@ public final class SamplingCalculator {
      * Fraction of the energy of the model's detected envelope exp(-a t^2) at |f| above
      * {@code frequencyMhz}: its power spectrum is a Gaussian of standard deviation
      * sigma_f = sqrt(a)/(2 pi) about 0 Hz, so both tails together are erfc(f/(sigma_f sqrt 2)), in
-     * [0, 1]. Model value; reference: DOMAIN "Sampling adequacy" (ENVELOPE).
+     * [0, 1]. Model value; reference: src/docs/methods.md 3.5 (ENVELOPE).
      */
     static double envelopeEnergyAboveFraction(GaussianPulse pulse, double frequencyMhz) {
         return Erf.erfc(frequencyMhz / (pulse.powerSpectrumSigmaMhz() * StrictMath.sqrt(2.0)));

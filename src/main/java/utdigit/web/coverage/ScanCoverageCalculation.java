@@ -10,6 +10,7 @@ import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.Mirrors;
 import utdigit.web.common.ResultNotes;
+import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.VelocitySourceView;
 
 /** Request to core input, core result to answer, for scan coverages. */
@@ -54,7 +55,13 @@ class ScanCoverageCalculation implements Calculation<ScanCoverageRequest> {
                 q.amplitudeToleranceDb());
         return new ScanCoverageResponse(r.beamWidth6dbMm(), r.scanIncrementLossDb(), r.indexStepLossDb(),
                 r.angularStepLossDb(), r.maxStepMm(), r.maxAngularStepDeg(), r.scanIncrementWithinTolerance(),
-                r.indexStepWithinTolerance(), r.angularStepWithinTolerance(), inputs, VelocitySourceView.of(velocity),
+                r.indexStepWithinTolerance(), r.angularStepWithinTolerance(),
+                ToleranceCheck.builder()
+                        .atMost("scan_increment_loss_db", r.scanIncrementLossDb(), "amplitude_tolerance_db", q.amplitudeToleranceDb())
+                        .atMost("index_step_loss_db", r.indexStepLossDb(), "amplitude_tolerance_db", q.amplitudeToleranceDb())
+                        .atMost("angular_step_loss_db", r.angularStepLossDb(), "amplitude_tolerance_db", q.amplitudeToleranceDb())
+                        .build(),
+                inputs, VelocitySourceView.of(velocity),
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 

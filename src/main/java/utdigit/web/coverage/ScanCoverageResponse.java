@@ -1,6 +1,7 @@
 package utdigit.web.coverage;
 
 import io.swagger.v3.oas.annotations.media.Schema;
+import utdigit.web.common.ToleranceCheck;
 import java.util.List;
 import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
@@ -41,6 +42,9 @@ record ScanCoverageResponse(
         @Schema(description = "With angular_step_deg and amplitude_tolerance_db: whether its loss is at most the "
                 + "tolerance", types = {"boolean", "null"})
         Optional<Boolean> angularStepWithinTolerance,
+        @Schema(description = "Each figure compared with a tolerance of the request, the same shape as on every "
+                + "endpoint: scan_increment_loss_db, index_step_loss_db and angular_step_loss_db at most amplitude_tolerance_db; only with amplitude_tolerance_db")
+        List<ToleranceCheck> toleranceChecks,
         @Schema(description = "The normalised request (lengths in mm, velocity in m/s); itself a valid request that "
                 + "reproduces this answer")
         ScanCoverageRequest inputs,

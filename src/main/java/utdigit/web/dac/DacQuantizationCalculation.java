@@ -6,6 +6,7 @@ import utdigit.core.dac.DacQuantizationInput;
 import utdigit.core.dac.DacQuantizationResult;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.ResultNotes;
+import utdigit.web.common.ToleranceCheck;
 
 /** Request to core input, core result to answer, for DAC quantizations. */
 @Component
@@ -30,10 +31,17 @@ class DacQuantizationCalculation implements Calculation<DacQuantizationRequest> 
         DacQuantizationRequest inputs = new DacQuantizationRequest(q.bitDepth(), q.dacSpanDb(),
                 q.referenceHeightPercentFsh(), q.amplitudeToleranceDb(), r.digitizedSignal(), r.quantizer(),
                 r.codeMapping());
+        Double below = q.amplitudeToleranceDb() == null ? null : -q.amplitudeToleranceDb();
         return new DacQuantizationResponse(r.lsbPercentFsh(), r.lowestReferenceHeightPercentFsh(),
                 r.uncorrectedErrorUnderDb(), r.analogTcgErrorUnderDb(), r.digitalTcgLsbPercentFsh(),
                 r.digitalTcgErrorUnderDb(), r.minimumHeightPercentFsh(), r.maxUncorrectedSpanDb(),
-                r.uncorrectedWithinTolerance(), r.analogTcgWithinTolerance(), r.digitalTcgWithinTolerance(), inputs,
+                r.uncorrectedWithinTolerance(), r.analogTcgWithinTolerance(), r.digitalTcgWithinTolerance(),
+                ToleranceCheck.builder()
+                        .atLeast("uncorrected_error_under_db", r.uncorrectedErrorUnderDb(), "amplitude_tolerance_db", below)
+                        .atLeast("analog_tcg_error_under_db", r.analogTcgErrorUnderDb(), "amplitude_tolerance_db", below)
+                        .atLeast("digital_tcg_error_under_db", r.digitalTcgErrorUnderDb(), "amplitude_tolerance_db", below)
+                        .build(),
+                inputs,
                 ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 

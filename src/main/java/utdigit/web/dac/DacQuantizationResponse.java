@@ -1,6 +1,7 @@
 package utdigit.web.dac;
 
 import io.swagger.v3.oas.annotations.media.Schema;
+import utdigit.web.common.ToleranceCheck;
 import java.util.List;
 import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
@@ -46,6 +47,10 @@ record DacQuantizationResponse(
         Boolean analogTcgWithinTolerance,
         @Schema(description = "With amplitude_tolerance_db: whether it is read within it with TCG on digitized data")
         Boolean digitalTcgWithinTolerance,
+        @Schema(description = "Each figure compared with a tolerance of the request, the same shape as on every "
+                + "endpoint: uncorrected_error_under_db, analog_tcg_error_under_db and digital_tcg_error_under_db at least the "
+                + "negative of amplitude_tolerance_db; only with amplitude_tolerance_db")
+        List<ToleranceCheck> toleranceChecks,
         @Schema(description = "The normalised request (options filled in); itself a valid request that reproduces "
                 + "this answer")
         DacQuantizationRequest inputs,

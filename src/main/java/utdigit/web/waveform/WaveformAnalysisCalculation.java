@@ -8,6 +8,7 @@ import utdigit.core.waveform.WaveformResult;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.InputProblem;
 import utdigit.web.common.ResultNotes;
+import utdigit.web.common.ToleranceCheck;
 
 /** Request to core input, core result to answer, for waveform analyses. */
 @Component
@@ -63,6 +64,12 @@ class WaveformAnalysisCalculation implements Calculation<WaveformAnalysisRequest
                 t == null ? null : t.modelPulseAmplitudeLossDb(),
                 t == null ? null : t.modelEnergyAboveNyquistFraction(),
                 t == null ? null : t.modelRequiredSamplingFrequencyPulseMhz(),
+                t == null ? null : ToleranceCheck.builder()
+                        .atMost("pulse_amplitude_loss_db", t.pulseAmplitudeLossDb(), "amplitude_tolerance_db",
+                                q.amplitudeToleranceDb())
+                        .atMost("model_pulse_amplitude_loss_db", t.modelPulseAmplitudeLossDb(), "amplitude_tolerance_db",
+                                q.amplitudeToleranceDb())
+                        .build(),
                 inputs, ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
     }
 }

@@ -1,6 +1,7 @@
 package utdigit.web.waveform;
 
 import io.swagger.v3.oas.annotations.media.Schema;
+import utdigit.web.common.ToleranceCheck;
 import java.util.List;
 import java.util.Optional;
 import utdigit.core.waveform.WaveformResult.SpectrumWindow;
@@ -119,6 +120,11 @@ record WaveformAnalysisResponse(
                 + "amplitude_tolerance_db; null where the model's search does not apply", format = "double",
                 example = "34.36", types = {"number", "null"})
         Optional<Double> modelRequiredSamplingFrequencyPulseMhz,
+
+        @Schema(description = "Each figure compared with a tolerance of the request, the same shape as on every "
+                + "endpoint: the record's pulse_amplitude_loss_db and the model's model_pulse_amplitude_loss_db at most "
+                + "amplitude_tolerance_db; only with sampling_frequency_mhz and amplitude_tolerance_db")
+        List<ToleranceCheck> toleranceChecks,
 
         @Schema(description = "The normalised request: every default that has an effect; itself a valid request "
                 + "that reproduces this answer")

@@ -36,7 +36,7 @@ class ToleranceChecksApiTest extends ApiTest {
     @Test
     void aSamplingPulseLossAboveTheToleranceSaysSo() {
         // 5 MHz, 60 %, 25 MHz: 5 samples per period; sine bound -20 log10 cos(pi/5) = 1.8408 dB and the pulse
-        // loss about 1.953 dB (sine bound + envelope loss, DOMAIN derivation), both above a 1 dB tolerance.
+        // loss about 1.953 dB (sine bound + envelope loss, derivation in src/docs/methods.md 3.3), both above a 1 dB tolerance.
         JsonPath answer = post("/api/sampling-assessments", """
                 {"sampling_frequency_mhz": 25, "frequency_mhz": 5, "bandwidth_percent": 60,
                  "amplitude_tolerance_db": 1}""").statusCode(200).extract().jsonPath();
@@ -56,7 +56,7 @@ class ToleranceChecksApiTest extends ApiTest {
     @Test
     void aTfmGridLossAboveTheToleranceSaysSo() {
         // RF image, lambda = 5.92 mm/us / 5 MHz = 1.184 mm, dz = 0.2 mm: -20 log10 cos(2 pi 0.2/1.184) = 6.2 dB
-        // (derived model, DOMAIN "Spatial sampling of a TFM image"), above a 2 dB tolerance.
+        // (derived model, src/docs/methods.md 3.7), above a 2 dB tolerance.
         JsonPath answer = post("/api/sampling-assessments", """
                 {"sampling_frequency_mhz": 100, "frequency_mhz": 5, "amplitude_tolerance_db": 2,
                  "tfm_grid_spacing_mm": 0.2, "velocity_m_per_s": 5920}""").statusCode(200).extract().jsonPath();
@@ -127,5 +127,35 @@ class ToleranceChecksApiTest extends ApiTest {
         assertCheck(answer, "file_size_megabytes", "file_size_megabytes", "AT_MOST", 200, "file_size_limit_megabytes",
                 false);
         assertThat(answer.getDouble("file_size_megabytes")).isCloseTo(244, within(1e-9));
+    }
+
+    @Test
+    void scanCoverageStepsAreCheckedInTheSameShape() {
+        // Gaussian main lobe of -6 dB width w: a reflector midway between positions dx apart reads
+        // 6 (dx/w)^2 dB low (src/docs/methods.md 14, derived): w = 4 mm, dx = 1 mm -> 0.375 dB, within 1 dB;
+        // an index step of 4 mm -> 6 dB, outside it.
+        JsonPath answer = post("/api/scan-coverages", """
+                {"beam_width_6db_mm": 4, "scan_increment_mm": 1, "index_step_mm": 4,
+                 "amplitude_tolerance_db": 1}""").statusCode(200).extract().jsonPath();
+        assertThat(answer.getDouble("scan_increment_loss_db")).isCloseTo(6.0 * Math.pow(1.0 / 4.0, 2), within(1e-12));
+        assertCheck(answer, "scan_increment_loss_db", "scan_increment_loss_db", "AT_MOST", 1,
+                "amplitude_tolerance_db", true);
+        assertCheck(answer, "index_step_loss_db", "index_step_loss_db", "AT_MOST", 1, "amplitude_tolerance_db", false);
+    }
+
+    @Test
+    void dacPointsAreCheckedAgainstTheNegativeTolerance() {
+        // 8-bit RF, MAX_CODE: LSB = 100/127 %FSH; a 24 dB DAC from 80 %FSH puts its lowest point at
+        // 80 x 10^(-24/20) = 5.05 %FSH, read up to LSB/2 low when rounding: 20 log10(1 - 0.3937/5.05) = -0.70 dB,
+        // within 1 dB; TCG before the converter keeps the reference height's error.
+        JsonPath answer = post("/api/dac-quantizations", """
+                {"bit_depth": 8, "dac_span_db": 24, "reference_height_percent_fsh": 80,
+                 "amplitude_tolerance_db": 1}""").statusCode(200).extract().jsonPath();
+        assertCheck(answer, "uncorrected_error_under_db", "uncorrected_error_under_db", "AT_LEAST", -1,
+                "amplitude_tolerance_db", answer.getDouble("uncorrected_error_under_db") >= -1);
+        assertCheck(answer, "analog_tcg_error_under_db", "analog_tcg_error_under_db", "AT_LEAST", -1,
+                "amplitude_tolerance_db", true);
+        assertThat(answer.getBoolean("uncorrected_within_tolerance"))
+                .isEqualTo(answer.getDouble("uncorrected_error_under_db") >= -1);
     }
 }
