@@ -41,9 +41,9 @@ final class BandLimitedRecord {
      * Work bound of one worst-case search over the sampling phase, in values of the reconstruction
      * read (about 20 ns each warm): the search answers or reports its bound for every record and rate.
      */
-    public static final long LOSS_SEARCH_BUDGET = 4_000_000;
+    public static final long LOSS_SEARCH_BUDGET = 2_000_000;
     /** Work bound of the required-rate search (its scan and bisection), in values of the reconstruction. */
-    public static final long RATE_SEARCH_BUDGET = 16_000_000;
+    public static final long RATE_SEARCH_BUDGET = 8_000_000;
     /** Margin on the largest second derivative read from the fine grid's second differences. */
     private static final double SECOND_DERIVATIVE_MARGIN = 1.02;
 
