@@ -41,9 +41,14 @@ final class BandLimitedRecord {
      * Work bound of one worst-case search over the sampling phase, in values of the reconstruction
      * read (about 20 ns each warm): the search answers or reports its bound for every record and rate.
      */
-    public static final long LOSS_SEARCH_BUDGET = 2_000_000;
+    public static final long LOSS_SEARCH_BUDGET = 3_000_000;
+    /**
+     * Units charged for each phase evaluation besides its values read (the call, the stretches, an
+     * optimizer step): keeps the count proportional to the time where few values are read.
+     */
+    static final long READ_OVERHEAD = 64;
     /** Work bound of the required-rate search (its scan and bisection), in values of the reconstruction. */
-    public static final long RATE_SEARCH_BUDGET = 8_000_000;
+    public static final long RATE_SEARCH_BUDGET = 12_000_000;
     /** Margin on the largest second derivative read from the fine grid's second differences. */
     private static final double SECOND_DERIVATIVE_MARGIN = 1.02;
 
@@ -185,6 +190,7 @@ final class BandLimitedRecord {
         double[][] parts = stretches.toArray(new double[0][]);
         int phases = (int) StrictMath.max(16, StrictMath.ceil(intervalUs / fineIntervalUs));
         double step = intervalUs / phases;
+        budget.spend(phases);
         double[] r = new double[phases];
         for (int p = 0; p < phases; p++) {
             r[p] = readPeak(p * step, intervalUs, reading, parts, budget);
@@ -227,10 +233,10 @@ final class BandLimitedRecord {
         for (double[] part : parts) {
             long from = (long) StrictMath.ceil((part[0] - phaseUs) / intervalUs);
             long to = (long) StrictMath.floor((part[1] - phaseUs) / intervalUs);
-            if (budget.wouldExceed((double) to - from + 1.0)) {
+            if (budget.wouldExceed((double) to - from + 1.0 + READ_OVERHEAD)) {
                 throw SearchBudget.Exhausted.predicted(budget);
             }
-            budget.spend(StrictMath.max(0L, to - from + 1));
+            budget.spend(StrictMath.max(0L, to - from + 1) + READ_OVERHEAD);
             for (long k = from; k <= to; k++) {
                 max = StrictMath.max(max, read(value(phaseUs + k * intervalUs), reading));
             }
