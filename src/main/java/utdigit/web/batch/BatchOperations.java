@@ -82,13 +82,7 @@ class BatchOperations implements OpenApiCustomizer {
                     .description(DESCRIPTION)
                     .requestBody(new RequestBody().required(true)
                             .description("The rows: each is a request of POST /api/" + name)
-                            .content(new Content()
-                                    .addMediaType(JSON, new MediaType().schema(array(copy(request))))
-                                    .addMediaType(BatchController.NDJSON, new MediaType().schema(copy(request)
-                                            .description("One line per row, each a request object")))
-                                    .addMediaType(CSV, new MediaType().schema(string(
-                                            "A header row of field names (dotted for nested sections), then one row "
-                                                    + "per request")))))
+                            .content(requestContent(name, request)))
                     .responses(new ApiResponses().addApiResponse("200", new ApiResponse()
                             .description("The answer rows, streamed in order, one per row in")
                             .content(new Content()
@@ -154,5 +148,21 @@ class BatchOperations implements OpenApiCustomizer {
         types.add(type);
         schema.setTypes(types);
         return schema;
+    }
+
+    /**
+     * A batch's bodies: a JSON array, NDJSON, and CSV except for a calculation whose request holds a
+     * list of numbers (a waveform's samples), which no CSV row can carry.
+     */
+    private static Content requestContent(String name, Schema<?> request) {
+        Content content = new Content()
+                .addMediaType(JSON, new MediaType().schema(array(copy(request))))
+                .addMediaType(BatchController.NDJSON, new MediaType().schema(copy(request)
+                        .description("One line per row, each a request object")));
+        if (!name.equals("waveform-analyses")) {
+            content.addMediaType(CSV, new MediaType().schema(string(
+                    "A header row of field names (dotted for nested sections), then one row per request")));
+        }
+        return content;
     }
 }

@@ -20,6 +20,8 @@ import tools.jackson.databind.node.ObjectNode;
 class WaveformAnalysisController {
     static final String SVG = "image/svg+xml";
     static final String CSV = "text/csv";
+    /** A CSV example for the document: a 5 MHz, 60 percent pulse recorded at 100 MHz (synthesised, Gaussian model). */
+    static final String CSV_EXAMPLE = "time_ns,amplitude\n0,0.00584\n10,0.00716\n20,0.00780\n30,0.00721\n40,0.00479\n50,-0.00000\n60,-0.00752\n70,-0.01773\n80,-0.03008\n90,-0.04330\n100,-0.05540\n110,-0.06369\n120,-0.06507\n130,-0.05642\n140,-0.03517\n150,0.00000\n160,0.04851\n170,0.10731\n180,0.17070\n190,0.23041\n200,0.27640\n210,0.29799\n220,0.28550\n230,0.23213\n240,0.13570\n250,-0.00000\n260,-0.16457\n270,-0.34141\n280,-0.50923\n290,-0.64457\n300,-0.72508\n310,-0.73303\n320,-0.65857\n330,-0.50212\n340,-0.27525\n350,0.00000\n360,0.29352\n370,0.57102\n380,0.79868\n390,0.94800\n400,1.00000\n410,0.94800\n420,0.79868\n430,0.57102\n440,0.29352\n450,0.00000\n460,-0.27525\n470,-0.50212\n480,-0.65857\n490,-0.73303\n500,-0.72508\n510,-0.64457\n520,-0.50923\n530,-0.34141\n540,-0.16457\n550,-0.00000\n560,0.13570\n570,0.23213\n580,0.28550\n590,0.29799\n600,0.27640\n610,0.23041\n620,0.17070\n630,0.10731\n640,0.04851\n650,0.00000\n660,-0.03517\n670,-0.05642\n680,-0.06507\n690,-0.06369\n700,-0.05540\n710,-0.04330\n720,-0.03008\n730,-0.01773\n740,-0.00752\n750,-0.00000\n760,0.00479\n770,0.00721\n780,0.00780\n790,0.00716\n";
     private static final String DESCRIPTION = "A recorded pulse (a probe certificate's waveform or a reference echo: "
             + "samples and the rate they were recorded at). Answers the measured spectrum (zero-padded |FFT| of the "
             + "mean-removed record: peak, -6 and -20 dB edges by interpolation, centre by centre_frequency_convention, "
@@ -67,7 +69,10 @@ class WaveformAnalysisController {
     @Operation(summary = "Analyse a recorded pulse given as CSV", description = DESCRIPTION)
     @ApiResponse(responseCode = "200", description = "The analysis",
             content = @Content(schema = @Schema(implementation = WaveformAnalysisResponse.class)))
-    ObjectNode analyseCsv(@RequestBody String body, @Parameter(description = "The other inputs, named as in the JSON "
+    ObjectNode analyseCsv(@io.swagger.v3.oas.annotations.parameters.RequestBody(description = "The record as CSV: 'amplitude', or "
+            + "'time_<unit>,amplitude'", content = @Content(mediaType = CSV, schema = @Schema(type = "string"),
+            examples = @io.swagger.v3.oas.annotations.media.ExampleObject(name = "pulse", value = CSV_EXAMPLE)))
+            @RequestBody String body, @Parameter(description = "The other inputs, named as in the JSON "
             + "request (record_sampling_frequency_mhz with one amplitude column, sampling_frequency_mhz, "
             + "decimation_factor, decimation_mode, peak_reading, amplitude_tolerance_db, centre_frequency_convention)")
             @RequestParam Map<String, String> parameters) {
@@ -78,7 +83,10 @@ class WaveformAnalysisController {
     @Operation(summary = "The report figure of a recorded pulse given as CSV", description = DESCRIPTION)
     @ApiResponse(responseCode = "200", description = "The figure, SVG",
             content = @Content(mediaType = SVG, schema = @Schema(type = "string")))
-    String figureCsv(@RequestBody String body, @Parameter(description = "The other inputs, as for the CSV analysis")
+    String figureCsv(@io.swagger.v3.oas.annotations.parameters.RequestBody(description = "The record as CSV: 'amplitude', or "
+            + "'time_<unit>,amplitude'", content = @Content(mediaType = CSV, schema = @Schema(type = "string"),
+            examples = @io.swagger.v3.oas.annotations.media.ExampleObject(name = "pulse", value = CSV_EXAMPLE)))
+            @RequestBody String body, @Parameter(description = "The other inputs, as for the CSV analysis")
             @RequestParam Map<String, String> parameters) {
         return reports.svg(reports.fromCsv(body, parameters));
     }

@@ -24,9 +24,9 @@ public record WaveformAnalysisRequest(
                 + "should lie inside the record"), minItems = WaveformInput.MIN_SAMPLES,
                 maxItems = WaveformInput.MAX_SAMPLES,
                 schema = @Schema(type = "number", format = "double", example = "0.12"))
+        // The count (16 to 8192) is checked by WaveformInput at /samples; a Bean Validation @Size here
+        // would be written onto the items' schema as minimum/maximum by the model resolver.
         @NotNull(message = "is required")
-        @Size(min = WaveformInput.MIN_SAMPLES, max = WaveformInput.MAX_SAMPLES,
-                message = "must hold 16 to 8192 samples")
         List<Double> samples,
 
         @Schema(description = "The rate the record was sampled at, MHz (> 0, <= 100000); it should be well above "
