@@ -160,7 +160,7 @@ class ServiceClientIT {
                         .amplitudeToleranceDb(2.0).thicknessToleranceMm(0.5));
         TechniqueSheetValidation answer = new TechniqueSheetsApi(client).postTechniqueSheetValidations(sheet);
         assertThat(answer.getVerdict()).isEqualTo(TechniqueSheetValidation.VerdictEnum.FAIL);
-        assertThat(answer.getValues().get("max_scan_speed_mm_per_s")).isCloseTo(6000.0 / 61, within(1e-9));
+        assertThat(answer.getValues().get("max_scan_speed_mm_per_s").doubleValue()).isCloseTo(6000.0 / 61, within(1e-9));
         assertThat(answer.getStamp().getCalculation()).isEqualTo("technique-sheet-validations");
     }
 
