@@ -148,7 +148,7 @@ class ServiceClientIT {
         // The demo shop's sheet BPF-W-PAUT-03: 61 focal laws at 6000 Hz and 1 mm increments allow
         // 6000 / 61 x 1 = 98.4 mm/s; the sheet plans 150 mm/s.
         TechniqueSheet sheet = new TechniqueSheet().sheetId("BPF-W-PAUT-03").revision("A")
-                .technique(TechniqueSheet.TechniqueEnum.PHASED_ARRAY).profileId("common-practice")
+                .technique(TechniqueSheet.TechniqueEnum.PHASED_ARRAY).profileIds(java.util.List.of("common-practice"))
                 .probe(new SheetProbe().frequencyMhz(5.0).bandwidthPercent(65.0).elementCount(32))
                 .material(new SheetMaterial().material("carbon-steel").waveMode(SheetMaterial.WaveModeEnum.SHEAR)
                         .thicknessMm(32.0).refractedAngleDeg(55.0))
