@@ -110,7 +110,11 @@ async function everyOtherOperation(doc: any): Promise<void> {
                 const name = path.replace(/^\/api\//, '').replace(/\/batch$/, '');
                 const file = `${examples}/${name}.json`;
                 const example = media.example ?? (fs.existsSync(file) ? JSON.parse(fs.readFileSync(file, 'utf8')) : undefined);
-                const bodyName = parameterNames(api, id).find(n => !(n in params));
+                // the body's parameter: the one named after the body's schema, else the first unset one
+                const names = parameterNames(api, id).filter(n => !(n in params));
+                const ref: string | undefined = media.schema?.$ref ?? media.schema?.items?.$ref;
+                const wanted = ref?.substring(ref.lastIndexOf('/') + 1).toLowerCase();
+                const bodyName = names.find(n => n.toLowerCase() === wanted) ?? names[0];
                 if (example === undefined || bodyName === undefined) {
                     record(id, false, `${method.toUpperCase()} ${path}: no example body`);
                     continue;
