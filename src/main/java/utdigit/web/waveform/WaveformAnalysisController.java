@@ -75,7 +75,7 @@ class WaveformAnalysisController {
             @RequestBody String body, @Parameter(description = "The other inputs, named as in the JSON "
             + "request (record_sampling_frequency_mhz with one amplitude column, sampling_frequency_mhz, "
             + "decimation_factor, decimation_mode, peak_reading, amplitude_tolerance_db, centre_frequency_convention)")
-            @RequestParam Map<String, String> parameters) {
+            @RequestParam(required = false) Map<String, String> parameters) {
         return reports.json(reports.fromCsv(body, parameters));
     }
 
@@ -87,7 +87,7 @@ class WaveformAnalysisController {
             + "'time_<unit>,amplitude'", content = @Content(mediaType = CSV, schema = @Schema(type = "string"),
             examples = @io.swagger.v3.oas.annotations.media.ExampleObject(name = "pulse", value = CSV_EXAMPLE)))
             @RequestBody String body, @Parameter(description = "The other inputs, as for the CSV analysis")
-            @RequestParam Map<String, String> parameters) {
+            @RequestParam(required = false) Map<String, String> parameters) {
         return reports.svg(reports.fromCsv(body, parameters));
     }
 }
