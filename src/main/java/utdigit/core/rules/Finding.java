@@ -6,7 +6,12 @@ import java.util.List;
  * The outcome of one applicable rule on one sheet, or of one of the service's own feasibility
  * checks.
  *
+ * <p>A finding names its rule by profile and rule id and carries the figures compared; the rule's
+ * wording and source stay in the profile (one copy, not one per sheet).
+ *
  * @param profileId the profile the rule belongs to; {@link #FEASIBILITY} for the service's checks
+ * @param title what a feasibility check checks, in words (no profile holds it); null for a profile's
+ *     rule, whose title and source the profile gives
  * @param actual the metric's value, or null when it could not be computed (or for a feasibility check)
  * @param limit the limit's value, or null when it names a metric that could not be computed
  * @param limitMetric the metric the limit names, or null for a numeric limit
@@ -18,7 +23,7 @@ import java.util.List;
  *     together; empty for a profile's rule
  */
 public record Finding(String profileId, String ruleId, String title, String metric, Double actual, Double limit,
-                      String limitMetric, Comparison comparison, Verdict verdict, String source,
+                      String limitMetric, Comparison comparison, Verdict verdict,
                       List<String> missing, List<String> missingInputs, String reason, List<String> settings) {
 
     /** The profile id of the service's own feasibility checks (reserved: no profile may take it). */
@@ -32,7 +37,7 @@ public record Finding(String profileId, String ruleId, String title, String metr
 
     /** The same finding with the sheet inputs to add. */
     public Finding withMissingInputs(List<String> pointers) {
-        return new Finding(profileId, ruleId, title, metric, actual, limit, limitMetric, comparison, verdict, source,
+        return new Finding(profileId, ruleId, title, metric, actual, limit, limitMetric, comparison, verdict,
                 missing, pointers, reason, settings);
     }
 }

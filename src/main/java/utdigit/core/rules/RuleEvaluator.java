@@ -44,9 +44,8 @@ public final class RuleEvaluator {
             }
             Verdict verdict = !missing.isEmpty() ? Verdict.NOT_EVALUATED
                     : rule.comparison().holds(actual, limit) ? Verdict.PASS : Verdict.FAIL;
-            findings.add(new Finding(profile.id(), rule.id(), rule.title(), rule.metric(), actual, limit,
-                    rule.limit().metric(), rule.comparison(), verdict, rule.source(), missing, List.of(), null,
-                    List.of()));
+            findings.add(new Finding(profile.id(), rule.id(), null, rule.metric(), actual, limit,
+                    rule.limit().metric(), rule.comparison(), verdict, missing, List.of(), null, List.of()));
         }
         return findings;
     }

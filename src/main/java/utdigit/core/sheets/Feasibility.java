@@ -42,9 +42,6 @@ public final class Feasibility {
             TOFD_DEPTH_WITHIN_WALL, FULL_SCREEN_CODE, EVALUATION_HEIGHT_ON_SCREEN, SHEAR_WAVE_IN_SOLID,
             SETTINGS_POSSIBLE_TOGETHER);
 
-    static final String SOURCE = "the service's feasibility check: the settings are physically impossible "
-            + "together (definition; the same check the single endpoint answers with 422)";
-
     /** Whether a calculator failure is one of these checks (settings impossible together). */
     public static boolean isFeasibilityFailure(CalculationException e) {
         return e.error() == CalculationError.IMPOSSIBLE_COMBINATION;
@@ -82,6 +79,6 @@ public final class Feasibility {
     public static Finding failure(String calculation, CalculationException e) {
         Check check = checkOf(e);
         return new Finding(Finding.FEASIBILITY, check.id(), check.title(), null, null, null, null, null,
-                Verdict.FAIL, SOURCE, List.of(), List.of(), calculation + ": " + e.getMessage(), e.fields());
+                Verdict.FAIL, List.of(), List.of(), calculation + ": " + e.getMessage(), e.fields());
     }
 }

@@ -56,6 +56,9 @@ import utdigit.core.timing.TimeOfFlightResult;
  * {@code combined_amplitude_error_db} is the worst case of the pulse's sampling loss and the
  * quantization error at the evaluation height together: sampling first lowers the peak, then the
  * quantizer errs at that lower height ({@link QuantizationCalculator#combinedErrorDb}).
+ *
+ * <p>The sheet cites each source once, its topic naming the sheet's calculations that cite it
+ * ("pulse; sampling"): the single endpoints name the figures, the catalogue gives the citation.
  */
 public final class SheetEvaluator {
     private SheetEvaluator() {}
@@ -307,14 +310,14 @@ public final class SheetEvaluator {
             v.put("firings_per_position", (double) firings);
             v.put("max_scan_speed_mm_per_s",
                     AcquisitionCalculator.maxScanSpeedMmPerS(prf, acq.scanIncrementMm(), firings, averaging));
-            v.references.add(Reference.of("maximum scan speed", Sources.SCAN_SPEED));
+            v.references.add(Reference.of("acquisition", Sources.SCAN_SPEED));
         }
         if (roundTripGiven) {
             double roundTripUs = acq.maxRoundTripUs() != null ? acq.maxRoundTripUs()
                     : AcquisitionCalculator.pulseEchoTimeUs(soundPathMm, c);
             double q = acq.wraparoundDecayFactor() == null ? 1.0 : acq.wraparoundDecayFactor();
             v.put("max_prf_without_wraparound_hz", AcquisitionCalculator.maxPrfWithoutWraparoundHz(roundTripUs, q));
-            v.references.add(Reference.of("wrap-around PRF limit", Sources.WRAPAROUND));
+            v.references.add(Reference.of("acquisition", Sources.WRAPAROUND));
         }
     }
 
@@ -417,7 +420,7 @@ public final class SheetEvaluator {
             for (Warning w : ws) {
                 warnings.add(Warning.of(w.code(), calculation + ": " + w.message()));
             }
-            references.addAll(refs);
+            refs.forEach(r -> references.add(new Reference(calculation, r.id())));
         }
     }
 }

@@ -148,6 +148,6 @@ public final class SheetSetupMetrics {
         for (Warning w : ws) {
             warnings.add(Warning.of(w.code(), calculation + ": " + w.message()));
         }
-        references.addAll(refs);
+        refs.forEach(r -> references.add(new Reference(calculation, r.id())));
     }
 }

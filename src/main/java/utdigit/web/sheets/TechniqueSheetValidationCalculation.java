@@ -289,7 +289,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
 
     private TechniqueSheetValidationResponse.FindingView view(Finding f, TechniqueSheetRequest q) {
         return new TechniqueSheetValidationResponse.FindingView(f.profileId(), f.ruleId(), f.title(), f.metric(),
-                f.actual(), f.limit(), f.limitMetric(), f.comparison(), f.verdict(), f.source(),
+                f.actual(), f.limit(), f.limitMetric(), f.comparison(), f.verdict(),
                 f.missing().isEmpty() ? null : f.missing(),
                 f.missingInputs().isEmpty() ? null : f.missingInputs(),
                 f.reason(),

@@ -28,7 +28,9 @@ record TechniqueSheetValidationResponse(
                 + "when a feasibility check failed", implementation = String.class,
                 allowableValues = {"PASS", "FAIL", "INCOMPLETE", "NOT_COVERED"}) Verdict verdict,
         @Schema(description = "The failed feasibility checks of the service (profile_id service-feasibility) "
-                + "first, then one finding per applicable rule of each profile, in the profiles' order")
+                + "first, then one finding per applicable rule of each profile, in the profiles' order. A finding "
+                + "names its rule (profile_id, rule_id) and gives the figures compared; the rule's title and source "
+                + "are at GET /api/requirement-profiles/{profile_id}, under rules by id")
         List<FindingView> findings,
         @Schema(description = "Every metric computed or given, by name (lengths in mm, velocity in m/s); counts "
                 + "(bit_depth, focal_laws, levels, samples_per_a_scan, bytes_per_position...) as integers")
@@ -38,6 +40,10 @@ record TechniqueSheetValidationResponse(
         TechniqueSheetRequest inputs,
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
+        @Schema(description = "Each source the sheet's figures use, once, by its catalogue id (the full citation at "
+                + "GET /api/references/{id}); its topic names the sheet's calculations that cite it (pulse, sampling, "
+                + "quantization, time of flight, thickness, acquisition, combined amplitude error and the set-up's "
+                + "calculations), the single endpoint of each calculation names the figures")
         List<ReferenceView> references) {
 
     /** A profile a sheet was checked against, with its verdict. */
@@ -55,9 +61,12 @@ record TechniqueSheetValidationResponse(
     @Schema(name = "Finding")
     record FindingView(
             @Schema(description = "The profile of the rule; service-feasibility for the service's own "
-                    + "feasibility checks, which every sheet gets") String profileId,
-            @Schema(description = "Rule id within the profile") String ruleId,
-            @Schema(description = "What the rule checks") String title,
+                    + "feasibility checks, which every sheet gets (settings physically impossible together: the same "
+                    + "check a single endpoint answers with 422)") String profileId,
+            @Schema(description = "Rule id within the profile; its title and source are the profile's "
+                    + "(GET /api/requirement-profiles/{profile_id})") String ruleId,
+            @Schema(description = "What a feasibility check checks; only on the service's feasibility checks, "
+                    + "whose text no profile holds") String title,
             @Schema(description = "The metric checked; absent for a feasibility check") String metric,
             @Schema(description = "The metric's value; null when it could not be computed or for a feasibility "
                     + "check", format = "double", types = {"number", "null"})
@@ -70,7 +79,6 @@ record TechniqueSheetValidationResponse(
             @Schema(description = "PASS, FAIL or NOT_EVALUATED", implementation = String.class,
                     allowableValues = {"PASS", "FAIL", "NOT_EVALUATED"})
             Verdict verdict,
-            @Schema(description = "Where the requirement comes from") String source,
             @Schema(description = "Metrics the rule needed that the sheet does not give or allow to compute")
             List<String> missing,
             @Schema(description = "JSON Pointers of the sheet inputs to add so that the missing metrics can be "
