@@ -54,6 +54,8 @@ class ExamplesTest extends ApiTest {
         GET_EXAMPLES.put("references-gum-rectangular", "/api/references/jcgm-100-2008-4.3.7");
         GET_EXAMPLES.put("requirement-profiles", "/api/requirement-profiles");
         GET_EXAMPLES.put("requirement-profiles-common-practice", "/api/requirement-profiles/common-practice");
+        GET_EXAMPLES.put("requirement-profiles-common-practice-scan-speed",
+                "/api/requirement-profiles/common-practice/rules/scan-speed");
     }
 
     /** The stamp verification example verifies this example's committed answer. */

@@ -70,6 +70,23 @@ final class ProfileViews {
         }
     }
 
+    @Schema(name = "RequirementProfileRule", description = "One rule of a profile, with the profile it belongs to")
+    record ProfileRuleView(
+            @Schema(description = "The profile's id", example = "common-practice")
+            String profileId,
+            @Schema(description = "The profile's own version", example = "2")
+            String profileVersion,
+            @Schema(description = SHA256 + " (the profile's)", pattern = "^[0-9a-f]{64}$")
+            @JsonProperty("profile_sha256")
+            String profileSha256,
+            @Schema(description = "VERIFIED or UNVERIFIED (the profile's)")
+            VerificationStatus verificationStatus,
+            RuleView rule) {
+        static ProfileRuleView of(RequirementProfile p, Rule r) {
+            return new ProfileRuleView(p.id(), p.version(), p.sha256(), p.verificationStatus(), RuleView.of(r));
+        }
+    }
+
     @Schema(name = "RequirementDocument")
     record DocumentView(
             @Schema(description = "The document", example = "ASME Boiler and Pressure Vessel Code, Section V, Article 4")

@@ -11,8 +11,11 @@ import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
+import utdigit.core.rules.RequirementProfile;
+import utdigit.core.rules.Rule;
 import utdigit.web.common.NotFoundProblem;
 import utdigit.web.rules.ProfileViews.ProfileList;
+import utdigit.web.rules.ProfileViews.ProfileRuleView;
 import utdigit.web.rules.ProfileViews.ProfileView;
 
 @RestController
@@ -48,7 +51,31 @@ class RequirementProfileController {
             content = @Content(schema = @Schema(implementation = ProfileView.class)))
     ProfileView one(@Parameter(description = "Profile id, kebab-case", example = "common-practice")
                     @PathVariable String id) {
-        return catalog.find(id).map(ProfileView::of).orElseThrow(() -> new NotFoundProblem(
+        return ProfileView.of(profile(id));
+    }
+
+    @GetMapping("/{id}/rules/{rule_id}")
+    @Operation(summary = "Show one rule of a requirement profile",
+            description = "The rule a technique-sheet finding names by profile_id and rule_id: its title, metric, "
+                    + "comparison, limit or limit_metric, techniques, conditions and source, with the profile's "
+                    + "version and sha256 to match the sheet answer's profiles entry. Unknown profile or rule: 404 "
+                    + "problem (service-feasibility is not a profile: its checks are described in the findings "
+                    + "themselves)." + CAUTION)
+    @ApiResponse(responseCode = "200", description = "The rule",
+            content = @Content(schema = @Schema(implementation = ProfileRuleView.class)))
+    ProfileRuleView rule(@Parameter(description = "Profile id, kebab-case", example = "common-practice")
+                         @PathVariable String id,
+                         @Parameter(description = "Rule id within the profile, kebab-case", example = "scan-speed")
+                         @PathVariable("rule_id") String ruleId) {
+        RequirementProfile profile = profile(id);
+        return profile.rules().stream().filter(r -> r.id().equals(ruleId)).findFirst()
+                .map(r -> ProfileRuleView.of(profile, r))
+                .orElseThrow(() -> new NotFoundProblem("no rule '" + ruleId + "' in requirement profile '" + id
+                        + "'; its rules: " + String.join(", ", profile.rules().stream().map(Rule::id).toList())));
+    }
+
+    private RequirementProfile profile(String id) {
+        return catalog.find(id).orElseThrow(() -> new NotFoundProblem(
                 "no requirement profile '" + id + "'; loaded: " + String.join(", ", catalog.ids())));
     }
 }

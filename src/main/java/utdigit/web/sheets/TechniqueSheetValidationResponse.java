@@ -30,7 +30,7 @@ record TechniqueSheetValidationResponse(
         @Schema(description = "The failed feasibility checks of the service (profile_id service-feasibility) "
                 + "first, then one finding per applicable rule of each profile, in the profiles' order. A finding "
                 + "names its rule (profile_id, rule_id) and gives the figures compared; the rule's title and source "
-                + "are at GET /api/requirement-profiles/{profile_id}, under rules by id")
+                + "are at GET /api/requirement-profiles/{profile_id}/rules/{rule_id}")
         List<FindingView> findings,
         @Schema(description = "Every metric computed or given, by name (lengths in mm, velocity in m/s); counts "
                 + "(bit_depth, focal_laws, levels, samples_per_a_scan, bytes_per_position...) as integers")
@@ -64,7 +64,7 @@ record TechniqueSheetValidationResponse(
                     + "feasibility checks, which every sheet gets (settings physically impossible together: the same "
                     + "check a single endpoint answers with 422)") String profileId,
             @Schema(description = "Rule id within the profile; its title and source are the profile's "
-                    + "(GET /api/requirement-profiles/{profile_id})") String ruleId,
+                    + "(GET /api/requirement-profiles/{profile_id}/rules/{rule_id})") String ruleId,
             @Schema(description = "What a feasibility check checks; only on the service's feasibility checks, "
                     + "whose text no profile holds") String title,
             @Schema(description = "The metric checked; absent for a feasibility check") String metric,

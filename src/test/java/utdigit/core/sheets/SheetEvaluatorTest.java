@@ -8,6 +8,7 @@ import java.util.Set;
 import org.junit.jupiter.api.Test;
 import utdigit.core.acquisition.AcquisitionCalculator;
 import utdigit.core.acquisition.AcquisitionInput;
+import utdigit.core.common.Reference;
 import utdigit.core.quantization.QuantizationCalculator;
 import utdigit.core.quantization.QuantizationInput;
 import utdigit.core.rules.Comparison;
@@ -65,6 +66,26 @@ class SheetEvaluatorTest {
         assertThat(r.values().get("combined_amplitude_error_db")).isCloseTo(combined, within(1e-12));
         assertThat(r.values().get("combined_amplitude_error_db")).isGreaterThan(
                 sampling.pulseAmplitudeLossDb().orElseThrow() + Math.abs(quantization.evaluationErrorUnderDb().orElseThrow()));
+    }
+
+    @Test
+    void theSheetCitesEachSourceOnceNamingTheCalculationsThatUseIt() {
+        SheetResult r = SheetEvaluator.evaluate(phasedArraySheet(100), FIVE_SAMPLES);
+        assertThat(r.references()).extracting(Reference::id).doesNotHaveDuplicates();
+        // Every source the single sampling calculation cites is cited by the sheet, "sampling" among its topic.
+        var sampling = SamplingCalculator.compute(SamplingInput.of(100, 5.0).withDecimationFactor(2)
+                .withBandwidthPercent(60.0));
+        assertThat(sampling.references()).isNotEmpty();
+        for (Reference cited : sampling.references()) {
+            Reference inSheet = r.references().stream().filter(x -> x.id().equals(cited.id())).findFirst()
+                    .orElseThrow();
+            assertThat(inSheet.topic().split("; ")).contains("sampling");
+        }
+        Set<String> calculations = Set.of("pulse", "sampling", "quantization", "time of flight", "thickness",
+                "acquisition", "combined amplitude error", "scan coverage", "array aperture", "DAC", "TOFD set-up");
+        for (Reference ref : r.references()) {
+            assertThat(calculations).as(ref.toString()).contains(ref.topic().split("; "));
+        }
     }
 
     @Test

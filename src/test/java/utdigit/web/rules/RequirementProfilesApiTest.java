@@ -70,6 +70,24 @@ class RequirementProfilesApiTest extends ApiTest {
     }
 
     @Test
+    void oneRuleAsASheetFindingNamesIt() {
+        // The rule a finding {profile_id common-practice, rule_id scan-speed} names: the same text the whole
+        // profile gives, with the profile's version and hash to match the sheet answer's profiles entry.
+        given().get("/api/requirement-profiles/common-practice/rules/scan-speed").then().statusCode(200)
+                .body("profile_id", equalTo("common-practice"))
+                .body("profile_version", equalTo("2"))
+                .body("profile_sha256", equalTo(CATALOG.find("common-practice").orElseThrow().sha256()))
+                .body("verification_status", equalTo("UNVERIFIED"))
+                .body("rule.id", equalTo("scan-speed"))
+                .body("rule.title", equalTo(CATALOG.find("common-practice").orElseThrow().rules().stream()
+                        .filter(r -> r.id().equals("scan-speed")).findFirst().orElseThrow().title()))
+                .body("rule.metric", equalTo("planned_scan_speed_mm_per_s"))
+                .body("rule.comparison", equalTo("AT_MOST"))
+                .body("rule.limit_metric", equalTo("max_scan_speed_mm_per_s"))
+                .body("rule.source", containsString("common practice, no published source"));
+    }
+
+    @Test
     void openApiDocumentsBothOperations() {
         given().get("/v3/api-docs").then().statusCode(200)
                 .body("paths.'/api/requirement-profiles'.get.summary", equalTo("List the requirement profiles"))
@@ -89,6 +107,17 @@ class RequirementProfilesApiTest extends ApiTest {
                     .body("title", equalTo("Not found"))
                     .body("detail", containsString("no-such-profile"))
                     .body("detail", containsString("common-practice"));
+        }
+
+        @Test
+        void unknownRuleOrProfileOfARuleIsA404Problem() {
+            given().get("/api/requirement-profiles/common-practice/rules/no-such-rule").then().statusCode(404)
+                    .contentType("application/problem+json")
+                    .body("type", equalTo("/problems/not-found"))
+                    .body("detail", containsString("no-such-rule"))
+                    .body("detail", containsString("samples-per-period"));
+            given().get("/api/requirement-profiles/service-feasibility/rules/gate-within-firing-period").then()
+                    .statusCode(404).body("detail", containsString("service-feasibility"));
         }
 
         @Test

@@ -13,6 +13,7 @@ import org.junit.jupiter.api.Test;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ObjectNode;
+import utdigit.core.sheets.Feasibility;
 import utdigit.web.support.ApiTest;
 
 /**
@@ -52,6 +53,9 @@ class SheetVerdictsApiTest extends ApiTest {
         List<Map<String, Object>> failures = findings(answer, "service-feasibility");
         assertThat(failures).extracting(f -> f.get("rule_id")).containsExactly(checkId);
         assertThat(failures.get(0).get("verdict")).isEqualTo("FAIL");
+        // No profile holds a feasibility check's text: the finding carries its title (the check's own words).
+        assertThat(failures.get(0).get("title")).isEqualTo(Feasibility.CHECKS.stream()
+                .filter(c -> c.id().equals(checkId)).findFirst().orElseThrow().title());
         assertThat(answer.getString("verdict")).isEqualTo("FAIL");
         return failures.get(0);
     }
@@ -64,6 +68,11 @@ class SheetVerdictsApiTest extends ApiTest {
             assertThat(answer.getString("verdict")).isEqualTo("PASS");
             assertThat(answer.getList("findings")).isNotEmpty();
             assertThat(answer.getList("findings.verdict", String.class)).containsOnly("PASS");
+            // A profile's rule is named by id; its title and source stay in the profile, not in every answer.
+            for (Map<String, Object> f : answer.<Map<String, Object>>getList("findings")) {
+                assertThat(f).doesNotContainKeys("title", "source").containsKeys("profile_id", "rule_id", "metric",
+                        "actual", "limit", "comparison", "verdict");
+            }
         }
 
         @Test
