@@ -10,7 +10,7 @@ import utdigit.core.rules.RequirementProfile;
 import utdigit.core.rules.Rule;
 import utdigit.core.rules.VerificationStatus;
 
-/** What GET /api/requirement-profiles and /{id} answer. */
+/** What GET /api/requirement-profiles, /{id} and /{id}/rules/{rule_id} answer. */
 final class ProfileViews {
     private ProfileViews() {}
 
