@@ -3,6 +3,7 @@ package utdigit.web.common;
 import java.util.ArrayList;
 import java.util.List;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Units;
 import utdigit.core.materials.Material;
 import utdigit.core.materials.MaterialCatalog;
@@ -76,6 +77,37 @@ public final class Mirrors {
         }
         return converted;
     }
+
+    /**
+     * A speed in m/s of the input {@code base} given as {@code base_m_per_s} or {@code base_in_per_us}
+     * (1 in/us = 25 400 m/s exactly), or null when neither is given: a wedge's or a steering medium's
+     * velocity, a velocity's uncertainty. The inch form is range-checked after conversion against
+     * {@code [minMPerS, maxMPerS]} (the m/s form's Bean Validation range).
+     */
+    public static Double speedMPerS(FieldErrors errors, String base, Double mPerS, Double inPerUs,
+                                    double minMPerS, double maxMPerS) {
+        String mName = base + "_m_per_s";
+        String inName = base + "_in_per_us";
+        if (mPerS != null && inPerUs != null) {
+            String detail = "give " + base + " once: " + mName + " or " + inName + ", not both";
+            errors.add(mName, detail).add(inName, detail);
+            return null;
+        }
+        if (inPerUs == null) {
+            return mPerS;
+        }
+        double converted = Units.inPerUsToMPerS(inPerUs);
+        if (!(converted >= minMPerS && converted <= maxMPerS)) {
+            errors.add(inName, "must correspond to " + MessageNumbers.plain(minMPerS, SPEED_DIGITS) + " to "
+                    + MessageNumbers.plain(maxMPerS, SPEED_DIGITS) + " m/s ("
+                    + MessageNumbers.plain(Units.mPerSToInPerUs(minMPerS), SPEED_DIGITS) + " to "
+                    + MessageNumbers.plain(Units.mPerSToInPerUs(maxMPerS), SPEED_DIGITS) + " in/us)");
+            return null;
+        }
+        return converted;
+    }
+
+    private static final java.math.MathContext SPEED_DIGITS = new java.math.MathContext(6);
 
     /**
      * The velocity of {@code f}: the caller's (m/s or in/us) or a built-in material's; null when
