@@ -177,6 +177,23 @@ public final class Mirrors {
         return VelocitySource.ofMaterial(material, mode, f.temperatureC());
     }
 
+    /**
+     * The inch mirror of a length result in mm (mm / 25.4, the inch being 25.4 mm exactly); null
+     * (omitted: its optional input was not given) stays null.
+     */
+    public static Double inches(Double mm) {
+        return mm == null ? null : Units.mmToIn(mm);
+    }
+
+    /**
+     * The inch mirror of a length result that may not exist: empty (null in JSON) stays empty, null
+     * (omitted) stays null.
+     */
+    @SuppressWarnings("OptionalUsedAsFieldOrParameterType")
+    public static java.util.Optional<Double> inches(java.util.Optional<Double> mm) {
+        return mm == null ? null : mm.map(Units::mmToIn);
+    }
+
     /** The pointer of a length the caller sent: "/base_in" when the inch form was sent, else "/base_mm". */
     public static String lengthPointer(String base, Double inchValue) {
         return JsonPointers.property(base + (inchValue != null ? "_in" : "_mm"));

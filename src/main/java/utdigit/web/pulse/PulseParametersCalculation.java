@@ -77,6 +77,16 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
                 plane == null ? null : plane.beamSpread20dbDeg(), plane == null ? null : plane.beamDiameter6dbMm(),
                 inputs,
                 VelocitySourceView.of(velocity), ResultNotes.warnings(r.warnings()),
-                ResultNotes.references(r.references()));
+                ResultNotes.references(r.references()),
+                PulseParametersResponse.InInches.of(Mirrors.inches(r.spatialPulseLengthMm()),
+                        Mirrors.inches(r.axialResolutionMm()),
+                        Mirrors.inches(r.nearFieldLengthMm()),
+                        Mirrors.inches(r.nearFieldLengthExactMm()),
+                        Mirrors.inches(r.beamDiameter6dbMm()),
+                        Mirrors.inches(r.nearFieldInPartMm()),
+                        Mirrors.inches(plane == null ? null : plane.apertureMm()),
+                        Mirrors.inches(plane == null ? null : plane.nearFieldLengthMm()),
+                        Mirrors.inches(plane == null ? null : plane.nearFieldInPartMm()),
+                        Mirrors.inches(plane == null ? null : plane.beamDiameter6dbMm())));
     }
 }

@@ -113,7 +113,9 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
                         "required_resolution_mm", requiredResolutionMm).build(),
                 inputs,
                 materialUncertainty ? VelocitySourceView.usingMaterialUncertainty(velocity) : VelocitySourceView.of(velocity),
-                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()),
+                ThicknessResolutionResponse.InInches.of(Mirrors.inches(r.standardUncertaintyMm()),
+                        Mirrors.inches(r.expandedUncertaintyMm())));
     }
 
     /** The core names lengths by their base name and the velocity as "velocity": point at the form sent. */
