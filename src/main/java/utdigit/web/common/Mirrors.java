@@ -194,6 +194,47 @@ public final class Mirrors {
         return mm == null ? null : mm.map(Units::mmToIn);
     }
 
+    private static final String NUMBER = "(-?\\d+(?:\\.\\d+)?)";
+    /** "12.5 mm" (not mm/us, mm^2 or a longer word). */
+    private static final java.util.regex.Pattern LENGTH_WITH_UNIT =
+            java.util.regex.Pattern.compile("(?<![\\w.+-])" + NUMBER + " mm(?![\\w/^])");
+    /** "50 mm/s". */
+    private static final java.util.regex.Pattern SPEED_WITH_UNIT =
+            java.util.regex.Pattern.compile("(?<![\\w.+-])" + NUMBER + " mm/s(?![\\w/^])");
+    /** "distance_mm 12.5" (a field named in mm, then its value without the unit). */
+    private static final java.util.regex.Pattern NAMED_LENGTH =
+            java.util.regex.Pattern.compile("\\b([a-z][a-z0-9_]*)_mm " + NUMBER + "(?![\\d.eE]| mm)");
+    /** "planned_scan_speed_mm_per_s 50". */
+    private static final java.util.regex.Pattern NAMED_SPEED =
+            java.util.regex.Pattern.compile("\\b([a-z][a-z0-9_]*)_mm_per_s " + NUMBER + "(?![\\d.eE]| mm/s)");
+    private static final java.math.MathContext MESSAGE_DIGITS = new java.math.MathContext(4);
+
+    /**
+     * A message with the inch value beside every length (and speed) it quotes in mm: "12.5 mm" becomes
+     * "12.5 mm (0.4921 in)", "distance_mm 12.5" becomes "distance_mm 12.5 (0.4921 in)", "50 mm/s"
+     * becomes "50 mm/s (1.969 in/s)"; 4 significant digits, 25.4 mm per inch exactly. Always both
+     * units, whichever the caller used, so that an answer recomputed from its own (mm) inputs says
+     * the same (stamp verification).
+     */
+    public static String withInches(String message) {
+        if (message == null || !message.contains("mm")) {
+            return message;
+        }
+        String out = replace(SPEED_WITH_UNIT, message, m -> m.group() + " (" + inches(m.group(1)) + " in/s)");
+        out = replace(LENGTH_WITH_UNIT, out, m -> m.group() + " (" + inches(m.group(1)) + " in)");
+        out = replace(NAMED_SPEED, out, m -> m.group() + " (" + inches(m.group(2)) + " in/s)");
+        return replace(NAMED_LENGTH, out, m -> m.group() + " (" + inches(m.group(2)) + " in)");
+    }
+
+    private static String inches(String mm) {
+        return MessageNumbers.plain(Units.mmToIn(Double.parseDouble(mm)), MESSAGE_DIGITS);
+    }
+
+    private static String replace(java.util.regex.Pattern pattern, String text,
+                                  java.util.function.Function<java.util.regex.MatchResult, String> with) {
+        return pattern.matcher(text).replaceAll(m -> java.util.regex.Matcher.quoteReplacement(with.apply(m)));
+    }
+
     /** The pointer of a length the caller sent: "/base_in" when the inch form was sent, else "/base_mm". */
     public static String lengthPointer(String base, Double inchValue) {
         return JsonPointers.property(base + (inchValue != null ? "_in" : "_mm"));
