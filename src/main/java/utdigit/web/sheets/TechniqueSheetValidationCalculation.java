@@ -306,7 +306,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 f.actual(), f.limit(), f.limitMetric(), f.comparison(), f.verdict(), f.source(),
                 f.missing().isEmpty() ? null : f.missing(),
                 f.missingInputs().isEmpty() ? null : f.missingInputs(),
-                f.reason(),
+                Mirrors.withInches(f.reason()),
                 f.settings().isEmpty() ? null : f.settings().stream().map(name -> pointer(name, q)).distinct()
                         .toList());
     }
