@@ -97,7 +97,7 @@ public final class SheetEvaluator {
         Double c = part.velocityMPerS();
         Double fs = dig.samplingFrequencyMhz();
 
-        // An angle beam's wedge (both inputs) adds the refracted angle and the incidence-plane figures.
+        // An angle beam's wedge (both inputs) adds the incidence-plane figures (none past the critical angle).
         boolean angleBeam = sheet.setup().angleBeam();
         PulseResult pulse = f == null || c == null ? null : v.feasible("pulse", () -> PulseCalculator.compute(
                 PulseInput.of(f, c).withBandwidthPercent(probe.bandwidthPercent())
