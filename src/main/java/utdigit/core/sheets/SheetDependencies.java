@@ -58,7 +58,9 @@ public final class SheetDependencies {
             Map.entry("active_elements", "/setup/active_elements"),
             Map.entry("dac_span_db", "/setup/dac_span_db"),
             Map.entry("gate_start_us", "/setup/gate_start_us"),
-            Map.entry("gate_end_us", "/setup/gate_end_us"));
+            Map.entry("gate_end_us", "/setup/gate_end_us"),
+            Map.entry("incident_angle_deg", "/setup/incident_angle_deg"),
+            Map.entry("wedge_velocity_m_per_s", "/setup/wedge_velocity_m_per_s"));
 
     private static final String FS = "sampling_frequency_mhz";
     private static final String F = "frequency_mhz";
@@ -67,6 +69,8 @@ public final class SheetDependencies {
     private static final String PCS = "probe_centre_separation_mm";
     /** The gate: in us, or as a sound path in mm (which needs the velocity, checked at the door). */
     private static final String GATE = "gate_length_us|gate_length_mm";
+    private static final List<String> ANGLE_BEAM =
+            List.of(F, C, "element_diameter_mm", "incident_angle_deg", "wedge_velocity_m_per_s");
     private static final List<String> DATA_VOLUME =
             List.of(FS, "bit_depth", GATE, "scan_increment_mm", "pulse_repetition_frequency_hz");
 
@@ -144,7 +148,11 @@ public final class SheetDependencies {
             Map.entry("backwall_time_us", List.of(C, PCS, "thickness_mm")),
             Map.entry("gate_start_margin_us", List.of(C, PCS, "thickness_mm", "gate_start_us", "gate_end_us")),
             Map.entry("gate_end_margin_us", List.of(C, PCS, "thickness_mm", "gate_start_us", "gate_end_us")),
-            Map.entry("tofd_timing_depth_uncertainty_mm", List.of(FS, C, PCS, "thickness_mm", "depth_of_interest_mm")));
+            Map.entry("tofd_timing_depth_uncertainty_mm", List.of(FS, C, PCS, "thickness_mm", "depth_of_interest_mm")),
+            // An angle beam's incidence plane: the projected aperture needs the refracted angle (Snell).
+            Map.entry("incidence_plane_aperture_mm", ANGLE_BEAM),
+            Map.entry("incidence_plane_near_field_length_mm", ANGLE_BEAM),
+            Map.entry("incidence_plane_beam_spread_6db_deg", ANGLE_BEAM));
 
     /** A TOFD sheet's depth step per sample is the TOFD geometry's, not an angle beam's. */
     private static final List<String> TOFD_DEPTH_RESOLUTION = List.of(FS, C, PCS, "depth_of_interest_mm");

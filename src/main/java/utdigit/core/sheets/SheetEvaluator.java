@@ -100,9 +100,13 @@ public final class SheetEvaluator {
         Double c = part.velocityMPerS();
         Double fs = dig.samplingFrequencyMhz();
 
+        // An angle beam's wedge (both inputs) adds the incidence-plane figures (none past the critical angle).
+        boolean angleBeam = sheet.setup().angleBeam();
         PulseResult pulse = f == null || c == null ? null : v.feasible("pulse", () -> PulseCalculator.compute(
                 PulseInput.of(f, c).withBandwidthPercent(probe.bandwidthPercent())
-                        .withElementDiameterMm(probe.elementDiameterMm())));
+                        .withElementDiameterMm(probe.elementDiameterMm())
+                        .withWedgeVelocityMPerS(angleBeam ? sheet.setup().wedgeVelocityMPerS() : null)
+                        .withIncidentAngleDeg(angleBeam ? sheet.setup().incidentAngleDeg() : null)));
         if (pulse != null) {
             PulseResult r = pulse;
             v.put("period_us", r.periodUs());
@@ -116,6 +120,7 @@ public final class SheetEvaluator {
             v.put("axial_resolution_mm", r.axialResolutionMm());
             v.put("near_field_length_mm", r.nearFieldLengthMm());
             v.put("beam_spread_6db_deg", r.beamSpread6dbDeg());
+            SheetSetupMetrics.putIncidencePlane(r.incidencePlane(), v::put);
             v.notes("pulse", r.warnings(), r.references());
         }
         boolean hasGrid = tfm.gridSpacingMm() != null && c != null;

@@ -3,7 +3,7 @@ package utdigit.core.sheets;
 import utdigit.core.dac.TcgMode;
 
 /**
- * A technique sheet's set-up for coverage, arrays, DAC/TCG and the TOFD gate, normalised (lengths in
+ * A technique sheet's set-up for coverage, arrays, DAC/TCG, the TOFD gate and an angle beam's wedge, normalised (lengths in
  * mm). Every field is optional.
  *
  * @param beamWidth6dbMm pulse-echo -6 dB beam width at the reflector's sound path, mm; else the
@@ -20,11 +20,27 @@ import utdigit.core.dac.TcgMode;
  * @param tcg how the span is corrected; null: NONE
  * @param gateStartUs TOFD gate opening time in the part, us
  * @param gateEndUs TOFD gate closing time in the part, us
+ * @param incidentAngleDeg an angle beam's incident angle in its wedge, deg, in [0, 90)
+ * @param wedgeVelocityMPerS longitudinal velocity of that wedge, m/s
  */
 public record SheetSetup(Double beamWidth6dbMm, Double soundPathMm, Double indexStepMm, Double angularStepDeg,
                          Double elementPitchMm, Integer activeElements, Double maxSteeringAngleDeg,
                          Double steeringVelocityMPerS, Double dacSpanDb,
-                         TcgMode tcg, Double gateStartUs, Double gateEndUs) {
+                         TcgMode tcg, Double gateStartUs, Double gateEndUs,
+                         Double incidentAngleDeg, Double wedgeVelocityMPerS) {
     public static final SheetSetup EMPTY =
             new SheetSetup(null, null, null, null, null, null, null, null, null, null, null, null);
+
+    /** A set-up without an angle beam's wedge. */
+    public SheetSetup(Double beamWidth6dbMm, Double soundPathMm, Double indexStepMm, Double angularStepDeg,
+                      Double elementPitchMm, Integer activeElements, Double maxSteeringAngleDeg,
+                      Double steeringVelocityMPerS, Double dacSpanDb, TcgMode tcg, Double gateStartUs, Double gateEndUs) {
+        this(beamWidth6dbMm, soundPathMm, indexStepMm, angularStepDeg, elementPitchMm, activeElements,
+                maxSteeringAngleDeg, steeringVelocityMPerS, dacSpanDb, tcg, gateStartUs, gateEndUs, null, null);
+    }
+
+    /** Both of an angle beam's wedge inputs are given (the incidence-plane figures need them together). */
+    public boolean angleBeam() {
+        return incidentAngleDeg != null && wedgeVelocityMPerS != null;
+    }
 }

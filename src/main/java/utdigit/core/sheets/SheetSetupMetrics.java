@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.BiConsumer;
 import utdigit.core.arrays.ArrayApertureCalculator;
 import utdigit.core.arrays.ArrayApertureInput;
 import utdigit.core.arrays.ArrayApertureResult;
@@ -17,6 +18,8 @@ import utdigit.core.dac.DacQuantizationCalculator;
 import utdigit.core.dac.DacQuantizationInput;
 import utdigit.core.dac.DacQuantizationResult;
 import utdigit.core.dac.TcgMode;
+import utdigit.core.pulse.PulseCalculator;
+import utdigit.core.pulse.PulseResult;
 import utdigit.core.timing.TofdSetupCalculator;
 import utdigit.core.timing.TofdSetupInput;
 import utdigit.core.timing.TofdSetupResult;
@@ -24,7 +27,8 @@ import utdigit.core.timing.TofdSetupResult;
 /**
  * The sheet metrics of scan coverage, array apertures, DAC/TCG and the TOFD set-up, computed by the
  * same core calculators as POST /api/scan-coverages, /api/array-apertures, /api/dac-quantizations
- * and /api/tofd-setups.
+ * and /api/tofd-setups; an angle beam's incidence-plane figures come from the sheet's pulse
+ * calculation (POST /api/pulse-parameters' calculator) through {@link #putIncidencePlane}.
  */
 public final class SheetSetupMetrics {
     private SheetSetupMetrics() {}
@@ -32,7 +36,8 @@ public final class SheetSetupMetrics {
     /** Sheet inputs of the set-up section that rules may name. */
     public static final List<String> INPUTS = List.of(
             "beam_width_6db_mm", "sound_path_mm", "index_step_mm", "angular_step_deg", "element_pitch_mm",
-            "active_elements", "max_steering_angle_deg", "steering_velocity_m_per_s", "dac_span_db", "gate_start_us", "gate_end_us");
+            "active_elements", "max_steering_angle_deg", "steering_velocity_m_per_s", "dac_span_db", "gate_start_us", "gate_end_us",
+            "incident_angle_deg", "wedge_velocity_m_per_s");
 
     /** Computed values of the set-up that rules may name. */
     public static final List<String> COMPUTED = List.of(
@@ -43,7 +48,26 @@ public final class SheetSetupMetrics {
             // DAC / TCG
             "lowest_reference_height_percent_fsh", "dac_error_magnitude_db",
             // TOFD set-up
-            "backwall_time_us", "gate_start_margin_us", "gate_end_margin_us", "tofd_timing_depth_uncertainty_mm");
+            "backwall_time_us", "gate_start_margin_us", "gate_end_margin_us", "tofd_timing_depth_uncertainty_mm",
+            // angle beam, incidence plane (the probe's near_field_length_mm and beam_spread_6db_deg then hold for
+            // the plane perpendicular to incidence)
+            "incidence_plane_aperture_mm", "incidence_plane_near_field_length_mm",
+            "incidence_plane_beam_spread_6db_deg");
+
+    /**
+     * An angle beam's incidence-plane figures, as POST /api/pulse-parameters computes them
+     * ({@link PulseCalculator} with the sheet's incident angle and wedge velocity): the sheet's pulse
+     * calculation puts them through {@code put}. Past the critical angle they are empty (the pulse
+     * warning PAST_CRITICAL_ANGLE says why).
+     */
+    static void putIncidencePlane(PulseResult.IncidencePlane plane, BiConsumer<String, Optional<Double>> put) {
+        if (plane == null) {
+            return;
+        }
+        put.accept("incidence_plane_aperture_mm", plane.apertureMm());
+        put.accept("incidence_plane_near_field_length_mm", plane.nearFieldLengthMm());
+        put.accept("incidence_plane_beam_spread_6db_deg", plane.beamSpread6dbDeg());
+    }
 
     /** The metrics, warnings (prefixed with their calculation) and references of the set-up. */
     public record Computed(Map<String, Double> values, List<Warning> warnings, List<Reference> references) {}
@@ -68,6 +92,8 @@ public final class SheetSetupMetrics {
         put(values, "dac_span_db", s.dacSpanDb());
         put(values, "gate_start_us", s.gateStartUs());
         put(values, "gate_end_us", s.gateEndUs());
+        put(values, "incident_angle_deg", s.incidentAngleDeg());
+        put(values, "wedge_velocity_m_per_s", s.wedgeVelocityMPerS());
 
         Double increment = sheet.acquisition().scanIncrementMm();
         boolean anyStep = increment != null || s.indexStepMm() != null

@@ -149,7 +149,10 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                                 q.fileSizeLimitMegabytes())
                         .build(),
                 inputs, VelocitySourceView.of(velocity),
-                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()),
+                AcquisitionBudgetResponse.InInches.of(Mirrors.inches(r.maxScanLengthPerFileMm()),
+                        Mirrors.inches(r.maxScanSpeedMmPerS()),
+                        Mirrors.inches(r.dataRateScanSpeedMmPerS())));
     }
 
     /** The names of the inputs given (non-null), from name-value pairs. */

@@ -2,6 +2,7 @@ package utdigit.web.acquisition;
 
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
+import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
 import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.ResultNotes.WarningView;
@@ -73,5 +74,28 @@ record AcquisitionBudgetResponse(
         @Schema(description = "The velocity used; only when a gate or sound path was given as a length")
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "AcquisitionBudgetInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "max_scan_length_per_file_mm / 25.4, in", format = "double")
+            Double maxScanLengthPerFileIn,
+            @Schema(description = "max_scan_speed_mm_per_s / 25.4, in/s", format = "double")
+            Double maxScanSpeedInPerS,
+            @Schema(description = "data_rate_scan_speed_mm_per_s / 25.4, in/s", format = "double")
+            Double dataRateScanSpeedInPerS) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Double maxScanLengthPerFileIn, Double maxScanSpeedInPerS, Double dataRateScanSpeedInPerS) {
+            return maxScanLengthPerFileIn == null && maxScanSpeedInPerS == null &&
+                    dataRateScanSpeedInPerS == null ? null
+                    : new InInches(maxScanLengthPerFileIn, maxScanSpeedInPerS, dataRateScanSpeedInPerS);
+        }
+    }
 }

@@ -53,7 +53,12 @@ class ArrayApertureCalculation implements Calculation<ArrayApertureRequest> {
                 r.beamSpread6dbDeg(), r.beamSpread20dbDeg(), r.beamSpreadNullDeg(), r.passiveNearFieldLengthMm(),
                 r.passiveBeamSpread6dbDeg(), r.pitchToWavelengthRatio(), r.maxGratingLobeFreePitchMm(),
                 r.gratingLobeFree(), inputs, VelocitySourceView.of(velocity), ResultNotes.warnings(r.warnings()),
-                ResultNotes.references(r.references()));
+                ResultNotes.references(r.references()),
+                ArrayApertureResponse.InInches.of(Mirrors.inches(r.wavelengthMm()),
+                        Mirrors.inches(r.activeApertureMm()),
+                        Mirrors.inches(r.nearFieldLengthMm()),
+                        Mirrors.inches(r.passiveNearFieldLengthMm()),
+                        Mirrors.inches(r.maxGratingLobeFreePitchMm())));
     }
 
     @Override

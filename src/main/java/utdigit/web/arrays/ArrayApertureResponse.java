@@ -49,5 +49,34 @@ record ArrayApertureResponse(
         ArrayApertureRequest inputs,
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "ArrayApertureInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "wavelength_mm / 25.4, in", format = "double")
+            Double wavelengthIn,
+            @Schema(description = "active_aperture_mm / 25.4, in", format = "double")
+            Double activeApertureIn,
+            @Schema(description = "near_field_length_mm / 25.4, in", format = "double")
+            Double nearFieldLengthIn,
+            @Schema(description = "passive_near_field_length_mm / 25.4, in", format = "double")
+            Double passiveNearFieldLengthIn,
+            @Schema(description = "max_grating_lobe_free_pitch_mm / 25.4, in", format = "double")
+            Double maxGratingLobeFreePitchIn) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Double wavelengthIn, Double activeApertureIn, Double nearFieldLengthIn,
+                    Double passiveNearFieldLengthIn, Double maxGratingLobeFreePitchIn) {
+            return wavelengthIn == null && activeApertureIn == null && nearFieldLengthIn == null &&
+                    passiveNearFieldLengthIn == null && maxGratingLobeFreePitchIn == null ? null
+                    : new InInches(wavelengthIn, activeApertureIn, nearFieldLengthIn, passiveNearFieldLengthIn,
+                    maxGratingLobeFreePitchIn);
+        }
+    }
 }

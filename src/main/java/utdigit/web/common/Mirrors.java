@@ -3,6 +3,7 @@ package utdigit.web.common;
 import java.util.ArrayList;
 import java.util.List;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Units;
 import utdigit.core.materials.Material;
 import utdigit.core.materials.MaterialCatalog;
@@ -78,6 +79,37 @@ public final class Mirrors {
     }
 
     /**
+     * A speed in m/s of the input {@code base} given as {@code base_m_per_s} or {@code base_in_per_us}
+     * (1 in/us = 25 400 m/s exactly), or null when neither is given: a wedge's or a steering medium's
+     * velocity, a velocity's uncertainty. The inch form is range-checked after conversion against
+     * {@code [minMPerS, maxMPerS]} (the m/s form's Bean Validation range).
+     */
+    public static Double speedMPerS(FieldErrors errors, String base, Double mPerS, Double inPerUs,
+                                    double minMPerS, double maxMPerS) {
+        String mName = base + "_m_per_s";
+        String inName = base + "_in_per_us";
+        if (mPerS != null && inPerUs != null) {
+            String detail = "give " + base + " once: " + mName + " or " + inName + ", not both";
+            errors.add(mName, detail).add(inName, detail);
+            return null;
+        }
+        if (inPerUs == null) {
+            return mPerS;
+        }
+        double converted = Units.inPerUsToMPerS(inPerUs);
+        if (!(converted >= minMPerS && converted <= maxMPerS)) {
+            errors.add(inName, "must correspond to " + MessageNumbers.plain(minMPerS, SPEED_DIGITS) + " to "
+                    + MessageNumbers.plain(maxMPerS, SPEED_DIGITS) + " m/s ("
+                    + MessageNumbers.plain(Units.mPerSToInPerUs(minMPerS), SPEED_DIGITS) + " to "
+                    + MessageNumbers.plain(Units.mPerSToInPerUs(maxMPerS), SPEED_DIGITS) + " in/us)");
+            return null;
+        }
+        return converted;
+    }
+
+    private static final java.math.MathContext SPEED_DIGITS = new java.math.MathContext(6);
+
+    /**
      * The velocity of {@code f}: the caller's (m/s or in/us) or a built-in material's; null when
      * none is given and it is optional.
      *
@@ -143,6 +175,64 @@ public final class Mirrors {
         }
         WaveMode mode = f.waveMode() == null ? WaveMode.LONGITUDINAL : f.waveMode();
         return VelocitySource.ofMaterial(material, mode, f.temperatureC());
+    }
+
+    /**
+     * The inch mirror of a length result in mm (mm / 25.4, the inch being 25.4 mm exactly); null
+     * (omitted: its optional input was not given) stays null.
+     */
+    public static Double inches(Double mm) {
+        return mm == null ? null : Units.mmToIn(mm);
+    }
+
+    /**
+     * The inch mirror of a length result that may not exist: empty (null in JSON) stays empty, null
+     * (omitted) stays null.
+     */
+    @SuppressWarnings("OptionalUsedAsFieldOrParameterType")
+    public static java.util.Optional<Double> inches(java.util.Optional<Double> mm) {
+        return mm == null ? null : mm.map(Units::mmToIn);
+    }
+
+    private static final String NUMBER = "(-?\\d+(?:\\.\\d+)?)";
+    /** "12.5 mm" (not mm/us, mm^2 or a longer word). */
+    private static final java.util.regex.Pattern LENGTH_WITH_UNIT =
+            java.util.regex.Pattern.compile("(?<![\\w.+-])" + NUMBER + " mm(?![\\w/^])");
+    /** "50 mm/s". */
+    private static final java.util.regex.Pattern SPEED_WITH_UNIT =
+            java.util.regex.Pattern.compile("(?<![\\w.+-])" + NUMBER + " mm/s(?![\\w/^])");
+    /** "distance_mm 12.5" (a field named in mm, then its value without the unit). */
+    private static final java.util.regex.Pattern NAMED_LENGTH =
+            java.util.regex.Pattern.compile("\\b([a-z][a-z0-9_]*)_mm " + NUMBER + "(?![\\d.eE]| mm)");
+    /** "planned_scan_speed_mm_per_s 50". */
+    private static final java.util.regex.Pattern NAMED_SPEED =
+            java.util.regex.Pattern.compile("\\b([a-z][a-z0-9_]*)_mm_per_s " + NUMBER + "(?![\\d.eE]| mm/s)");
+    private static final java.math.MathContext MESSAGE_DIGITS = new java.math.MathContext(4);
+
+    /**
+     * A message with the inch value beside every length (and speed) it quotes in mm: "12.5 mm" becomes
+     * "12.5 mm (0.4921 in)", "distance_mm 12.5" becomes "distance_mm 12.5 (0.4921 in)", "50 mm/s"
+     * becomes "50 mm/s (1.969 in/s)"; 4 significant digits, 25.4 mm per inch exactly. Always both
+     * units, whichever the caller used, so that an answer recomputed from its own (mm) inputs says
+     * the same (stamp verification).
+     */
+    public static String withInches(String message) {
+        if (message == null || !message.contains("mm")) {
+            return message;
+        }
+        String out = replace(SPEED_WITH_UNIT, message, m -> m.group() + " (" + inches(m.group(1)) + " in/s)");
+        out = replace(LENGTH_WITH_UNIT, out, m -> m.group() + " (" + inches(m.group(1)) + " in)");
+        out = replace(NAMED_SPEED, out, m -> m.group() + " (" + inches(m.group(2)) + " in/s)");
+        return replace(NAMED_LENGTH, out, m -> m.group() + " (" + inches(m.group(2)) + " in)");
+    }
+
+    private static String inches(String mm) {
+        return MessageNumbers.plain(Units.mmToIn(Double.parseDouble(mm)), MESSAGE_DIGITS);
+    }
+
+    private static String replace(java.util.regex.Pattern pattern, String text,
+                                  java.util.function.Function<java.util.regex.MatchResult, String> with) {
+        return pattern.matcher(text).replaceAll(m -> java.util.regex.Matcher.quoteReplacement(with.apply(m)));
     }
 
     /** The pointer of a length the caller sent: "/base_in" when the inch form was sent, else "/base_mm". */

@@ -13,7 +13,8 @@ public final class ResultNotes {
     @Schema(name = "Warning", description = "Something the caller should know; the result is still valid")
     public record WarningView(
             @Schema(description = "Stable UPPER_SNAKE_CASE code", example = "NEAR_FIELD") String code,
-            @Schema(description = "Explanation in the caller's terms") String message) {}
+            @Schema(description = "Explanation in the caller's terms; every length it quotes in mm is followed by "
+                    + "its inch value, \"12.5 mm (0.4921 in)\"") String message) {}
 
     /** A reference of an answer. */
     @Schema(name = "Reference", description = "Where a formula or value of the answer comes from: its topic and "
@@ -24,7 +25,7 @@ public final class ResultNotes {
             String id) {}
 
     public static List<WarningView> warnings(List<Warning> warnings) {
-        return warnings.stream().map(w -> new WarningView(w.code(), w.message())).toList();
+        return warnings.stream().map(w -> new WarningView(w.code(), Mirrors.withInches(w.message()))).toList();
     }
 
     public static List<ReferenceView> references(List<Reference> references) {

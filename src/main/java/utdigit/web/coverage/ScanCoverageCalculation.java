@@ -62,7 +62,9 @@ class ScanCoverageCalculation implements Calculation<ScanCoverageRequest> {
                         .atMost("angular_step_loss_db", r.angularStepLossDb(), "amplitude_tolerance_db", q.amplitudeToleranceDb())
                         .build(),
                 inputs, VelocitySourceView.of(velocity),
-                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()),
+                ScanCoverageResponse.InInches.of(Mirrors.inches(r.beamWidth6dbMm()),
+                        Mirrors.inches(r.maxStepMm())));
     }
 
     @Override

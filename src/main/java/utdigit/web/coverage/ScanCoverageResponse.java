@@ -50,5 +50,27 @@ record ScanCoverageResponse(
         ScanCoverageRequest inputs,
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "ScanCoverageInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "beam_width_6db_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> beamWidth6dbIn,
+            @Schema(description = "max_step_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> maxStepIn) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Optional<Double> beamWidth6dbIn, Optional<Double> maxStepIn) {
+            return beamWidth6dbIn == null && maxStepIn == null ? null
+                    : new InInches(beamWidth6dbIn, maxStepIn);
+        }
+    }
 }

@@ -36,6 +36,8 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
                     JsonPointers.property(q.distanceIn() != null ? "distance_in" : "distance_mm");
             case "wedge_path_mm", "wedge_path" ->
                     JsonPointers.property(q.wedgePathIn() != null ? "wedge_path_in" : "wedge_path_mm");
+            case "wedge_velocity_m_per_s", "wedge_velocity" -> JsonPointers.property(
+                    q.wedgeVelocityInPerUs() != null ? "wedge_velocity_in_per_us" : "wedge_velocity_m_per_s");
             case "velocity_m_per_s", "velocity" -> JsonPointers.property(q.material() != null ? "material"
                     : q.velocityInPerUs() != null ? "velocity_in_per_us" : "velocity_m_per_s");
             default -> JsonPointers.property(coreField);
@@ -49,18 +51,20 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
         Double diameterMm = Mirrors.lengthMm(errors, "element_diameter", q.elementDiameterMm(), q.elementDiameterIn(), false);
         Double distanceMm = Mirrors.lengthMm(errors, "distance", q.distanceMm(), q.distanceIn(), false);
         Double wedgePathMm = Mirrors.lengthMm(errors, "wedge_path", q.wedgePathMm(), q.wedgePathIn(), false);
+        Double wedgeVelocityMPerS = Mirrors.speedMPerS(errors, "wedge_velocity", q.wedgeVelocityMPerS(),
+                q.wedgeVelocityInPerUs(), Mirrors.MIN_VELOCITY_M_PER_S, Mirrors.MAX_VELOCITY_M_PER_S);
         // centre_frequency_convention without bandwidth_percent is the core's NOT_APPLICABLE (400
         // inapplicable-input), not a field error of this layer (which would answer invalid-input).
         errors.throwIfAny();
 
         PulseResult r = PulseCalculator.compute(new PulseInput(q.frequencyMhz(), velocity.velocityMPerS(),
                 q.bandwidthPercent(), q.centreFrequencyConvention(), diameterMm, distanceMm, wedgePathMm,
-                q.wedgeVelocityMPerS(), q.incidentAngleDeg()));
+                wedgeVelocityMPerS, q.incidentAngleDeg()));
 
         PulseParametersRequest inputs = new PulseParametersRequest(q.frequencyMhz(), velocity.velocityMPerS(),
                 null, null, null, null, q.bandwidthPercent(),
                 q.bandwidthPercent() == null ? null : r.centreFrequencyConvention(),
-                diameterMm, null, distanceMm, null, wedgePathMm, null, q.wedgeVelocityMPerS(), q.incidentAngleDeg());
+                diameterMm, null, distanceMm, null, wedgePathMm, null, wedgeVelocityMPerS, q.incidentAngleDeg(), null);
         PulseResult.IncidencePlane plane = r.incidencePlane();
         return new PulseParametersResponse(r.periodUs(), r.wavelengthMm(), r.wavelengthIn(),
                 r.lowerFrequencyMhz(), r.upperFrequencyMhz(), r.lowerFrequency20dbMhz(), r.upperFrequency20dbMhz(),
@@ -73,6 +77,16 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
                 plane == null ? null : plane.beamSpread20dbDeg(), plane == null ? null : plane.beamDiameter6dbMm(),
                 inputs,
                 VelocitySourceView.of(velocity), ResultNotes.warnings(r.warnings()),
-                ResultNotes.references(r.references()));
+                ResultNotes.references(r.references()),
+                PulseParametersResponse.InInches.of(Mirrors.inches(r.spatialPulseLengthMm()),
+                        Mirrors.inches(r.axialResolutionMm()),
+                        Mirrors.inches(r.nearFieldLengthMm()),
+                        Mirrors.inches(r.nearFieldLengthExactMm()),
+                        Mirrors.inches(r.beamDiameter6dbMm()),
+                        Mirrors.inches(r.nearFieldInPartMm()),
+                        Mirrors.inches(plane == null ? null : plane.apertureMm()),
+                        Mirrors.inches(plane == null ? null : plane.nearFieldLengthMm()),
+                        Mirrors.inches(plane == null ? null : plane.nearFieldInPartMm()),
+                        Mirrors.inches(plane == null ? null : plane.beamDiameter6dbMm())));
     }
 }

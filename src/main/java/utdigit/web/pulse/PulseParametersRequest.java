@@ -11,7 +11,7 @@ import utdigit.web.common.VelocityFields;
 /** POST /api/pulse-parameters. */
 @Schema(name = "PulseParametersRequest", description = "A probe and the part's velocity. Give the velocity once: "
         + "velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + temperature_c for water). "
-        + "Each length once: _mm or _in.")
+        + "Each length once: _mm or _in; the wedge velocity once: _m_per_s or _in_per_us.")
 public record PulseParametersRequest(
         @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", format = "double", example = "5",
                 exclusiveMinimumValue = 0, maximum = "1000")
@@ -88,5 +88,11 @@ public record PulseParametersRequest(
         @Schema(description = "Incident angle in the wedge, deg (0 to below 90); needs wedge_velocity_m_per_s",
                 format = "double", example = "36", minimum = "0", exclusiveMaximumValue = 90)
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
-        Double incidentAngleDeg) implements VelocityFields {
+        Double incidentAngleDeg,
+
+        @Schema(description = "Longitudinal velocity of the wedge or delay line, in/us (equivalent of 100 to 20000 "
+                + "m/s); the inch form of wedge_velocity_m_per_s", format = "double", example = "0.1075",
+                exclusiveMinimumValue = 0)
+        @DecimalMin(value = "0", inclusive = false)
+        Double wedgeVelocityInPerUs) implements VelocityFields {
 }

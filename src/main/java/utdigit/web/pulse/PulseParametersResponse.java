@@ -99,5 +99,58 @@ record PulseParametersResponse(
         PulseParametersRequest inputs,
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "PulseParametersInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "spatial_pulse_length_mm / 25.4, in", format = "double")
+            Double spatialPulseLengthIn,
+            @Schema(description = "axial_resolution_mm / 25.4, in", format = "double")
+            Double axialResolutionIn,
+            @Schema(description = "near_field_length_mm / 25.4, in", format = "double")
+            Double nearFieldLengthIn,
+            @Schema(description = "near_field_length_exact_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> nearFieldLengthExactIn,
+            @Schema(description = "beam_diameter_6db_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> beamDiameter6dbIn,
+            @Schema(description = "near_field_in_part_mm / 25.4, in", format = "double")
+            Double nearFieldInPartIn,
+            @Schema(description = "incidence_plane_aperture_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> incidencePlaneApertureIn,
+            @Schema(description = "incidence_plane_near_field_length_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> incidencePlaneNearFieldLengthIn,
+            @Schema(description = "incidence_plane_near_field_in_part_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> incidencePlaneNearFieldInPartIn,
+            @Schema(description = "incidence_plane_beam_diameter_6db_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> incidencePlaneBeamDiameter6dbIn) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Double spatialPulseLengthIn, Double axialResolutionIn, Double nearFieldLengthIn,
+                    Optional<Double> nearFieldLengthExactIn, Optional<Double> beamDiameter6dbIn,
+                    Double nearFieldInPartIn, Optional<Double> incidencePlaneApertureIn,
+                    Optional<Double> incidencePlaneNearFieldLengthIn,
+                    Optional<Double> incidencePlaneNearFieldInPartIn,
+                    Optional<Double> incidencePlaneBeamDiameter6dbIn) {
+            return spatialPulseLengthIn == null && axialResolutionIn == null && nearFieldLengthIn == null &&
+                    nearFieldLengthExactIn == null && beamDiameter6dbIn == null && nearFieldInPartIn == null &&
+                    incidencePlaneApertureIn == null && incidencePlaneNearFieldLengthIn == null &&
+                    incidencePlaneNearFieldInPartIn == null && incidencePlaneBeamDiameter6dbIn == null ? null
+                    : new InInches(spatialPulseLengthIn, axialResolutionIn, nearFieldLengthIn,
+                    nearFieldLengthExactIn, beamDiameter6dbIn, nearFieldInPartIn, incidencePlaneApertureIn,
+                    incidencePlaneNearFieldLengthIn, incidencePlaneNearFieldInPartIn,
+                    incidencePlaneBeamDiameter6dbIn);
+        }
+    }
 }

@@ -104,7 +104,8 @@ class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentReq
                 r.requiredSamplingFrequencyPulseMhz(), r.tfmGridAmplitudeLossDb(), r.tfmMaxGridSpacingMm(),
                 r.tfmLateralAmplitudeLossDb(), tolerance(r, q.amplitudeToleranceDb()), inputs,
                 VelocitySourceView.of(velocity),
-                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()),
+                SamplingAssessmentResponse.InInches.of(Mirrors.inches(r.tfmMaxGridSpacingMm())));
     }
 
     /** Each loss at most the caller's amplitude tolerance. */

@@ -117,5 +117,23 @@ record SamplingAssessmentResponse(
         VelocitySourceView velocitySource,
 
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "SamplingAssessmentInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "tfm_max_grid_spacing_mm / 25.4, in", format = "double")
+            Double tfmMaxGridSpacingIn) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Double tfmMaxGridSpacingIn) {
+            return tfmMaxGridSpacingIn == null ? null
+                    : new InInches(tfmMaxGridSpacingIn);
+        }
+    }
 }

@@ -10,9 +10,11 @@ import utdigit.core.sheets.SheetSetup;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.Mirrors;
 
-/** The set-up section of a technique sheet: coverage, array, DAC/TCG and the TOFD gate. */
+/** The set-up section of a technique sheet: coverage, array, DAC/TCG, the TOFD gate and an angle beam's wedge. */
 @Schema(name = "SheetSetup", description = "Scan coverage (with acquisition.scan_increment), the array's pitch and "
-        + "steering, the DAC curve's span and its correction, and the TOFD gate. Each length once: _mm or _in.")
+        + "steering, the DAC curve's span and its correction, the TOFD gate, and an angle beam's wedge (incident "
+        + "angle and wedge velocity, for the incidence-plane figures). Each length once: _mm or _in; each speed once: "
+        + "_m_per_s or _in_per_us.")
 public record SheetSetupSection(
         @Schema(description = "Pulse-echo -6 dB beam width at the reflector's sound path, mm; else the round probe's "
                 + "(probe.frequency_mhz, probe.element_diameter, the part's velocity) at sound_path", format = "double",
@@ -54,7 +56,23 @@ public record SheetSetupSection(
         @Schema(description = "TOFD gate opening time in the part, us (0 to 100000)", format = "double", example = "10")
         @DecimalMin("0") @DecimalMax("100000") Double gateStartUs,
         @Schema(description = "TOFD gate closing time in the part, us (0 to 100000)", format = "double", example = "16.5")
-        @DecimalMin("0") @DecimalMax("100000") Double gateEndUs) {
+        @DecimalMin("0") @DecimalMax("100000") Double gateEndUs,
+        @Schema(description = "Velocity of the medium where the beam is steered, in/us (equivalent of 100 to 20000 "
+                + "m/s); the inch form of steering_velocity_m_per_s", format = "double", example = "0.0917")
+        @DecimalMin(value = "0", inclusive = false) Double steeringVelocityInPerUs,
+        @Schema(description = "Angle beam: incident angle in the wedge, deg (0 to below 90); with "
+                + "wedge_velocity, probe.frequency_mhz, probe.element_diameter and the part's velocity it gives the "
+                + "incidence-plane figures (incidence_plane_aperture_mm, incidence_plane_near_field_length_mm, "
+                + "incidence_plane_beam_spread_6db_deg)", format = "double", example = "36",
+                minimum = "0", exclusiveMaximumValue = 90)
+        @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double incidentAngleDeg,
+        @Schema(description = "Angle beam: longitudinal velocity of the wedge, m/s (100 to 20000); wedge grades vary "
+                + "by maker and temperature: give the measured value", format = "double", example = "2730",
+                minimum = "100", maximum = "20000")
+        @DecimalMin("100") @DecimalMax("20000") Double wedgeVelocityMPerS,
+        @Schema(description = "Angle beam: longitudinal velocity of the wedge, in/us (equivalent of 100 to 20000 m/s)",
+                format = "double", example = "0.1075")
+        @DecimalMin(value = "0", inclusive = false) Double wedgeVelocityInPerUs) {
 
     /** The core's section with lengths in mm; field errors go to {@code errors} (section "setup"). */
     SheetSetup toCore(FieldErrors errors) {
@@ -69,8 +87,12 @@ public record SheetSetupSection(
             errors.add(gateStartUs == null ? "gate_start_us" : "gate_end_us",
                     "give the gate whole: gate_start_us and gate_end_us together");
         }
+        Double steeringMPerS = Mirrors.speedMPerS(errors, "steering_velocity", steeringVelocityMPerS,
+                steeringVelocityInPerUs, Mirrors.MIN_VELOCITY_M_PER_S, Mirrors.MAX_VELOCITY_M_PER_S);
+        Double wedgeMPerS = Mirrors.speedMPerS(errors, "wedge_velocity", wedgeVelocityMPerS, wedgeVelocityInPerUs,
+                Mirrors.MIN_VELOCITY_M_PER_S, Mirrors.MAX_VELOCITY_M_PER_S);
         return new SheetSetup(widthMm, pathMm, indexMm, angularStepDeg, pitchMm, activeElements, maxSteeringAngleDeg,
-                steeringVelocityMPerS, dacSpanDb, tcg, gateStartUs, gateEndUs);
+                steeringMPerS, dacSpanDb, tcg, gateStartUs, gateEndUs, incidentAngleDeg, wedgeMPerS);
     }
 
     /** The normalised section for an answer's inputs (lengths in mm). */
@@ -78,6 +100,6 @@ public record SheetSetupSection(
         return new SheetSetupSection(s.beamWidth6dbMm(), null, s.soundPathMm(), null, s.indexStepMm(), null,
                 s.angularStepDeg(), s.elementPitchMm(), null, s.activeElements(), s.maxSteeringAngleDeg(),
                 s.steeringVelocityMPerS(), s.dacSpanDb(),
-                s.tcg(), s.gateStartUs(), s.gateEndUs());
+                s.tcg(), s.gateStartUs(), s.gateEndUs(), null, s.incidentAngleDeg(), s.wedgeVelocityMPerS(), null);
     }
 }

@@ -87,7 +87,10 @@ public record TechniqueSheetRequest(
             @Schema(description = "Wall thickness, in", format = "double", example = "1")
             @DecimalMin(value = "0", inclusive = false) Double thicknessIn,
             @Schema(description = "Refracted angle of an angle beam, deg (0 to below 90)", format = "double", example = "60")
-            @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double refractedAngleDeg) implements VelocityFields {}
+            @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double refractedAngleDeg,
+            @Schema(description = "Standard uncertainty of the velocity, in/us (equivalent of 0 to 4000 m/s); the inch "
+                    + "form of velocity_uncertainty_m_per_s", format = "double", example = "0.00059")
+            @DecimalMin("0") Double velocityUncertaintyInPerUs) implements VelocityFields {}
 
     /** The digitizer's settings. */
     @Schema(name = "SheetDigitization")

@@ -57,7 +57,12 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
             Map.entry("tfm_image", "/tfm/image"),
             Map.entry("reference_height_percent_fsh", "/evaluation/reference_height_percent_fsh"),
             Map.entry("evaluation_level_db", "/evaluation/evaluation_level_db"),
-            Map.entry("amplitude_tolerance_db", "/evaluation/amplitude_tolerance_db"));
+            Map.entry("amplitude_tolerance_db", "/evaluation/amplitude_tolerance_db"),
+            Map.entry("incident_angle_deg", "/setup/incident_angle_deg"),
+            Map.entry("wedge_velocity_m_per_s", "/setup/wedge_velocity_m_per_s"));
+
+    /** The m/s form's upper bound of a velocity's standard uncertainty (its Bean Validation range). */
+    private static final double MAX_VELOCITY_UNCERTAINTY_M_PER_S = 4000.0;
 
     private static final java.util.Set<String> DIGITIZATION = java.util.Set.of("sampling_frequency_mhz",
             "decimation_factor", "bit_depth", "digitized_signal", "quantizer", "code_mapping", "decimation_mode",
@@ -84,13 +89,18 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         return inCallerForm(sheetPointer(coreField, q), q);
     }
 
-    /** The pointer of a length the caller gave in inches names the inch field (/material/thickness_in). */
+    /**
+     * The pointer of a length or speed the caller gave in inches names the inch field
+     * (/material/thickness_in, /setup/wedge_velocity_in_per_us).
+     */
     private static String inCallerForm(String pointer, TechniqueSheetRequest q) {
         String[] parts = pointer.split("/");
-        if (parts.length != 3 || !parts[2].endsWith("_mm")) {
+        if (parts.length != 3 || !(parts[2].endsWith("_mm") || parts[2].endsWith("_m_per_s"))) {
             return pointer;
         }
-        String inchName = parts[2].substring(0, parts[2].length() - "_mm".length()) + "_in";
+        String inchName = parts[2].endsWith("_mm")
+                ? parts[2].substring(0, parts[2].length() - "_mm".length()) + "_in"
+                : parts[2].substring(0, parts[2].length() - "_m_per_s".length()) + "_in_per_us";
         Object section = component(q, parts[1]);
         return section != null && component(section, inchName) != null ? "/" + parts[1] + "/" + inchName : pointer;
     }
@@ -132,7 +142,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
         TechniqueSheetRequest.Probe p = q.probe() == null ? new TechniqueSheetRequest.Probe(null, null, null, null, null)
                 : q.probe();
         TechniqueSheetRequest.Material m = q.material() == null ? new TechniqueSheetRequest.Material(null, null, null,
-                null, null, null, null, null, null, null) : q.material();
+                null, null, null, null, null, null, null, null) : q.material();
         TechniqueSheetRequest.Acquisition a = q.acquisition() == null ? new TechniqueSheetRequest.Acquisition(null, null,
                 null, null, null, null, null, null, null, null, null, null, null, null, null, null, null, null)
                 : q.acquisition();
@@ -155,9 +165,13 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
             velocity = null;
         }
         Double thicknessMm = Mirrors.lengthMm(materialErrors, "thickness", m.thicknessMm(), m.thicknessIn(), false);
-        if (m.velocityUncertaintyMPerS() != null && m.velocityUncertaintyPercent() != null) {
-            String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s or velocity_uncertainty_percent";
-            materialErrors.add("velocity_uncertainty_m_per_s", detail).add("velocity_uncertainty_percent", detail);
+        Double givenUncertaintyMPerS = Mirrors.speedMPerS(materialErrors, "velocity_uncertainty",
+                m.velocityUncertaintyMPerS(), m.velocityUncertaintyInPerUs(), 0.0, MAX_VELOCITY_UNCERTAINTY_M_PER_S);
+        if (givenUncertaintyMPerS != null && m.velocityUncertaintyPercent() != null) {
+            String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s (or _in_per_us) or "
+                    + "velocity_uncertainty_percent";
+            materialErrors.add(m.velocityUncertaintyInPerUs() != null ? "velocity_uncertainty_in_per_us"
+                    : "velocity_uncertainty_m_per_s", detail).add("velocity_uncertainty_percent", detail);
         }
         FieldErrors acqErrors = errors.section("acquisition");
         Double incrementMm = Mirrors.lengthMm(acqErrors, "scan_increment", a.scanIncrementMm(), a.scanIncrementIn(), false);
@@ -194,10 +208,10 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
 
         Double c = velocity == null ? null : velocity.velocityMPerS();
         // No velocity uncertainty given and a material that states one: its standard uncertainty is used.
-        boolean materialUncertainty = velocity != null && m.velocityUncertaintyMPerS() == null
+        boolean materialUncertainty = velocity != null && givenUncertaintyMPerS == null
                 && m.velocityUncertaintyPercent() == null && velocity.standardUncertaintyMPerS() != null;
         Double velocityUncertaintyMPerS = materialUncertainty
-                ? velocity.standardUncertaintyMPerS() : m.velocityUncertaintyMPerS();
+                ? velocity.standardUncertaintyMPerS() : givenUncertaintyMPerS;
         TechniqueSheetRequest.Digitization d = q.digitization();
         SheetInput sheet = new SheetInput(q.sheetId(), q.revision(), q.technique(),
                 new SheetInput.Probe(p.frequencyMhz(), p.bandwidthPercent(), diameterMm, p.elementCount()),
@@ -223,10 +237,10 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 q.material() == null ? null : inputFailures.isEmpty() ? new TechniqueSheetRequest.Material(null, null,
                         null, c, null,
                         velocityUncertaintyMPerS, m.velocityUncertaintyPercent(), thicknessMm, null,
-                        m.refractedAngleDeg())
+                        m.refractedAngleDeg(), null)
                         : new TechniqueSheetRequest.Material(m.material(), m.waveMode(), m.temperatureC(), null, null,
-                        m.velocityUncertaintyMPerS(), m.velocityUncertaintyPercent(), thicknessMm, null,
-                        m.refractedAngleDeg()),
+                        givenUncertaintyMPerS, m.velocityUncertaintyPercent(), thicknessMm, null,
+                        m.refractedAngleDeg(), null),
                 d,
                 q.acquisition() == null ? null : new TechniqueSheetRequest.Acquisition(a.pulseRepetitionFrequencyHz(),
                         a.focalLaws(), a.fmcElementCount(), a.capture(), a.averaging(), incrementMm, null, lengthMm,
@@ -292,7 +306,7 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
                 f.actual(), f.limit(), f.limitMetric(), f.comparison(), f.verdict(),
                 f.missing().isEmpty() ? null : f.missing(),
                 f.missingInputs().isEmpty() ? null : f.missingInputs(),
-                f.reason(),
+                Mirrors.withInches(f.reason()),
                 f.settings().isEmpty() ? null : f.settings().stream().map(name -> pointer(name, q)).distinct()
                         .toList());
     }

@@ -86,7 +86,8 @@ record TechniqueSheetValidationResponse(
                     + "does as well; for a wrap-around limit a max_round_trip_us does instead of max_sound_path_mm, "
                     + "for a gate a gate_length_mm instead of gate_length_us)")
             List<String> missingInputs,
-            @Schema(description = "Why a feasibility check failed, quoting the settings") String reason,
+            @Schema(description = "Why a feasibility check failed, quoting the settings (lengths in mm, each "
+                    + "followed by its inch value)") String reason,
             @Schema(description = "JSON Pointers of the sheet settings a failed feasibility check found impossible "
                     + "together") List<String> settings) {}
 }

@@ -1,9 +1,12 @@
 package utdigit.web.thickness;
 
+import java.math.MathContext;
 import java.util.List;
 import java.util.Locale;
 import org.springframework.stereotype.Component;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.MessageNumbers;
+import utdigit.core.common.Units;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.thickness.ThicknessCalculator;
 import utdigit.core.thickness.ThicknessInput;
@@ -28,6 +31,8 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
 
     /** Largest velocity uncertainty accepted, percent of the velocity (the contract's ranges, README and OpenAPI). */
     static final double MAX_VELOCITY_UNCERTAINTY_PERCENT = 20.0;
+    /** The m/s form's upper bound of the velocity uncertainty (its Bean Validation range). */
+    private static final double MAX_VELOCITY_UNCERTAINTY_M_PER_S = 4000.0;
 
     @Override
     public String name() {
@@ -46,10 +51,14 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
                 q.nominalThicknessIn(), true);
         Double requiredResolutionMm = Mirrors.lengthMm(errors, "required_resolution", q.requiredResolutionMm(),
                 q.requiredResolutionIn(), false);
-        if (q.velocityUncertaintyMPerS() != null && q.velocityUncertaintyPercent() != null) {
-            String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s or "
+        Double givenUncertaintyMPerS = Mirrors.speedMPerS(errors, "velocity_uncertainty",
+                q.velocityUncertaintyMPerS(), q.velocityUncertaintyInPerUs(), 0.0, MAX_VELOCITY_UNCERTAINTY_M_PER_S);
+        String uncertaintyName = q.velocityUncertaintyInPerUs() != null
+                ? "velocity_uncertainty_in_per_us" : "velocity_uncertainty_m_per_s";
+        if (givenUncertaintyMPerS != null && q.velocityUncertaintyPercent() != null) {
+            String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s (or _in_per_us) or "
                     + "velocity_uncertainty_percent, not both";
-            errors.add("velocity_uncertainty_m_per_s", detail).add("velocity_uncertainty_percent", detail);
+            errors.add(uncertaintyName, detail).add("velocity_uncertainty_percent", detail);
         }
         VelocitySource velocity = null;
         CalculationException velocityImpossible = null;
@@ -58,11 +67,14 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         } catch (CalculationException e) {
             velocityImpossible = e; // a 422 (water with SHEAR) waits for the 400s of the other fields
         }
-        if (velocity != null && q.velocityUncertaintyMPerS() != null
-                && q.velocityUncertaintyMPerS() > MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS()) {
-            errors.add("velocity_uncertainty_m_per_s", String.format(Locale.ROOT,
-                    "must be at most 20 %% of the velocity (%s m/s here)",
-                    number(MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS())));
+        if (velocity != null && givenUncertaintyMPerS != null
+                && givenUncertaintyMPerS > MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS()) {
+            double limitMPerS = MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS();
+            errors.add(uncertaintyName, q.velocityUncertaintyInPerUs() != null
+                    ? String.format(Locale.ROOT, "must be at most 20 %% of the velocity (%s in/us here)",
+                            MessageNumbers.plain(Units.mPerSToInPerUs(limitMPerS), new MathContext(4)))
+                    : String.format(Locale.ROOT, "must be at most 20 %% of the velocity (%s m/s here)",
+                            number(limitMPerS)));
         }
         errors.throwIfAny();
         if (velocityImpossible != null) {
@@ -70,10 +82,10 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         }
 
         // No velocity uncertainty given and a material that states one: its standard uncertainty is used.
-        boolean materialUncertainty = q.velocityUncertaintyMPerS() == null && q.velocityUncertaintyPercent() == null
+        boolean materialUncertainty = givenUncertaintyMPerS == null && q.velocityUncertaintyPercent() == null
                 && velocity.standardUncertaintyMPerS() != null;
         Double velocityUncertaintyMPerS = materialUncertainty
-                ? velocity.standardUncertaintyMPerS() : q.velocityUncertaintyMPerS();
+                ? velocity.standardUncertaintyMPerS() : givenUncertaintyMPerS;
         ThicknessResult r = ThicknessCalculator.compute(
                 ThicknessInput.builder(q.samplingFrequencyMhz(), velocity.velocityMPerS(), thicknessMm)
                         .decimationFactor(q.decimationFactor())
@@ -92,7 +104,7 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         ThicknessResolutionRequest inputs = new ThicknessResolutionRequest(q.samplingFrequencyMhz(),
                 r.decimationFactor(), velocity.velocityMPerS(), null, null, null, null, velocityUncertaintyMPerS,
                 q.velocityUncertaintyPercent(), thicknessMm, null, r.measurement(), r.echoSpacing(),
-                requiredResolutionMm, null, r.coverageFactor(), q.frequencyMhz(), q.bandwidthPercent());
+                requiredResolutionMm, null, r.coverageFactor(), q.frequencyMhz(), q.bandwidthPercent(), null);
         return new ThicknessResolutionResponse(r.thicknessResolutionMm(), r.thicknessResolutionIn(),
                 r.roundTripTimeUs(), r.samplesAcrossThickness(), r.relativeResolutionPercent(),
                 r.timingStandardUncertaintyNs(), r.timingWorstCaseErrorNs(), r.standardUncertaintyMm(),
@@ -101,7 +113,9 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
                         "required_resolution_mm", requiredResolutionMm).build(),
                 inputs,
                 materialUncertainty ? VelocitySourceView.usingMaterialUncertainty(velocity) : VelocitySourceView.of(velocity),
-                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()),
+                ThicknessResolutionResponse.InInches.of(Mirrors.inches(r.standardUncertaintyMm()),
+                        Mirrors.inches(r.expandedUncertaintyMm())));
     }
 
     /** The core names lengths by their base name and the velocity as "velocity": point at the form sent. */
@@ -111,6 +125,8 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
             case "nominal_thickness" -> Mirrors.lengthPointer(coreField, q.nominalThicknessIn());
             case "required_resolution" -> Mirrors.lengthPointer(coreField, q.requiredResolutionIn());
             case "velocity" -> Mirrors.velocityPointer(q);
+            case "velocity_uncertainty_m_per_s" -> JsonPointers.property(q.velocityUncertaintyInPerUs() != null
+                    ? "velocity_uncertainty_in_per_us" : "velocity_uncertainty_m_per_s");
             default -> Calculation.super.pointer(coreField, q);
         };
     }

@@ -109,5 +109,11 @@ public record ThicknessResolutionRequest(
                 + "fractional bandwidth of the probe, % (0 to 200 exclusive), used only for the wall-echo overlap warning",
                 format = "double", example = "60", exclusiveMinimumValue = 0, exclusiveMaximumValue = 200)
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
-        Double bandwidthPercent) implements VelocityFields {
+        Double bandwidthPercent,
+
+        @Schema(description = "Standard uncertainty of the velocity, in/us (equivalent of 0 to 4000 m/s, at most 20 % "
+                + "of the velocity); the inch form of velocity_uncertainty_m_per_s, not with it nor with "
+                + "velocity_uncertainty_percent", format = "double", example = "0.00059", minimum = "0")
+        @DecimalMin("0")
+        Double velocityUncertaintyInPerUs) implements VelocityFields {
 }

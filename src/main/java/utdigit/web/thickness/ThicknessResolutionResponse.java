@@ -2,6 +2,7 @@ package utdigit.web.thickness;
 
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
+import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
 import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.ResultNotes.WarningView;
@@ -51,5 +52,25 @@ record ThicknessResolutionResponse(
         ThicknessResolutionRequest inputs,
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "ThicknessResolutionInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "standard_uncertainty_mm / 25.4, in", format = "double")
+            Double standardUncertaintyIn,
+            @Schema(description = "expanded_uncertainty_mm / 25.4, in", format = "double")
+            Double expandedUncertaintyIn) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Double standardUncertaintyIn, Double expandedUncertaintyIn) {
+            return standardUncertaintyIn == null && expandedUncertaintyIn == null ? null
+                    : new InInches(standardUncertaintyIn, expandedUncertaintyIn);
+        }
+    }
 }

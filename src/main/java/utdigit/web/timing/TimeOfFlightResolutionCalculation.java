@@ -82,7 +82,13 @@ class TimeOfFlightResolutionCalculation implements Calculation<TimeOfFlightResol
                 r.surfaceDistanceResolutionMm(), r.lateralWaveTimeUs(), r.timeOfFlightUs(),
                 r.pulseLimitedDepthResolutionMm(), r.deadZoneDepthMm(), r.backwallDeadZoneMm(),
                 r.pulseDurationUsedUs(), inputs, VelocitySourceView.of(velocity),
-                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()),
+                TimeOfFlightResolutionResponse.InInches.of(Mirrors.inches(r.soundPathResolutionMm()),
+                        Mirrors.inches(r.depthResolutionMm()),
+                        Mirrors.inches(r.surfaceDistanceResolutionMm()),
+                        Mirrors.inches(r.pulseLimitedDepthResolutionMm()),
+                        Mirrors.inches(r.deadZoneDepthMm()),
+                        Mirrors.inches(r.backwallDeadZoneMm())));
     }
 
     /** The core names lengths by their base name and the velocity as "velocity": point at the form sent. */

@@ -2,6 +2,7 @@ package utdigit.web.timing;
 
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
+import java.util.Optional;
 import utdigit.web.common.ResultNotes.ReferenceView;
 import utdigit.web.common.ResultNotes.WarningView;
 import utdigit.web.common.VelocitySourceView;
@@ -56,5 +57,38 @@ record TimeOfFlightResolutionResponse(
         TimeOfFlightResolutionRequest inputs,
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "TimeOfFlightResolutionInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "sound_path_resolution_mm / 25.4, in", format = "double")
+            Double soundPathResolutionIn,
+            @Schema(description = "depth_resolution_mm / 25.4, in", format = "double")
+            Double depthResolutionIn,
+            @Schema(description = "surface_distance_resolution_mm / 25.4, in", format = "double")
+            Double surfaceDistanceResolutionIn,
+            @Schema(description = "pulse_limited_depth_resolution_mm / 25.4, in", format = "double")
+            Double pulseLimitedDepthResolutionIn,
+            @Schema(description = "dead_zone_depth_mm / 25.4, in", format = "double")
+            Double deadZoneDepthIn,
+            @Schema(description = "backwall_dead_zone_mm / 25.4, in", format = "double")
+            Double backwallDeadZoneIn) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Double soundPathResolutionIn, Double depthResolutionIn,
+                    Double surfaceDistanceResolutionIn, Double pulseLimitedDepthResolutionIn, Double deadZoneDepthIn,
+                    Double backwallDeadZoneIn) {
+            return soundPathResolutionIn == null && depthResolutionIn == null &&
+                    surfaceDistanceResolutionIn == null && pulseLimitedDepthResolutionIn == null &&
+                    deadZoneDepthIn == null && backwallDeadZoneIn == null ? null
+                    : new InInches(soundPathResolutionIn, depthResolutionIn, surfaceDistanceResolutionIn,
+                    pulseLimitedDepthResolutionIn, deadZoneDepthIn, backwallDeadZoneIn);
+        }
+    }
 }

@@ -64,7 +64,12 @@ class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
                 r.gateSpansWall(), r.depthFromTimeMm(), r.timeOfFlightUs(), r.timingStandardUncertaintyNs(),
                 r.timingDepthUncertaintyMm(), r.separationDepthUncertaintyMm(), r.combinedDepthUncertaintyMm(),
                 r.expandedDepthUncertaintyMm(), inputs, VelocitySourceView.of(velocity),
-                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()));
+                ResultNotes.warnings(r.warnings()), ResultNotes.references(r.references()),
+                TofdSetupResponse.InInches.of(Mirrors.inches(r.depthFromTimeMm()),
+                        Mirrors.inches(r.timingDepthUncertaintyMm()),
+                        Mirrors.inches(r.separationDepthUncertaintyMm()),
+                        Mirrors.inches(r.combinedDepthUncertaintyMm()),
+                        Mirrors.inches(r.expandedDepthUncertaintyMm())));
     }
 
     /** The separation's uncertainty in mm from its _mm or _in form (0 is allowed, unlike other lengths). */

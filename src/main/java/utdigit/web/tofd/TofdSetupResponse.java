@@ -63,5 +63,40 @@ record TofdSetupResponse(
         TofdSetupRequest inputs,
         VelocitySourceView velocitySource,
         List<WarningView> warnings,
-        List<ReferenceView> references) {
+        List<ReferenceView> references,
+        @Schema(description = "Inch mirrors of the length results: each x_mm result as x_in = x_mm / 25.4 (the "
+                + "inch is 25.4 mm exactly), a speed x_mm_per_s as x_in_per_s; each present when its mm field is, "
+                + "null when it is null; omitted when the answer has no length result")
+        InInches inInches) {
+
+    /** Inch mirrors of the length results, each the mm result / 25.4. */
+    @Schema(name = "TofdSetupInInches", description = "Inch mirrors of the length "
+            + "results (the inch is 25.4 mm exactly)")
+    record InInches(
+            @Schema(description = "depth_from_time_mm / 25.4, in", format = "double")
+            Double depthFromTimeIn,
+            @Schema(description = "timing_depth_uncertainty_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> timingDepthUncertaintyIn,
+            @Schema(description = "separation_depth_uncertainty_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> separationDepthUncertaintyIn,
+            @Schema(description = "combined_depth_uncertainty_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> combinedDepthUncertaintyIn,
+            @Schema(description = "expanded_depth_uncertainty_mm / 25.4, in; null when it is null", format = "double",
+                    types = {"number", "null"})
+            Optional<Double> expandedDepthUncertaintyIn) {
+
+        /** The mirrors, or null (omitted) when the answer has no length result. */
+        static InInches of(Double depthFromTimeIn, Optional<Double> timingDepthUncertaintyIn,
+                    Optional<Double> separationDepthUncertaintyIn, Optional<Double> combinedDepthUncertaintyIn,
+                    Optional<Double> expandedDepthUncertaintyIn) {
+            return depthFromTimeIn == null && timingDepthUncertaintyIn == null &&
+                    separationDepthUncertaintyIn == null && combinedDepthUncertaintyIn == null &&
+                    expandedDepthUncertaintyIn == null ? null
+                    : new InInches(depthFromTimeIn, timingDepthUncertaintyIn, separationDepthUncertaintyIn,
+                    combinedDepthUncertaintyIn, expandedDepthUncertaintyIn);
+        }
+    }
 }

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.List;
 import java.util.Set;
+import org.apache.commons.math3.special.BesselJ;
 import org.junit.jupiter.api.Test;
 import utdigit.core.arrays.ArrayApertureCalculator;
 import utdigit.core.arrays.ArrayApertureInput;
@@ -12,6 +13,9 @@ import utdigit.core.coverage.ScanCoverageCalculator;
 import utdigit.core.dac.DacQuantizationCalculator;
 import utdigit.core.dac.DacQuantizationInput;
 import utdigit.core.dac.TcgMode;
+import utdigit.core.pulse.PulseCalculator;
+import utdigit.core.pulse.PulseInput;
+import utdigit.core.pulse.PulseResult;
 import utdigit.core.rules.Comparison;
 import utdigit.core.rules.Limit;
 import utdigit.core.rules.RequirementProfile;
@@ -72,5 +76,94 @@ class SheetSetupMetricsTest {
         assertThat(r.values().get("gate_start_margin_us")).isCloseTo(1.0, within(1e-12));
         assertThat(r.values().get("gate_end_margin_us")).isCloseTo(17.0 - 100.0 / 6, within(1e-12));
         assertThat(r.values()).containsKey("tofd_timing_depth_uncertainty_mm");
+    }
+    /** A 45 deg shear angle beam: 5 MHz, 10 mm element on a 2730 m/s wedge, into steel at 3255 m/s. */
+    private static final double STEEL_SHEAR_M_PER_S = 3255.0;
+    private static final double WEDGE_M_PER_S = 2730.0;
+    private static final double INCIDENT_FOR_45_DEG =
+            Math.toDegrees(Math.asin(Math.sin(Math.toRadians(45.0)) * WEDGE_M_PER_S / STEEL_SHEAR_M_PER_S));
+
+    private static final RequirementProfile NEAR_FIELD = new RequirementProfile("t", "T", "1", List.of(),
+            VerificationStatus.UNVERIFIED, List.of(),
+            List.of(new Rule("nf", "reflector beyond the incidence-plane near field", "sound_path_mm",
+                    Comparison.AT_LEAST, Limit.ofMetric("incidence_plane_near_field_length_mm"), Set.of(), List.of(),
+                    "test rule")),
+            "0".repeat(64));
+
+    private static SheetInput angleBeam(Double elementDiameterMm, Double incidentDeg, Double wedgeMPerS) {
+        return new SheetInput("A-1", "A", SheetTechnique.PULSE_ECHO,
+                new SheetInput.Probe(5.0, null, elementDiameterMm, null),
+                new SheetInput.Part(STEEL_SHEAR_M_PER_S, null, null, 25.0, null), null, null, null, null, null,
+                new SheetSetup(null, 60.0, null, null, null, null, null, null, null, null, null, null,
+                        incidentDeg, wedgeMPerS));
+    }
+
+    /**
+     * The projected aperture by ray geometry, written out here: the element's two edge rays (face
+     * normal to the incident direction) meet the interface, refract by Snell's law, and the refracted
+     * beam's width is their separation measured across them.
+     */
+    private static double apertureByRays(double diameterMm, double incidentDeg) {
+        double alpha = Math.toRadians(incidentDeg);
+        double[] edgeA = {0.0, 20.0};
+        double[] edgeB = {diameterMm * Math.cos(alpha), 20.0 + diameterMm * Math.sin(alpha)};
+        double hitA = edgeA[0] + edgeA[1] * Math.tan(alpha);
+        double hitB = edgeB[0] + edgeB[1] * Math.tan(alpha);
+        double beta = Math.asin(Math.sin(alpha) * STEEL_SHEAR_M_PER_S / WEDGE_M_PER_S);
+        return Math.abs(hitB - hitA) * Math.cos(beta);
+    }
+
+    @Test
+    void anAngleBeamSheetGetsTheIncidencePlaneFiguresOfThePulseCalculator() {
+        SheetResult r = SheetEvaluator.evaluate(angleBeam(10.0, INCIDENT_FOR_45_DEG, WEDGE_M_PER_S), NEAR_FIELD);
+        double lambdaMm = STEEL_SHEAR_M_PER_S / 5.0 / 1000.0;
+        // Ray geometry (above) for the aperture; D_eff^2 / (4 lambda) for its near field (the piston's N).
+        double apertureMm = apertureByRays(10.0, INCIDENT_FOR_45_DEG);
+        assertThat(r.values().get("incidence_plane_aperture_mm")).isCloseTo(apertureMm, within(1e-9));
+        assertThat(r.values().get("incidence_plane_near_field_length_mm"))
+                .isCloseTo(apertureMm * apertureMm / (4 * lambdaMm), within(1e-9));
+        // The -6 dB half-angle of the projected aperture: the two-way piston directivity (2 J1(x)/x)^2 there is
+        // 10^(-6/20) (Commons Math BesselJ).
+        double x = Math.PI * apertureMm * Math.sin(Math.toRadians(r.values().get("incidence_plane_beam_spread_6db_deg")))
+                / lambdaMm;
+        double oneWay = 2 * BesselJ.value(1, x) / x;
+        assertThat(oneWay * oneWay).isCloseTo(Math.pow(10, -6.0 / 20), within(1e-12));
+        // The probe's own figures keep D: the plane perpendicular to incidence.
+        assertThat(r.values().get("near_field_length_mm")).isCloseTo(100.0 / (4 * lambdaMm), within(1e-9));
+        // The same calculator as POST /api/pulse-parameters, bit for bit.
+        PulseResult.IncidencePlane plane = PulseCalculator.compute(PulseInput.of(5.0, STEEL_SHEAR_M_PER_S)
+                .withElementDiameterMm(10.0).withWedgeVelocityMPerS(WEDGE_M_PER_S)
+                .withIncidentAngleDeg(INCIDENT_FOR_45_DEG)).incidencePlane();
+        assertThat(r.values().get("incidence_plane_near_field_length_mm"))
+                .isEqualTo(plane.nearFieldLengthMm().orElseThrow());
+        assertThat(r.values().get("incidence_plane_beam_spread_6db_deg")).isEqualTo(plane.beamSpread6dbDeg().orElseThrow());
+        // 60 mm sound path against a near field of about 13.3 mm: the rule can rule on the figure.
+        assertThat(r.findings().get(0).verdict()).isEqualTo(Verdict.PASS);
+        assertThat(r.values()).containsEntry("incident_angle_deg", INCIDENT_FOR_45_DEG)
+                .containsEntry("wedge_velocity_m_per_s", WEDGE_M_PER_S);
+    }
+
+    @Test
+    void withoutTheWedgeVelocityTheRuleNamesTheInputToAdd() {
+        SheetResult r = SheetEvaluator.evaluate(angleBeam(10.0, INCIDENT_FOR_45_DEG, null), NEAR_FIELD);
+        assertThat(r.values()).doesNotContainKey("incidence_plane_near_field_length_mm");
+        assertThat(r.findings().get(0).verdict()).isEqualTo(Verdict.NOT_EVALUATED);
+        assertThat(r.findings().get(0).missingInputs()).containsExactly("/setup/wedge_velocity_m_per_s");
+        SheetResult noElement = SheetEvaluator.evaluate(angleBeam(null, null, WEDGE_M_PER_S), NEAR_FIELD);
+        assertThat(noElement.findings().get(0).missingInputs())
+                .containsExactly("/probe/element_diameter_mm", "/setup/incident_angle_deg");
+    }
+
+    @Test
+    void pastTheCriticalAngleThereAreNoIncidencePlaneFiguresAndAWarningSaysWhy() {
+        // Snell: the shear critical angle from a 2730 m/s wedge into 3255 m/s is asin(2730/3255) = 57.0 deg < 60 deg.
+        assertThat(Math.toDegrees(Math.asin(WEDGE_M_PER_S / STEEL_SHEAR_M_PER_S))).isLessThan(60.0);
+        SheetResult r = SheetEvaluator.evaluate(angleBeam(10.0, 60.0, WEDGE_M_PER_S), NEAR_FIELD);
+        assertThat(r.values()).doesNotContainKeys("incidence_plane_aperture_mm", "incidence_plane_near_field_length_mm",
+                "incidence_plane_beam_spread_6db_deg");
+        assertThat(r.warnings()).anySatisfy(w -> {
+            assertThat(w.code()).isEqualTo("PAST_CRITICAL_ANGLE");
+            assertThat(w.message()).startsWith("pulse: ");
+        });
     }
 }

@@ -87,4 +87,25 @@ class BatchSheetsApiTest extends BatchApiTest {
                 "probe.element_cuont") + csvRow("NWF-PA-001", "5")), 400, "/problems/invalid-input");
         assertThat(problem.path("detail").asString()).contains("probe.element_cuont");
     }
+    @Test
+    void anAngleBeamSheetInCsvGetsTheIncidencePlaneFiguresOfTheSingleAnswer() {
+        String header = "sheet_id,technique,probe.frequency_mhz,probe.element_diameter_mm,material.material,"
+                + "material.wave_mode,setup.incident_angle_deg,setup.wedge_velocity_in_per_us\n";
+        // 2730 m/s as in/us: 2730 / 25400 (25.4 mm per inch exactly, NIST SP 811)
+        String row = "AB-1,PULSE_ECHO,5,10,carbon-steel,SHEAR,36," + (2730.0 / 25400.0) + "\n";
+        List<JsonNode> rows = ndjsonRows(SHEETS, CSV, header + row);
+        assertThat(statuses(rows)).containsExactly("OK");
+        Single single = single(SHEETS, """
+                {"sheet_id": "AB-1", "technique": "PULSE_ECHO", "probe": {"frequency_mhz": 5, "element_diameter_mm": 10},
+                 "material": {"material": "carbon-steel", "wave_mode": "SHEAR"},
+                 "setup": {"incident_angle_deg": 36, "wedge_velocity_in_per_us": %s}}""".formatted(2730.0 / 25400.0));
+        assertThat(single.status()).isEqualTo(200);
+        assertThat(rows.get(0).get("result")).isEqualTo(single.body());
+        assertThat(rows.get(0).at("/result/values/incidence_plane_near_field_length_mm").isNumber()).isTrue();
+        List<String[]> records = csvRecords(batch(SHEETS, CSV, CSV, header + row).body());
+        List<String> columns = List.of(records.get(0));
+        assertThat(columns).contains("values.incidence_plane_aperture_mm", "values.incidence_plane_near_field_length_mm",
+                "values.incidence_plane_beam_spread_6db_deg");
+        assertThat(records.get(1)[columns.indexOf("values.incidence_plane_near_field_length_mm")]).isNotEmpty();
+    }
 }

@@ -53,4 +53,30 @@ class SheetSetupApiTest extends ApiTest {
                 {"technique": "PHASED_ARRAY", "setup": {"dac_span_db": 70}}""").statusCode(400)
                 .body("errors.pointer", hasItem("/setup/dac_span_db"));
     }
+    @Test
+    void anAngleBeamSheetGetsItsIncidencePlaneFigures() {
+        // 45 deg shear in steel (3255 m/s) from a 2730 m/s wedge: alpha = asin(sin 45 x 2730/3255) by Snell;
+        // the part sees D cos(beta)/cos(alpha) in the incidence plane (the element's edge rays refracted, see
+        // AngleBeamTest), and its near field is D_eff^2 / (4 lambda), lambda = 3.255/5 mm.
+        double alpha = Math.toDegrees(Math.asin(Math.sin(Math.toRadians(45.0)) * 2730.0 / 3255.0));
+        double aperture = 10.0 * Math.cos(Math.toRadians(45.0)) / Math.cos(Math.toRadians(alpha));
+        double lambda = 3.255 / 5.0;
+        post(PATH, String.format(java.util.Locale.ROOT, """
+                {"sheet_id": "AB-45", "technique": "PULSE_ECHO",
+                 "probe": {"frequency_mhz": 5, "element_diameter_in": %s},
+                 "material": {"velocity_m_per_s": 3255, "thickness_mm": 25},
+                 "setup": {"incident_angle_deg": %s, "wedge_velocity_m_per_s": 2730}}""",
+                10.0 / 25.4, alpha))
+                .statusCode(200)
+                .body("values.incidence_plane_aperture_mm", closeTo(aperture, 1e-9))
+                .body("values.incidence_plane_near_field_length_mm", closeTo(aperture * aperture / (4 * lambda), 1e-9))
+                .body("values.near_field_length_mm", closeTo(100.0 / (4 * lambda), 1e-9))
+                .body("values.incident_angle_deg", closeTo(alpha, 1e-12))
+                .body("inputs.setup.wedge_velocity_m_per_s", closeTo(2730.0, 0.0))
+                .body("references.topic", hasItem("incidence plane of an angle beam"));
+        assertInvalid(PATH, """
+                {"technique": "PULSE_ECHO", "setup": {"incident_angle_deg": 90}}""", "/setup/incident_angle_deg");
+        assertInvalid(PATH, """
+                {"technique": "PULSE_ECHO", "setup": {"wedge_velocity_m_per_s": 50}}""", "/setup/wedge_velocity_m_per_s");
+    }
 }

@@ -11,7 +11,7 @@ class ThicknessResolutionPointerTest {
     private static ThicknessResolutionRequest request(Double velocityMPerS, Double velocityInPerUs, String material,
             Double thicknessMm, Double thicknessIn, Double requiredMm, Double requiredIn) {
         return new ThicknessResolutionRequest(100.0, null, velocityMPerS, velocityInPerUs, material, null, null, null,
-                null, thicknessMm, thicknessIn, null, null, requiredMm, requiredIn, null, null, null);
+                null, thicknessMm, thicknessIn, null, null, requiredMm, requiredIn, null, null, null, null);
     }
 
     @Test
