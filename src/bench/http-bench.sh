@@ -7,6 +7,8 @@
 #   - the baseline's POST /baseline (src/bench/baseline/request.json);
 #   - every POST /api/<name> of the service that has a committed example request
 #     api-examples/<name>.json (every calculation, the technique sheet, the stamp verification);
+#     the examples ask for every optional result, the most work one request of each kind asks for;
+#   - POST /api/sampling-assessments with three inputs (the lightest calculation request);
 #   - GET /api/materials/water.
 # Each is warmed up once, then measured in ROUNDS rounds. The baseline is measured before the first
 # round and after every round, and each round's endpoints are compared to the mean of the two
@@ -21,7 +23,7 @@
 #   CONNECTIONS=32 THREADS=2 JAVA_OPTS='-Xmx512m' src/bench/http-bench.sh
 #
 # Run time: start-up (about 20 s) + (endpoints + 1) x WARMUP + (ROUNDS x endpoints + ROUNDS + 1) x DURATION,
-# 15 endpoints with the baseline; the script prints its estimate first.
+# 16 endpoints with the baseline; the script prints its estimate first.
 # Needs wrk (Debian: apt-get install wrk), curl, python3, Java 17, Maven (offline is enough).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
@@ -88,6 +90,9 @@ for example in api-examples/*.json; do
   grep -q "/api/$name\"" "api-examples/$name.sh" 2>/dev/null || continue   # a POST example of its own path
   ENDPOINTS+=("POST /api/$name|$SERVICE|POST|$BASE/api/$name|$example")
 done
+# The examples ask for every optional result; this is the lightest calculation request (three inputs).
+printf '{"sampling_frequency_mhz": 100, "frequency_mhz": 5, "bandwidth_percent": 60}\n' >"$WORK/sampling-light.json"
+ENDPOINTS+=("POST /api/sampling-assessments, 3 inputs|$SERVICE|POST|$BASE/api/sampling-assessments|$WORK/sampling-light.json")
 ENDPOINTS+=("GET /api/materials/water|$SERVICE|GET|$BASE/api/materials/water|")
 selected=("${ENDPOINTS[0]}")
 for e in "${ENDPOINTS[@]:1}"; do
