@@ -10,19 +10,19 @@
 #     the examples ask for every optional result, the most work one request of each kind asks for;
 #   - POST /api/sampling-assessments with three inputs (the lightest calculation request);
 #   - GET /api/materials/water.
-# Each is warmed up once, then measured in ROUNDS rounds. The baseline is measured before the first
-# round and after every round, and each round's endpoints are compared to the mean of the two
-# baseline measurements around it (a drift of the machine's load hits both); the endpoints run in
-# forward order in odd rounds and backward in even ones.
+# Each is warmed up once, then measured in ROUNDS rounds. In a round every endpoint is measured
+# back to back with the baseline (baseline first in odd rounds, second in even ones; endpoints in
+# forward order in odd rounds, backward in even ones), and its ratio is its throughput over the
+# baseline's of that pair: a drift of the machine's load hits both.
 # Targets (src/docs/performance.md): a calculation endpoint at >= 0.8x the bare stack's throughput
 # in the same run, p99 < 50 ms at 32 connections.
 #
-#   src/bench/http-bench.sh        # builds both jars if missing; about 9 minutes with the defaults
+#   src/bench/http-bench.sh        # builds both jars if missing; about 13 minutes with the defaults
 #   DURATION=10s WARMUP=5s ROUNDS=2 src/bench/http-bench.sh
 #   ONLY='sampling|technique' src/bench/http-bench.sh      # a subset (an extended regex on the path)
 #   CONNECTIONS=32 THREADS=2 JAVA_OPTS='-Xmx512m' src/bench/http-bench.sh
 #
-# Run time: start-up (about 20 s) + (endpoints + 1) x WARMUP + (ROUNDS x endpoints + ROUNDS + 1) x DURATION,
+# Run time: start-up (about 20 s) + (endpoints + 1) x WARMUP + 2 x ROUNDS x endpoints x DURATION,
 # 16 endpoints with the baseline; the script prints its estimate first.
 # Needs wrk (Debian: apt-get install wrk), curl, python3, Java 17, Maven (offline is enough).
 set -euo pipefail
@@ -105,36 +105,37 @@ done
 ENDPOINTS=("${selected[@]}")
 n=$((${#ENDPOINTS[@]} - 1))
 seconds() { python3 -c "import re,sys; v,u=re.fullmatch(r'([\d.]+)([smh]?)', sys.argv[1]).groups(); print(float(v)*{'':1,'s':1,'m':60,'h':3600}[u])" "$1"; }
-estimate=$(python3 -c "print(round(($n + 1) * $(seconds "$WARMUP") + ($ROUNDS * $n + $ROUNDS + 1) * $(seconds "$DURATION")))")
+estimate=$(python3 -c "print(round(($n + 1) * $(seconds "$WARMUP") + 2 * $ROUNDS * $n * $(seconds "$DURATION")))")
 
 run() { # method url body duration -> RESULT <req/s> <p50 ms> <p99 ms> <requests> <socket errors> <non-2xx/3xx>
   BENCH_METHOD="$1" BENCH_BODY_FILE="$3" \
     wrk -t"$THREADS" -c"$CONNECTIONS" -d"$4" --timeout 5s -s "$BENCH/wrk-report.lua" "$2" | grep '^RESULT'
 }
 cpu_ticks() { awk '{print $14 + $15}' "/proc/$1/stat"; }  # user + system of a JVM, 1/100 s
-measure() { # round index-in-ENDPOINTS -> one line of $WORK/results
+measure() { # round index-in-ENDPOINTS pair-index -> one line of $WORK/results
   IFS='|' read -r label pid method url body <<<"${ENDPOINTS[$2]}"
   local before after
   before=$(cpu_ticks "$pid")
   read -r _ rps p50 p99 requests sock status <<<"$(run "$method" "$url" "$body" "$DURATION")"
   after=$(cpu_ticks "$pid")
-  printf '%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n' "$1" "$label" "$rps" "$p50" "$p99" "$requests" \
+  printf '%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\t%s\n' "$1" "$3" "$label" "$rps" "$p50" "$p99" "$requests" \
     "$((sock + status))" "$((after - before))" >>"$WORK/results"
   printf '  round %s  %-42s %8.0f req/s  p50 %6.2f ms  p99 %6.2f ms\n' "$1" "$label" "$rps" "$p50" "$p99"
 }
 
 echo "$n endpoints of the service and the baseline; wrk -t$THREADS -c$CONNECTIONS; warm-up $WARMUP each," \
-  "then $ROUNDS rounds of $DURATION each: about $estimate s"
+  "then $ROUNDS rounds of $DURATION per endpoint and $DURATION of the baseline beside each: about $estimate s"
 echo "JVM options: '${JAVA_OPTS:-}' (both); $(nproc) cores; load before: $(cut -d' ' -f1-3 /proc/loadavg)"
 for i in "${!ENDPOINTS[@]}"; do
   IFS='|' read -r _ _ method url body <<<"${ENDPOINTS[$i]}"
   run "$method" "$url" "$body" "$WARMUP" >/dev/null
 done
-measure 0 0
 for r in $(seq 1 "$ROUNDS"); do
-  if ((r % 2)); then order=$(seq 1 "$n"); else order=$(seq "$n" -1 1); fi
-  for i in $order; do measure "$r" "$i"; done
-  measure "$r" 0
+  if ((r % 2)); then
+    for i in $(seq 1 "$n"); do measure "$r" 0 "$i"; measure "$r" "$i" "$i"; done
+  else
+    for i in $(seq "$n" -1 1); do measure "$r" "$i" "$i"; measure "$r" 0 "$i"; done
+  fi
 done
 echo "load after: $(cut -d' ' -f1-3 /proc/loadavg)"
 
@@ -143,15 +144,14 @@ import sys
 from statistics import mean
 path, rounds, start_b, start_s = sys.argv[1], int(sys.argv[2]), int(sys.argv[3]), int(sys.argv[4])
 rows = [l.rstrip("\n").split("\t") for l in open(path)]
-BASE = rows[0][1]
-baseline = {}   # measurement after round r (0: before round 1)
-data = {}       # label -> list of (round, rps, p50, p99, requests, errors, ticks)
-for r, label, rps, p50, p99, req, err, ticks in rows:
-    m = (int(r), float(rps), float(p50), float(p99), int(req), int(err), int(ticks))
+BASE = rows[0][2]
+baseline = {}   # (round, pair) -> the baseline's req/s measured beside that endpoint
+data = {}       # label -> list of (round, rps, p50, p99, requests, errors, ticks, pair)
+for r, pair, label, rps, p50, p99, req, err, ticks in rows:
+    m = (int(r), float(rps), float(p50), float(p99), int(req), int(err), int(ticks), int(pair))
     if label == BASE:
-        baseline[int(r)] = m
+        baseline[m[0], m[7]] = m[1]
     data.setdefault(label, []).append(m)
-ref = {r: (baseline[r - 1][1] + baseline[r][1]) / 2 for r in range(1, rounds + 1)}
 cpu = lambda ms: sum(m[6] for m in ms) * 1e4 / max(1, sum(m[4] for m in ms))  # us per request
 base_cpu = cpu(data[BASE])
 print()
@@ -161,16 +161,16 @@ for label, ms in data.items():
     if label == BASE:
         ratio, rounds_text = 1.0, ""
     else:
-        per = [m[1] / ref[m[0]] for m in ms]
+        per = [m[1] / baseline[m[0], m[7]] for m in ms]
         ratio, rounds_text = mean(per), " ".join(f"{p:.2f}" for p in per)
     print(f"{label:<42} {mean(m[1] for m in ms):7.0f} {ratio:5.2f}x  {rounds_text:<17} "
           f"{mean(m[2] for m in ms):7.2f} {max(m[3] for m in ms):7.2f} {cpu(ms):8.0f} "
           f"{base_cpu / cpu(ms):8.2f}x {sum(m[5] for m in ms):6d}")
 print(f"""
-req/s, p50: means over the rounds; p99: the worst round. ratio: throughput over the baseline's in the
-same round (the mean of the baseline measured before and after that round), mean of the rounds, then
-each round. CPU us/r: CPU (user + system, every thread) of the answering JVM per request; CPU ratio:
-the baseline's CPU per request over the endpoint's (not inflated by a loaded machine as req/s is).
+req/s, p50: means over the rounds; p99: the worst round. ratio: throughput over the baseline's
+measured back to back with it, mean of the rounds, then each round. CPU us/r: CPU (user + system,
+every thread) of the answering JVM per request; CPU ratio: the baseline's CPU per request (all its
+measurements) over the endpoint's, less inflated by a loaded machine than req/s.
 start-up to the first 200 (one sample each, started one after the other): baseline {start_b} ms,
 service {start_s} ms (readiness), {start_s / start_b:.2f}x; src/bench/startup-bench.sh gives medians.
 targets: a calculation endpoint at >= 0.8x the bare stack in the same run; p99 < 50 ms at 32 connections""")
