@@ -17,19 +17,21 @@
 # Targets (src/docs/performance.md): a calculation endpoint at >= 0.8x the bare stack's throughput
 # in the same run, p99 < 50 ms at 32 connections.
 #
-#   src/bench/http-bench.sh        # builds both jars if missing; about 13 minutes with the defaults
+#   src/bench/http-bench.sh        # builds both jars if missing; about 17 minutes with the defaults
 #   DURATION=10s WARMUP=5s ROUNDS=2 src/bench/http-bench.sh
 #   ONLY='sampling|technique' src/bench/http-bench.sh      # a subset (an extended regex on the path)
 #   CONNECTIONS=32 THREADS=2 JAVA_OPTS='-Xmx512m' src/bench/http-bench.sh
 #
 # Run time: start-up (about 20 s) + (endpoints + 1) x WARMUP + 2 x ROUNDS x endpoints x DURATION,
-# 16 endpoints with the baseline; the script prints its estimate first.
+# 16 endpoints with the baseline; the script prints its estimate first. The warm-up is long because on a
+# loaded machine the JIT compiler needs it: with WARMUP=5s the baseline was still getting faster
+# (1,200 to 21,000 requests/s) over the first five pairs of round 1.
 # Needs wrk (Debian: apt-get install wrk), curl, python3, Java 17, Maven (offline is enough).
 set -euo pipefail
 cd "$(dirname "$0")/../.."
 BENCH=src/bench
 DURATION="${DURATION:-10s}"
-WARMUP="${WARMUP:-10s}"
+WARMUP="${WARMUP:-20s}"
 ROUNDS="${ROUNDS:-2}"
 CONNECTIONS="${CONNECTIONS:-32}"
 THREADS="${THREADS:-2}"
