@@ -19,7 +19,7 @@
 #
 #   src/bench/http-bench.sh        # builds both jars if missing; about 17 minutes with the defaults
 #   DURATION=10s WARMUP=5s ROUNDS=2 src/bench/http-bench.sh
-#   ONLY='sampling|technique' src/bench/http-bench.sh      # a subset (an extended regex on the path)
+#   ONLY='sampling|technique' src/bench/http-bench.sh      # a subset (an extended regex on the labels)
 #   CONNECTIONS=32 THREADS=2 JAVA_OPTS='-Xmx512m' src/bench/http-bench.sh
 #
 # Run time: start-up (about 20 s) + (endpoints + 1) x WARMUP + 2 x ROUNDS x endpoints x DURATION,
@@ -48,7 +48,7 @@ if [[ -z "$JAR" || "${REBUILD:-0}" == 1 ]]; then
 fi
 BASELINE_JAR="$BENCH/baseline/target/bench-baseline.jar"
 if [[ ! -f "$BASELINE_JAR" || "${REBUILD:-0}" == 1 ]]; then
-  mvn -B -q -o -f "$BENCH/baseline/pom.xml" package
+  mvn -B -q -f "$BENCH/baseline/pom.xml" package
 fi
 BASE="http://127.0.0.1:$PORT"
 BASELINE_URL="http://127.0.0.1:$BASELINE_PORT"
