@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Batch benchmark: rows per second of a CSV batch through POST /api/{calculation}/batch with the
 # service's heap capped at 256 MiB, rows in = rows out, and the heap seen by the GC log.
-# Targets (README "Performance"): 100,000 calculation rows/s and 20,000 sheets/s.
+# Targets: src/docs/performance.md.
 #
 #   src/bench/batch-bench.sh                                   # quantization-assessments, 1,000,000 rows
 #   src/bench/batch-bench.sh sampling-assessments 1000000
@@ -70,7 +70,8 @@ start, end, rows, out, ok, gclog, skip, pid, cpu0, cpu1 = sys.argv[1:]
 seconds = float(end) - float(start)
 rows, out, ok, skip = int(rows), int(out), int(ok), int(skip)
 cpu = (float(cpu1) - float(cpu0)) / 100.0
-print(f"rows in {rows:,}, rows out {out:,}, OK {ok:,}; {seconds:.1f} s: {rows / seconds:,.0f} rows/s")
+print(f"rows in {rows:,}, rows out {out:,}, OK {ok:,}; {seconds:.1f} s: {rows / seconds:,.0f} rows/s; "
+      f"rows in = rows out: {'yes' if rows == out else 'NO'}")
 print(f"service CPU {cpu:.1f} s (user + system, all threads): {cpu * 1e6 / rows:.1f} us per row, "
       f"{rows / cpu:,.0f} rows per CPU-second")
 before, after, total, pauses = [], [], [], []
@@ -87,4 +88,5 @@ try:
     print(f"process peak RSS {int(hwm) / 1024:.0f} MiB")
 except OSError:
     pass
+sys.exit(0 if rows == out else 1)  # a lost row fails the run
 PY
