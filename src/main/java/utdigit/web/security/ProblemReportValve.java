@@ -6,6 +6,7 @@ import java.util.List;
 import org.apache.catalina.connector.Request;
 import org.apache.catalina.connector.Response;
 import org.apache.catalina.valves.ErrorReportValve;
+import org.springframework.security.web.header.HeaderWriter;
 import tools.jackson.databind.json.JsonMapper;
 import utdigit.web.common.Problems;
 import utdigit.web.common.ProblemType;
@@ -17,9 +18,11 @@ import utdigit.web.common.ProblemType;
  */
 final class ProblemReportValve extends ErrorReportValve {
     private final JsonMapper mapper;
+    private final HeaderWriter headers;
 
-    ProblemReportValve(JsonMapper mapper) {
+    ProblemReportValve(JsonMapper mapper, HeaderWriter headers) {
         this.mapper = mapper;
+        this.headers = headers;
         setShowReport(false);
         setShowServerInfo(false);
     }
@@ -49,7 +52,7 @@ final class ProblemReportValve extends ErrorReportValve {
             byte[] bytes = mapper.writeValueAsBytes(body);
             response.setContentType("application/problem+json");
             response.setCharacterEncoding(StandardCharsets.UTF_8.name());
-            SecurityHeadersFilter.API_HEADERS.forEach(response::setHeader);
+            headers.writeHeaders(request, response);
             response.setContentLength(bytes.length);
             response.getOutputStream().write(bytes);
             response.finishResponse();
