@@ -33,17 +33,7 @@ final class ProblemReportValve extends ErrorReportValve {
         if (status < 400 || response.getContentWritten() > 0 || !response.setErrorReported()) {
             return;
         }
-        ProblemType type = switch (status) {
-            case 404 -> ProblemType.NOT_FOUND;
-            case 405 -> ProblemType.METHOD_NOT_ALLOWED;
-            case 406 -> ProblemType.NOT_ACCEPTABLE;
-            case 408 -> ProblemType.REQUEST_TIMEOUT;
-            case 413 -> ProblemType.PAYLOAD_TOO_LARGE;
-            case 415 -> ProblemType.UNSUPPORTED_MEDIA_TYPE;
-            case 401 -> ProblemType.UNAUTHORIZED;
-            case 503 -> ProblemType.SERVICE_BUSY;
-            default -> status < 500 ? ProblemType.INVALID_INPUT : ProblemType.INTERNAL_ERROR;
-        };
+        ProblemType type = ProblemType.ofStatus(status);
         String detail = status < 500 ? "the request is not well-formed HTTP (request line, URI or headers) and "
                 + "was refused before it reached the service" : "the service could not answer this request";
         try {
