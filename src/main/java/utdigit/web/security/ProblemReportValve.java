@@ -16,6 +16,8 @@ import utdigit.web.common.ProblemType;
  * URI, a malformed request line, headers too large) as problems too, with the security headers,
  * in place of the container's HTML page. Answers the application wrote itself are left alone.
  */
+// Boot's error handling lives inside the application context; a request refused before it (bad URI,
+// malformed request line) is answered by the host's error report valve, so that valve is replaced.
 final class ProblemReportValve extends ErrorReportValve {
     private final JsonMapper mapper;
     private final HeaderWriter headers;
