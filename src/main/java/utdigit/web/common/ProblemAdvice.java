@@ -48,7 +48,7 @@ class ProblemAdvice extends ResponseEntityExceptionHandler {
 
     @ExceptionHandler(CalculationException.class)
     ResponseEntity<ProblemDetail> calculation(CalculationException e, HttpServletRequest request) {
-        return problem(typeOf(e), e.getMessage(), errorsOf(e, ""), request);
+        return problem(typeOf(e), e.getMessage(), errorsOf(e), request);
     }
 
     @ExceptionHandler(NotFoundProblem.class)
@@ -190,10 +190,10 @@ class ProblemAdvice extends ResponseEntityExceptionHandler {
     }
 
     /** One field error per input the core names, all with the core's message. */
-    static List<FieldError> errorsOf(CalculationException e, String pointerPrefix) {
+    private static List<FieldError> errorsOf(CalculationException e) {
         List<FieldError> errors = new ArrayList<>();
         for (String field : e.fields()) {
-            errors.add(new FieldError(pointerPrefix + JsonPointers.property(field), e.getMessage()));
+            errors.add(new FieldError(JsonPointers.property(field), e.getMessage()));
         }
         return errors;
     }
