@@ -14,8 +14,8 @@ import org.springframework.util.StringUtils;
  * Spring Security only where it has a job: with a JWT issuer, JWK set or public key configured
  * (utdigit.security.jwt.* or spring.security.oauth2.resourceserver.jwt.*). Without one, its
  * auto-configuration is left out and no security filter chain is installed: an open service then
- * needs only the security headers ({@link SecurityHeaders}), and the chain would cost more CPU per
- * request than most calculations (measured with src/bench/http-bench.sh). Registered in
+ * needs only the security headers ({@link SecurityHeaders}), and the chain is a measurable share
+ * of each request's CPU (src/docs/performance.md, "What the profiles showed"). Registered in
  * META-INF/spring.factories; as a condition it switches {@link SecurityConfiguration} the same way.
  */
 public final class SecurityOnlyWithJwt implements AutoConfigurationImportFilter, EnvironmentAware, Condition {
