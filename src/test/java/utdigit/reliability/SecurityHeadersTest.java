@@ -13,6 +13,9 @@ import org.junit.jupiter.api.Nested;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.context.ApplicationContext;
+import org.springframework.security.web.SecurityFilterChain;
 import utdigit.web.support.ApiTest;
 
 /**
@@ -28,6 +31,16 @@ class SecurityHeadersTest extends ApiTest {
         assertThat(r.header("Cache-Control")).isEqualTo("no-store");
         assertThat(r.header("X-Frame-Options")).isEqualTo("DENY");
         assertThat(r.header("Content-Security-Policy")).contains("frame-ancestors 'none'");
+    }
+
+    @Autowired
+    ApplicationContext context;
+
+    /** Without a JWT issuer or key Spring Security is not installed: the headers come without its filter chain. */
+    @Test
+    void openServiceHasNoSecurityFilterChain() {
+        assertThat(context.getBeanNamesForType(SecurityFilterChain.class)).isEmpty();
+        assertThat(context.containsBean("springSecurityFilterChain")).isFalse();
     }
 
     @Test
@@ -144,11 +157,11 @@ class SecurityHeadersTest extends ApiTest {
         }
 
         @Test
-        void prometheusScrapesTheHttpServerMetrics() {
+        void prometheusScrapesTheRequestAndJvmMetrics() {
             given().contentType(ContentType.JSON).body("{\"bit_depth\": 8}").post(QUANTIZATION);
             given().get("/actuator/prometheus").then().statusCode(200)
                     .contentType(startsWith("text/plain"))
-                    .body(containsString("http_server_requests_seconds_count"))
+                    .body(containsString("utdigit_requests_total"))
                     .body(containsString("jvm_memory_used_bytes"));
         }
     }

@@ -43,4 +43,14 @@ public enum ProblemType {
     public HttpStatus status() {
         return status;
     }
+
+    /** The first type of this status; a status of none of them: invalid input (4xx) or internal error. */
+    public static ProblemType ofStatus(int status) {
+        for (ProblemType type : values()) {
+            if (type.status.value() == status) {
+                return type;
+            }
+        }
+        return status < 500 ? INVALID_INPUT : INTERNAL_ERROR;
+    }
 }

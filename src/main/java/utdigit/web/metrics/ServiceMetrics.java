@@ -7,8 +7,8 @@ import java.util.concurrent.ConcurrentHashMap;
 import org.springframework.stereotype.Component;
 
 /**
- * The service's own counters, beside the actuator's {@code http.server.requests} timer: API
- * requests by endpoint and answer status, and batch rows by calculation and row status. They live
+ * The service's own counters, the one request metric (the actuator's {@code http.server.requests}
+ * observation is excluded, application.yml): API requests by endpoint and answer status, and batch rows by calculation and row status. They live
  * in the actuator's registry, so any registry on the classpath exports them (Prometheus:
  * {@code utdigit_requests_total}, {@code utdigit_batch_rows_total}).
  *

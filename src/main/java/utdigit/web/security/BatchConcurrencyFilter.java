@@ -17,6 +17,7 @@ import utdigit.web.common.ProblemType;
  * hold, whatever their clients do, and leaves the rest for single requests. One more batch is a 503
  * problem with Retry-After; its body is not read.
  */
+// Tomcat has no per-path limit and Spring's ConcurrencyThrottleInterceptor waits instead of refusing.
 final class BatchConcurrencyFilter extends OncePerRequestFilter {
     static final int RETRY_AFTER_SECONDS = 5;
     private final Semaphore slots;

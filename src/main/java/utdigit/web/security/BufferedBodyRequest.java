@@ -13,6 +13,7 @@ import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 
 /** A request whose body has already been read in full into memory (at most the body cap). */
+// Spring's ContentCachingRequestWrapper keeps what is read, it cannot hand back a body read beforehand.
 final class BufferedBodyRequest extends HttpServletRequestWrapper {
     private final byte[] body;
     private boolean streamUsed;

@@ -16,6 +16,9 @@ import org.apache.coyote.ActionCode;
  * keep that thread however early it was answered. The valve puts a hook on every request; the hook
  * tells Tomcat not to swallow and to close the connection once the answer is written.
  */
+// server.tomcat.max-swallow-size cannot replace it: Tomcat still waits for and reads one more chunk of
+// the body before it gives up (Tomcat 11.0.22 IdentityInputFilter.end reads, then checks the size);
+// SlowClientsTest and BodyLimitsTest (raw sockets) check the early close.
 final class EarlyClose {
     static final String HOOK = EarlyClose.class.getName() + ".HOOK";
 

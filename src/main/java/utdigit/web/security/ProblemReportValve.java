@@ -6,6 +6,7 @@ import java.util.List;
 import org.apache.catalina.connector.Request;
 import org.apache.catalina.connector.Response;
 import org.apache.catalina.valves.ErrorReportValve;
+import org.springframework.security.web.header.HeaderWriter;
 import tools.jackson.databind.json.JsonMapper;
 import utdigit.web.common.Problems;
 import utdigit.web.common.ProblemType;
@@ -15,11 +16,15 @@ import utdigit.web.common.ProblemType;
  * URI, a malformed request line, headers too large) as problems too, with the security headers,
  * in place of the container's HTML page. Answers the application wrote itself are left alone.
  */
+// Boot's error handling lives inside the application context; a request refused before it (bad URI,
+// malformed request line) is answered by the host's error report valve, so that valve is replaced.
 final class ProblemReportValve extends ErrorReportValve {
     private final JsonMapper mapper;
+    private final HeaderWriter headers;
 
-    ProblemReportValve(JsonMapper mapper) {
+    ProblemReportValve(JsonMapper mapper, HeaderWriter headers) {
         this.mapper = mapper;
+        this.headers = headers;
         setShowReport(false);
         setShowServerInfo(false);
     }
@@ -30,17 +35,7 @@ final class ProblemReportValve extends ErrorReportValve {
         if (status < 400 || response.getContentWritten() > 0 || !response.setErrorReported()) {
             return;
         }
-        ProblemType type = switch (status) {
-            case 404 -> ProblemType.NOT_FOUND;
-            case 405 -> ProblemType.METHOD_NOT_ALLOWED;
-            case 406 -> ProblemType.NOT_ACCEPTABLE;
-            case 408 -> ProblemType.REQUEST_TIMEOUT;
-            case 413 -> ProblemType.PAYLOAD_TOO_LARGE;
-            case 415 -> ProblemType.UNSUPPORTED_MEDIA_TYPE;
-            case 401 -> ProblemType.UNAUTHORIZED;
-            case 503 -> ProblemType.SERVICE_BUSY;
-            default -> status < 500 ? ProblemType.INVALID_INPUT : ProblemType.INTERNAL_ERROR;
-        };
+        ProblemType type = ProblemType.ofStatus(status);
         String detail = status < 500 ? "the request is not well-formed HTTP (request line, URI or headers) and "
                 + "was refused before it reached the service" : "the service could not answer this request";
         try {
@@ -49,7 +44,7 @@ final class ProblemReportValve extends ErrorReportValve {
             byte[] bytes = mapper.writeValueAsBytes(body);
             response.setContentType("application/problem+json");
             response.setCharacterEncoding(StandardCharsets.UTF_8.name());
-            SecurityHeadersFilter.API_HEADERS.forEach(response::setHeader);
+            headers.writeHeaders(request, response);
             response.setContentLength(bytes.length);
             response.getOutputStream().write(bytes);
             response.finishResponse();

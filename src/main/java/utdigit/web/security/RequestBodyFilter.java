@@ -35,6 +35,8 @@ import utdigit.web.common.ProblemType;
  * is dispatched again with the body in memory; the deadline is the asynchronous timeout. A rejected
  * body is never drained: the connection is closed after the problem answer.
  */
+// Hand-written because Tomcat caps only form and multipart bodies (maxPostSize) and Spring reads a
+// @RequestBody with blocking reads; BodyLimitsTest and SlowClientsTest hold it to the cap and deadline.
 final class RequestBodyFilter extends OncePerRequestFilter {
     static final String BODY = RequestBodyFilter.class.getName() + ".BODY";
     private static final Pattern BATCH = Pattern.compile("/api/[^/]+/batch/?");

@@ -5,10 +5,10 @@ import jakarta.servlet.http.HttpServletResponse;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
-import org.springframework.beans.factory.ObjectProvider;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.boot.autoconfigure.condition.ConditionalOnExpression;
 import org.springframework.context.annotation.Bean;
+import org.springframework.context.annotation.Conditional;
 import org.springframework.context.annotation.Configuration;
 import org.springframework.http.HttpHeaders;
 import org.springframework.security.config.annotation.web.builders.HttpSecurity;
@@ -31,18 +31,20 @@ import org.springframework.util.StringUtils;
 import utdigit.web.common.ProblemType;
 
 /**
- * Optional authentication. Off by default: every endpoint is open, with no login page, no session
- * and no CSRF token (the API is stateless and takes no cookies). With a JWT decoder configured
+ * Optional authentication. Off by default: every endpoint is open and Spring Security is not
+ * installed at all ({@link SecurityOnlyWithJwt}). With a JWT decoder configured
  * (utdigit.security.jwt.issuer-uri or jwk-set-uri, or Spring's
  * spring.security.oauth2.resourceserver.jwt.*), every /api call needs a valid bearer token: a
- * missing or rejected token is a 401 problem. Health, info, metrics and the OpenAPI document stay
- * open either way. Security headers are written by {@link SecurityHeadersFilter}, not here.
+ * missing or rejected token is a 401 problem; no login page, no session and no CSRF token (the API
+ * is stateless and takes no cookies). Health, info, metrics and the OpenAPI document stay open
+ * either way. Security headers are written by {@link SecurityHeaders}, ahead of this chain.
  */
 @Configuration(proxyBeanMethods = false)
+@Conditional(SecurityOnlyWithJwt.class)
 class SecurityConfiguration {
 
     @Bean
-    SecurityFilterChain serviceSecurity(HttpSecurity http, ObjectProvider<JwtDecoder> decoders,
+    SecurityFilterChain serviceSecurity(HttpSecurity http, JwtDecoder decoder,
                                         ProblemResponses problems) throws Exception {
         AuthenticationEntryPoint unauthorized = (request, response, e) -> unauthorized(problems, request, response);
         http.csrf(AbstractHttpConfigurer::disable)
@@ -53,20 +55,15 @@ class SecurityConfiguration {
                 .logout(AbstractHttpConfigurer::disable)
                 .headers(AbstractHttpConfigurer::disable)
                 .exceptionHandling(e -> e.authenticationEntryPoint(unauthorized));
-        JwtDecoder decoder = decoders.getIfAvailable();
-        if (decoder == null) {
-            http.authorizeHttpRequests(a -> a.anyRequest().permitAll());
-        } else {
-            http.authorizeHttpRequests(a -> a.requestMatchers("/api/**").authenticated().anyRequest().permitAll())
-                    .oauth2ResourceServer(o -> o.jwt(j -> j.decoder(decoder)).authenticationEntryPoint(unauthorized));
-        }
+        http.authorizeHttpRequests(a -> a.requestMatchers("/api/**").authenticated().anyRequest().permitAll())
+                .oauth2ResourceServer(o -> o.jwt(j -> j.decoder(decoder)).authenticationEntryPoint(unauthorized));
         return http.build();
     }
 
     /**
      * Spring Security's own observations are off (they wrap every filter of the chain in an
-     * observation: more CPU per request than most calculations, src/docs/performance.md); the
-     * service exports no traces, and the actuator's http.server.requests timer stays.
+     * observation: more CPU per request than most calculations, src/docs/performance.md; the
+     * service exports no traces).
      */
     @Bean
     SecurityObservationSettings noSecurityObservations() {
