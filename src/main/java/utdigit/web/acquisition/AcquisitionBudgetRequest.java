@@ -57,27 +57,11 @@ public record AcquisitionBudgetRequest(
         @DecimalMin(value = "0", inclusive = false)
         Double gateLengthIn,
 
-        @Schema(description = "Sound velocity in the part, m/s (100 to 20000); for gate_length_mm/_in and "
-                + "max_sound_path_mm/_in", format = "double", example = "5920", minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity in the part, in/us (equivalent of 100 to 20000 m/s)",
-                format = "double", example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials) whose velocity is used",
-                example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "Phased array: focal laws per scan position summed over all groups, one firing and "
                 + "one A-scan each (integer 1 to 65536); default 1. Not with fmc_element_count",

@@ -18,10 +18,6 @@ import utdigit.core.materials.WaveMode;
 public final class Mirrors {
     private Mirrors() {}
 
-    /** Lowest velocity accepted, m/s (the contract's ranges, README and OpenAPI). */
-    public static final double MIN_VELOCITY_M_PER_S = 100.0;
-    /** Highest velocity accepted, m/s. */
-    public static final double MAX_VELOCITY_M_PER_S = 20_000.0;
     /** Longest length accepted, mm (100 m). */
     public static final double MAX_LENGTH_MM = 100_000.0;
 
@@ -122,10 +118,10 @@ public final class Mirrors {
         }
         if (f.velocityInPerUs() != null) {
             double mPerS = Units.inPerUsToMPerS(f.velocityInPerUs());
-            if (!(mPerS >= MIN_VELOCITY_M_PER_S && mPerS <= MAX_VELOCITY_M_PER_S)) {
-                errors.add("velocity_in_per_us", "must correspond to 100 to 20000 m/s ("
-                        + Units.mPerSToInPerUs(MIN_VELOCITY_M_PER_S) + " to "
-                        + Units.mPerSToInPerUs(MAX_VELOCITY_M_PER_S) + " in/us)");
+            if (!(mPerS >= VelocityFields.MIN_M_PER_S && mPerS <= VelocityFields.MAX_M_PER_S)) {
+                errors.add("velocity_in_per_us", "must correspond to " + VelocityFields.MIN_M_PER_S + " to "
+                        + VelocityFields.MAX_M_PER_S + " m/s (" + Units.mPerSToInPerUs(VelocityFields.MIN_M_PER_S)
+                        + " to " + Units.mPerSToInPerUs(VelocityFields.MAX_M_PER_S) + " in/us)");
                 return null;
             }
             return VelocitySource.caller(mPerS);

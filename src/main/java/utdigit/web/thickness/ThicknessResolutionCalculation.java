@@ -1,9 +1,7 @@
 package utdigit.web.thickness;
 
-import java.util.List;
 import java.util.Locale;
 import org.springframework.stereotype.Component;
-import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.thickness.ThicknessCalculator;
 import utdigit.core.thickness.ThicknessInput;
@@ -11,10 +9,8 @@ import utdigit.core.thickness.ThicknessResult;
 import utdigit.web.common.ToleranceCheck;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
-import utdigit.web.common.JsonPointers;
 import utdigit.web.common.Mirrors;
 import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocityFields;
 import utdigit.web.common.VelocitySourceView;
 
 /**
@@ -51,13 +47,7 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
                     + "velocity_uncertainty_percent, not both";
             errors.add("velocity_uncertainty_m_per_s", detail).add("velocity_uncertainty_percent", detail);
         }
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        try {
-            velocity = Mirrors.velocity(errors, q, true);
-        } catch (CalculationException e) {
-            velocityImpossible = e; // a 422 (water with SHEAR) waits for the 400s of the other fields
-        }
+        VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         if (velocity != null && q.velocityUncertaintyMPerS() != null
                 && q.velocityUncertaintyMPerS() > MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS()) {
             errors.add("velocity_uncertainty_m_per_s", String.format(Locale.ROOT,
@@ -65,9 +55,6 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
                     number(MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS())));
         }
         errors.throwIfAny();
-        if (velocityImpossible != null) {
-            throw velocityImpossible;
-        }
 
         // No velocity uncertainty given and a material that states one: its standard uncertainty is used.
         boolean materialUncertainty = q.velocityUncertaintyMPerS() == null && q.velocityUncertaintyPercent() == null

@@ -26,26 +26,11 @@ public record ThicknessResolutionRequest(
         @Min(1) @Max(65536)
         Integer decimationFactor,
 
-        @Schema(description = "Sound velocity in the part, m/s (100 to 20000)", format = "double", example = "5920",
-                minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity in the part, in/us (equivalent of 100 to 20000 m/s)", format = "double",
-                example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "Standard uncertainty (not a half-width) of the velocity, m/s (0 to 4000, and at most "
                 + "20 % of the velocity); or give velocity_uncertainty_percent, not both. Neither: 0, with a warning "

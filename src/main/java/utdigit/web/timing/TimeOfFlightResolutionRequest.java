@@ -14,7 +14,7 @@ import utdigit.web.common.VelocityFields;
 /** POST /api/time-of-flight-resolutions. */
 @Schema(name = "TimeOfFlightResolutionRequest", description = "The digitizer's rate and the part's velocity, with "
         + "the technique and its geometry. Give the velocity once: velocity_m_per_s, velocity_in_per_us or material "
-        + "(+ wave_mode, + temperature_c for water). Each length once: _mm or _in. TOFD needs "
+        + "(+ wave_mode: an angle beam in steel is usually SHEAR; + temperature_c for water). Each length once: _mm or _in. TOFD needs "
         + "probe_centre_separation; depth, thickness, pulse_duration_us (or frequency_mhz with bandwidth_percent) "
         + "and time_reference LATERAL_WAVE apply only to TOFD, refracted_angle_deg only to PULSE_ECHO.")
 public record TimeOfFlightResolutionRequest(
@@ -28,27 +28,11 @@ public record TimeOfFlightResolutionRequest(
         @Min(1) @Max(65536)
         Integer decimationFactor,
 
-        @Schema(description = "Sound velocity of the wave mode used, m/s (100 to 20000)", format = "double",
-                example = "5920", minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity of the wave mode used, in/us (equivalent of 100 to 20000 m/s)",
-                format = "double", example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material "
-                + "(an angle beam in steel is usually SHEAR)")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "PULSE_ECHO (one sample: v dt/2 of sound path), THROUGH_TRANSMISSION (v dt) or TOFD "
                 + "(v dt over both legs); default PULSE_ECHO")

@@ -10,32 +10,18 @@ import utdigit.core.timing.TimeReference;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/tofd-setups. */
-@Schema(name = "TofdSetupRequest", description = "A TOFD set-up: the part's velocity, the probe centre separation "
-        + "2S and the wall thickness (required), with the gate, the pulse duration as its margin, a depth or a "
-        + "measured tip time, the sampling and the separation's uncertainty. Times are in the part (wedge delays "
-        + "excluded), for a tip midway between the probes. Give the velocity once: velocity_m_per_s, "
-        + "velocity_in_per_us or material (+ wave_mode, + temperature_c for water). Each length once: _mm or _in.")
+@Schema(name = "TofdSetupRequest", description = "A TOFD set-up: the part's velocity (of the wave mode used: "
+        + "longitudinal for TOFD), the probe centre separation 2S and the wall thickness (required), with the "
+        + "gate, the pulse duration as its margin, a depth or a measured tip time, the sampling and the "
+        + "separation's uncertainty. Times are in the part (wedge delays excluded), for a tip midway between the "
+        + "probes. Give the velocity once: velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + "
+        + "temperature_c for water). Each length once: _mm or _in.")
 public record TofdSetupRequest(
-        @Schema(description = "Sound velocity of the wave mode used (longitudinal for TOFD), m/s (100 to 20000)",
-                format = "double", example = "5920", minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity, in/us (equivalent of 100 to 20000 m/s)", format = "double",
-                example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "Probe centre separation, the full distance 2S between the probe indices, mm (> 0, "
                 + "<= 100000); required as _mm or _in", format = "double", example = "70", exclusiveMinimumValue = 0,
