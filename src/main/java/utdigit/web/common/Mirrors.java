@@ -3,6 +3,7 @@ package utdigit.web.common;
 import java.util.ArrayList;
 import java.util.List;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Units;
 import utdigit.core.materials.Material;
 import utdigit.core.materials.MaterialCatalog;
@@ -20,6 +21,8 @@ public final class Mirrors {
 
     /** Longest length accepted, mm (100 m). */
     public static final double MAX_LENGTH_MM = 100_000.0;
+    /** The longest length in inches, as messages write it. */
+    private static final String MAX_LENGTH_IN = MessageNumbers.exact(MAX_LENGTH_MM / Units.MM_PER_IN);
 
     /**
      * The length in mm of the input {@code base} given as {@code base_mm} or {@code base_in}, or null
@@ -44,7 +47,7 @@ public final class Mirrors {
         }
         double converted = Units.inToMm(in);
         if (!(converted > 0 && converted <= MAX_LENGTH_MM)) {
-            errors.add(inName, "must be above 0 and at most " + (MAX_LENGTH_MM / Units.MM_PER_IN) + " in (100 m)");
+            errors.add(inName, "must be above 0 and at most " + MAX_LENGTH_IN + " in (100 m)");
             return null;
         }
         return converted;
@@ -67,7 +70,7 @@ public final class Mirrors {
         }
         double converted = Units.inToMm(inPerS);
         if (!(converted > 0 && converted <= MAX_LENGTH_MM)) {
-            errors.add(inName, "must be above 0 and at most " + (MAX_LENGTH_MM / Units.MM_PER_IN) + " in/s");
+            errors.add(inName, "must be above 0 and at most " + MAX_LENGTH_IN + " in/s");
             return null;
         }
         return converted;
@@ -120,8 +123,9 @@ public final class Mirrors {
             double mPerS = Units.inPerUsToMPerS(f.velocityInPerUs());
             if (!(mPerS >= VelocityFields.MIN_M_PER_S && mPerS <= VelocityFields.MAX_M_PER_S)) {
                 errors.add("velocity_in_per_us", "must correspond to " + VelocityFields.MIN_M_PER_S + " to "
-                        + VelocityFields.MAX_M_PER_S + " m/s (" + Units.mPerSToInPerUs(VelocityFields.MIN_M_PER_S)
-                        + " to " + Units.mPerSToInPerUs(VelocityFields.MAX_M_PER_S) + " in/us)");
+                        + VelocityFields.MAX_M_PER_S + " m/s ("
+                        + MessageNumbers.exact(Units.mPerSToInPerUs(VelocityFields.MIN_M_PER_S)) + " to "
+                        + MessageNumbers.exact(Units.mPerSToInPerUs(VelocityFields.MAX_M_PER_S)) + " in/us)");
                 return null;
             }
             return VelocitySource.caller(mPerS);

@@ -2,6 +2,7 @@ package utdigit.web.common;
 
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.Locale;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.materials.UncertaintyKind;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.materials.WaveMode;
@@ -51,17 +52,12 @@ public record VelocitySourceView(
             return plain;
         }
         String how = v.uncertaintyKind() == UncertaintyKind.HALF_WIDTH
-                ? String.format(Locale.ROOT, "the material's half-width +/- %s m/s as rectangular: u = %s/sqrt(3) = %.4g m/s"
-                        + " (JCGM 100:2008 4.3.7)", num(v.statedUncertaintyMPerS()), num(v.statedUncertaintyMPerS()),
-                        v.standardUncertaintyMPerS())
-                : String.format(Locale.ROOT, "the material's standard uncertainty %s m/s", num(v.standardUncertaintyMPerS()));
+                ? String.format(Locale.ROOT, "the material's half-width +/- %s m/s as rectangular: u = %s/sqrt(3) = %s m/s"
+                        + " (JCGM 100:2008 4.3.7)", MessageNumbers.exact(v.statedUncertaintyMPerS()),
+                        MessageNumbers.exact(v.statedUncertaintyMPerS()), MessageNumbers.plain(v.standardUncertaintyMPerS(), 4))
+                : "the material's standard uncertainty " + MessageNumbers.exact(v.standardUncertaintyMPerS()) + " m/s";
         return new VelocitySourceView(plain.kind(), plain.velocityMPerS(), plain.material(), plain.waveMode(),
                 plain.temperatureC(), plain.source(), plain.uncertaintyMPerS(), plain.uncertaintyKind(),
                 plain.standardUncertaintyMPerS(), how + ", used as velocity_uncertainty_m_per_s: none was given",
                 plain.caution());
-    }
-
-    private static String num(double value) {
-        return value == StrictMath.rint(value) ? String.valueOf((long) value) : String.valueOf(value);
-    }
-}
+    }}

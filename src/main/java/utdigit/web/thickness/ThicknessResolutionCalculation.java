@@ -1,7 +1,7 @@
 package utdigit.web.thickness;
 
-import java.util.Locale;
 import org.springframework.stereotype.Component;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.thickness.ThicknessCalculator;
 import utdigit.core.thickness.ThicknessInput;
@@ -50,9 +50,9 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         if (velocity != null && q.velocityUncertaintyMPerS() != null
                 && q.velocityUncertaintyMPerS() > MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS()) {
-            errors.add("velocity_uncertainty_m_per_s", String.format(Locale.ROOT,
-                    "must be at most 20 %% of the velocity (%s m/s here)",
-                    number(MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS())));
+            errors.add("velocity_uncertainty_m_per_s", "must be at most 20 % of the velocity ("
+                    + MessageNumbers.exact(MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS())
+                    + " m/s here)");
         }
         errors.throwIfAny();
 
@@ -100,10 +100,5 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
             case "velocity" -> Mirrors.velocityPointer(q);
             default -> Calculation.super.pointer(coreField, q);
         };
-    }
-
-
-    private static String number(double value) {
-        return value == StrictMath.rint(value) ? String.valueOf((long) value) : String.valueOf(value);
     }
 }
