@@ -52,7 +52,7 @@ public interface VelocityFields {
     @Retention(RUNTIME)
     @JacksonAnnotationsInside
     @Schema(description = "Sound velocity of the wave mode used, m/s (" + MIN_M_PER_S + " to " + MAX_M_PER_S + ")",
-            format = "double", example = "5920", minimum = "" + MIN_M_PER_S, maximum = "" + MAX_M_PER_S)
+            example = "5920", minimum = "" + MIN_M_PER_S, maximum = "" + MAX_M_PER_S)
     @Constraint(validatedBy = {})
     @DecimalMin("" + MIN_M_PER_S)
     @DecimalMax("" + MAX_M_PER_S)
@@ -69,7 +69,7 @@ public interface VelocityFields {
     @Retention(RUNTIME)
     @JacksonAnnotationsInside
     @Schema(description = "Sound velocity of the wave mode used, in/us (equivalent of " + MIN_M_PER_S + " to "
-            + MAX_M_PER_S + " m/s)", format = "double", example = "0.2331", exclusiveMinimumValue = 0)
+            + MAX_M_PER_S + " m/s)", example = "0.2331", exclusiveMinimumValue = 0)
     @Constraint(validatedBy = {})
     @DecimalMin(value = "0", inclusive = false)
     @interface InPerUs {
@@ -99,7 +99,7 @@ public interface VelocityFields {
     @Retention(RUNTIME)
     @JacksonAnnotationsInside
     @Schema(description = "Water only: temperature, C (" + MIN_TEMPERATURE_C + " to " + MAX_TEMPERATURE_C
-            + "); default 20", format = "double", example = "20", minimum = "" + MIN_TEMPERATURE_C,
+            + "); default 20", example = "20", minimum = "" + MIN_TEMPERATURE_C,
             maximum = "" + MAX_TEMPERATURE_C)
     @Constraint(validatedBy = {})
     @DecimalMin("" + MIN_TEMPERATURE_C)
