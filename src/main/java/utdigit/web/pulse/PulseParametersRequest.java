@@ -13,8 +13,7 @@ import utdigit.web.common.VelocityFields;
         + "velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + temperature_c for water). "
         + "Each length once: _mm or _in.")
 public record PulseParametersRequest(
-        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5",
-                exclusiveMinimumValue = 0, maximum = "1000")
+        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5")
         @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
@@ -24,8 +23,7 @@ public record PulseParametersRequest(
         @VelocityFields.Mode WaveMode waveMode,
         @VelocityFields.TemperatureC Double temperatureC,
 
-        @Schema(description = "-6 dB fractional bandwidth of the probe, % (0 to 200 exclusive)",
-                example = "60", exclusiveMinimumValue = 0, exclusiveMaximumValue = 200)
+        @Schema(description = "-6 dB fractional bandwidth of the probe, % (0 to 200 exclusive)", example = "60")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
         Double bandwidthPercent,
 
@@ -33,43 +31,39 @@ public record PulseParametersRequest(
                 + "sqrt(fl fu); default ARITHMETIC. Only with bandwidth_percent")
         CentreFrequencyConvention centreFrequencyConvention,
 
-        @Schema(description = "Element diameter (circular), mm (> 0, <= 100000)", example = "10",
-                exclusiveMinimumValue = 0, maximum = "100000")
+        @Schema(description = "Element diameter (circular), mm (> 0, <= 100000)", example = "10")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double elementDiameterMm,
 
-        @Schema(description = "Element diameter (circular), in", example = "0.375", exclusiveMinimumValue = 0)
+        @Schema(description = "Element diameter (circular), in", example = "0.375")
         @DecimalMin(value = "0", inclusive = false)
         Double elementDiameterIn,
 
         @Schema(description = "Distance in the part for the beam diameter, mm; needs the element diameter",
-                example = "50", exclusiveMinimumValue = 0, maximum = "100000")
+                example = "50")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double distanceMm,
 
-        @Schema(description = "Distance in the part for the beam diameter, in", example = "2",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Distance in the part for the beam diameter, in", example = "2")
         @DecimalMin(value = "0", inclusive = false)
         Double distanceIn,
 
         @Schema(description = "Sound path in a wedge or delay line before the part, mm; needs "
-                + "wedge_velocity_m_per_s and the element diameter", example = "12",
-                exclusiveMinimumValue = 0, maximum = "100000")
+                + "wedge_velocity_m_per_s and the element diameter", example = "12")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double wedgePathMm,
 
-        @Schema(description = "Sound path in a wedge or delay line, in", example = "0.5", exclusiveMinimumValue = 0)
+        @Schema(description = "Sound path in a wedge or delay line, in", example = "0.5")
         @DecimalMin(value = "0", inclusive = false)
         Double wedgePathIn,
 
         @Schema(description = "Longitudinal velocity of the wedge or delay line, m/s (100 to 20000); wedge grades "
-                + "vary by maker and temperature: give the measured value", example = "2730",
-                minimum = "100", maximum = "20000")
+                + "vary by maker and temperature: give the measured value", example = "2730")
         @DecimalMin("100") @DecimalMax("20000")
         Double wedgeVelocityMPerS,
 
         @Schema(description = "Incident angle in the wedge, deg (0 to below 90); needs wedge_velocity_m_per_s",
-                example = "36", minimum = "0", exclusiveMaximumValue = 90)
+                example = "36")
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
         Double incidentAngleDeg) implements VelocityFields {
 }

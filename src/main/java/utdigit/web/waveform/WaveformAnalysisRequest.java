@@ -31,7 +31,7 @@ public record WaveformAnalysisRequest(
 
         @Schema(description = "The rate the record was sampled at, MHz (> 0, <= 100000); it should be well above "
                 + "the probe's band (the record's energy near its own Nyquist frequency is checked)",
-                example = "100", exclusiveMinimumValue = 0, maximum = "100000")
+                example = "100")
         @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double recordSamplingFrequencyMhz,
 
@@ -40,13 +40,12 @@ public record WaveformAnalysisRequest(
         CentreFrequencyConvention centreFrequencyConvention,
 
         @Schema(description = "The target (raw) sampling frequency to judge the recorded pulse at, MHz (> 0, "
-                + "<= 100000); gives the target figures", example = "25",
-                exclusiveMinimumValue = 0, maximum = "100000")
+                + "<= 100000); gives the target figures", example = "25")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "The target's decimation factor m (integer 1 to 65536); default 1. Only with "
-                + "sampling_frequency_mhz", example = "1", minimum = "1", maximum = "65536")
+                + "sampling_frequency_mhz", example = "1")
         @Min(1) @Max(65536)
         Integer decimationFactor,
 
@@ -59,8 +58,7 @@ public record WaveformAnalysisRequest(
         PeakReading peakReading,
 
         @Schema(description = "Amplitude tolerance, dB (> 0, <= 40); gives the required rates of the record and of "
-                + "the model. Only with sampling_frequency_mhz", example = "1",
-                exclusiveMinimumValue = 0, maximum = "40")
+                + "the model. Only with sampling_frequency_mhz", example = "1")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("40")
         Double amplitudeToleranceDb) {
 }
