@@ -8,6 +8,7 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.acquisition.CaptureMode;
 import utdigit.core.materials.WaveMode;
+import utdigit.web.common.InputMessages;
 import utdigit.web.common.VelocityFields;
 
 /**
@@ -25,7 +26,7 @@ import utdigit.web.common.VelocityFields;
         + "fmc_element_count with capture. MB = 10^6 bytes.")
 public record AcquisitionBudgetRequest(
         @Schema(description = "The converter's raw sampling frequency fs, MHz (> 0, <= 100000)", example = "100")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "Integer m by which fs is divided before storage: the stored rate is fs/m "
@@ -35,7 +36,7 @@ public record AcquisitionBudgetRequest(
 
         @Schema(description = "Converter resolution, bits (integer 1 to 32); each sample is counted in whole "
                 + "bytes, ceil(bits/8)", example = "8")
-        @NotNull(message = "is required") @Min(1) @Max(32)
+        @NotNull(message = InputMessages.REQUIRED) @Min(1) @Max(32)
         Integer bitDepth,
 
         @Schema(description = "Recorded gate length as a time, us (> 0, <= 100000); or give gate_length_mm / "
@@ -99,7 +100,7 @@ public record AcquisitionBudgetRequest(
 
         @Schema(description = "The instrument's firing rate, all firings counted (every focal law or element), "
                 + "Hz (> 0, <= 1000000)", example = "10000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000000")
         Double pulseRepetitionFrequencyHz,
 
         @Schema(description = "Planned scan speed, mm/s (> 0, <= 100000); a speed above the PRF-limited "

@@ -7,6 +7,7 @@ import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
+import utdigit.web.common.InputMessages;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/array-apertures. */
@@ -17,7 +18,7 @@ import utdigit.web.common.VelocityFields;
         + "once: _mm or _in. The active aperture as active_elements (n x pitch) or active_aperture, not both.")
 public record ArrayApertureRequest(
         @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
         @VelocityFields.MPerS Double velocityMPerS,

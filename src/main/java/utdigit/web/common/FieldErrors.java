@@ -53,6 +53,12 @@ public final class FieldErrors {
         return this;
     }
 
+    /** Both forms of one input were given ({@code what}: its name in the message): an error at each. */
+    public FieldErrors notBoth(String what, String first, String second) {
+        String detail = "give " + what + " once: " + first + " or " + second + ", not both";
+        return add(first, detail).add(second, detail);
+    }
+
     public boolean isEmpty() {
         return errors.isEmpty();
     }

@@ -32,8 +32,7 @@ public final class Mirrors {
         String mmName = base + "_mm";
         String inName = base + "_in";
         if (mm != null && in != null) {
-            String detail = "give " + base + " once: " + mmName + " or " + inName + ", not both";
-            errors.add(mmName, detail).add(inName, detail);
+            errors.notBoth(base, mmName, inName);
             return null;
         }
         if (mm == null && in == null) {
@@ -61,8 +60,7 @@ public final class Mirrors {
         String mmName = base + "_mm_per_s";
         String inName = base + "_in_per_s";
         if (mmPerS != null && inPerS != null) {
-            String detail = "give " + base + " once: " + mmName + " or " + inName + ", not both";
-            errors.add(mmName, detail).add(inName, detail);
+            errors.notBoth(base, mmName, inName);
             return null;
         }
         if (inPerS == null) {

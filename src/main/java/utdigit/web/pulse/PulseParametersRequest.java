@@ -6,6 +6,7 @@ import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.pulse.CentreFrequencyConvention;
+import utdigit.web.common.InputMessages;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/pulse-parameters. */
@@ -14,7 +15,7 @@ import utdigit.web.common.VelocityFields;
         + "Each length once: _mm or _in.")
 public record PulseParametersRequest(
         @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
         @VelocityFields.MPerS Double velocityMPerS,

@@ -9,13 +9,14 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.quantization.CodeMapping;
 import utdigit.core.quantization.DigitizedSignal;
 import utdigit.core.quantization.Quantizer;
+import utdigit.web.common.InputMessages;
 
 /** POST /api/quantization-assessments. */
 @Schema(name = "QuantizationAssessmentRequest", description = "The converter's bit depth and how its codes map "
         + "to screen height, with optional heights and tolerances to check.")
 public record QuantizationAssessmentRequest(
         @Schema(description = "Converter resolution, bits (integer 1 to 32)", example = "8")
-        @NotNull(message = "is required") @Min(1) @Max(32)
+        @NotNull(message = InputMessages.REQUIRED) @Min(1) @Max(32)
         Integer bitDepth,
 
         @Schema(description = "What is digitized: RF (-100..+100 %FSH) or RECTIFIED (0..100 %FSH); default RF")

@@ -12,6 +12,7 @@ import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.PeakReading;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.TfmImage;
+import utdigit.web.common.InputMessages;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/sampling-assessments. */
@@ -21,11 +22,11 @@ import utdigit.web.common.VelocityFields;
         + "water) only with the TFM grid figures.")
 public record SamplingAssessmentRequest(
         @Schema(description = "The converter's (raw) sampling frequency fs, MHz (> 0, <= 100000)", example = "100")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
         @Schema(description = "Decimation (compression) factor m: one stored sample per m converted (integer 1 to "

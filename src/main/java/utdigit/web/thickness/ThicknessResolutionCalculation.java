@@ -43,9 +43,7 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         Double requiredResolutionMm = Mirrors.lengthMm(errors, "required_resolution", q.requiredResolutionMm(),
                 q.requiredResolutionIn(), false);
         if (q.velocityUncertaintyMPerS() != null && q.velocityUncertaintyPercent() != null) {
-            String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s or "
-                    + "velocity_uncertainty_percent, not both";
-            errors.add("velocity_uncertainty_m_per_s", detail).add("velocity_uncertainty_percent", detail);
+            errors.notBoth("the velocity uncertainty", "velocity_uncertainty_m_per_s", "velocity_uncertainty_percent");
         }
         VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         if (velocity != null && q.velocityUncertaintyMPerS() != null

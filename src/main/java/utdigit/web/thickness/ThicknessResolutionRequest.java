@@ -8,6 +8,7 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.thickness.Measurement;
+import utdigit.web.common.InputMessages;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/thickness-resolutions. */
@@ -17,7 +18,7 @@ import utdigit.web.common.VelocityFields;
         + "once; each length once: _mm or _in.")
 public record ThicknessResolutionRequest(
         @Schema(description = "Converter (raw) sampling frequency, MHz (> 0, <= 100000)", example = "50")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "Stored rate is sampling_frequency_mhz / decimation_factor (integer 1 to 65536); "

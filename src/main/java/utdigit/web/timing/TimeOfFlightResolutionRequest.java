@@ -9,6 +9,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.timing.Technique;
 import utdigit.core.timing.TimeReference;
+import utdigit.web.common.InputMessages;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/time-of-flight-resolutions. */
@@ -20,7 +21,7 @@ import utdigit.web.common.VelocityFields;
         + "PULSE_ECHO.")
 public record TimeOfFlightResolutionRequest(
         @Schema(description = "Converter (raw) sampling frequency, MHz (> 0, <= 100000)", example = "100")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "Stored rate is sampling_frequency_mhz / decimation_factor (integer 1 to 65536); "

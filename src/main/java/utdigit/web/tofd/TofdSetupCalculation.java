@@ -62,9 +62,8 @@ class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
         Double mm = q.probeCentreSeparationUncertaintyMm();
         Double in = q.probeCentreSeparationUncertaintyIn();
         if (mm != null && in != null) {
-            String detail = "give probe_centre_separation_uncertainty once: probe_centre_separation_uncertainty_mm or "
-                    + "probe_centre_separation_uncertainty_in, not both";
-            errors.add("probe_centre_separation_uncertainty_mm", detail).add("probe_centre_separation_uncertainty_in", detail);
+            errors.notBoth("probe_centre_separation_uncertainty", "probe_centre_separation_uncertainty_mm",
+                    "probe_centre_separation_uncertainty_in");
             return null;
         }
         if (in != null) {

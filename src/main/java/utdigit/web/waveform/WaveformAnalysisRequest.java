@@ -13,6 +13,7 @@ import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.PeakReading;
 import utdigit.core.waveform.WaveformInput;
+import utdigit.web.common.InputMessages;
 
 /** POST /api/waveform-analyses. */
 @Schema(name = "WaveformAnalysisRequest", description = "A recorded pulse (its samples, equally spaced, and the rate "
@@ -26,13 +27,13 @@ public record WaveformAnalysisRequest(
                 schema = @Schema(type = "number", format = "double", example = "0.12"))
         // The count (16 to 8192) is checked by WaveformInput at /samples; a Bean Validation @Size here
         // would be written onto the items' schema as minimum/maximum by the model resolver.
-        @NotNull(message = "is required")
+        @NotNull(message = InputMessages.REQUIRED)
         List<Double> samples,
 
         @Schema(description = "The rate the record was sampled at, MHz (> 0, <= 100000); it should be well above "
                 + "the probe's band (the record's energy near its own Nyquist frequency is checked)",
                 example = "100")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double recordSamplingFrequencyMhz,
 
         @Schema(description = "How the centre frequency is taken from the measured -6 dB edges: ARITHMETIC "
