@@ -9,6 +9,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.acquisition.CaptureMode;
 import utdigit.core.materials.WaveMode;
 import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /**
@@ -46,7 +47,7 @@ public record AcquisitionBudgetRequest(
 
         @Schema(description = "Recorded gate as a pulse-echo sound path in the part, mm (> 0, <= 100000); the "
                 + "time is 2 L / v; needs a velocity", example = "50")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double gateLengthMm,
 
         @Schema(description = "Recorded gate as a pulse-echo sound path in the part, in (> 0, at most 100 m); "
@@ -82,7 +83,7 @@ public record AcquisitionBudgetRequest(
 
         @Schema(description = "Distance between recorded scan positions, mm (> 0, <= 100000); required: give "
                 + "scan_increment_mm or scan_increment_in", example = "1")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double scanIncrementMm,
 
         @Schema(description = "Distance between recorded scan positions, in (> 0, at most 100 m)", example = "0.04")
@@ -91,7 +92,7 @@ public record AcquisitionBudgetRequest(
 
         @Schema(description = "Scan length of one file, mm (> 0, <= 100000); gives file_size_megabytes",
                 example = "2000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double scanLengthMm,
 
         @Schema(description = "Scan length of one file, in (> 0, at most 100 m)", example = "80")
@@ -105,7 +106,7 @@ public record AcquisitionBudgetRequest(
 
         @Schema(description = "Planned scan speed, mm/s (> 0, <= 100000); a speed above the PRF-limited "
                 + "maximum is a warning. The data rate is given at this speed", example = "50")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double plannedScanSpeedMmPerS,
 
         @Schema(description = "Planned scan speed, in/s (1 in/s = 25.4 mm/s; > 0, at most 3937 in/s); or give "
@@ -121,7 +122,7 @@ public record AcquisitionBudgetRequest(
 
         @Schema(description = "Longest one-way sound path in the part, mm (> 0, <= 100000); round trip 2 L / v; "
                 + "needs a velocity", example = "100")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double maxSoundPathMm,
 
         @Schema(description = "Longest one-way sound path in the part, in (> 0, at most 100 m); needs a velocity",

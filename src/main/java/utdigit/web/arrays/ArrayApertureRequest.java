@@ -8,6 +8,7 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/array-apertures. */
@@ -29,7 +30,7 @@ public record ArrayApertureRequest(
 
         @Schema(description = "Element pitch, centre to centre, mm (> 0, <= 100000); required as _mm or _in",
                 example = "0.6")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementPitchMm,
 
         @Schema(description = "Element pitch, in (> 0, at most 100 m)", example = "0.024")
@@ -43,7 +44,7 @@ public record ArrayApertureRequest(
 
         @Schema(description = "Active aperture length in the steering plane, mm (> 0, <= 100000; not below one "
                 + "pitch); instead of active_elements", example = "9.6")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double activeApertureMm,
 
         @Schema(description = "Active aperture length, in (> 0, at most 100 m)", example = "0.378")
@@ -52,7 +53,7 @@ public record ArrayApertureRequest(
 
         @Schema(description = "Element length in the passive plane (the array's width), mm (> 0, <= 100000); gives "
                 + "the passive-plane near field and beam spread", example = "10")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementLengthMm,
 
         @Schema(description = "Element length in the passive plane, in (> 0, at most 100 m)", example = "0.394")

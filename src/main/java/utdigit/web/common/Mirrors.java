@@ -19,8 +19,13 @@ import utdigit.core.materials.WaveMode;
 public final class Mirrors {
     private Mirrors() {}
 
-    /** Longest length accepted, mm (100 m). */
-    public static final double MAX_LENGTH_MM = 100_000.0;
+    /**
+     * Longest length accepted, mm (100 m), as the requests' {@code @DecimalMax} of every length in mm
+     * (and speed in mm/s) writes it; the inch forms are checked against it after conversion.
+     */
+    public static final String MAX_MM = "100000";
+    /** The same, as a number. */
+    public static final double MAX_LENGTH_MM = Double.parseDouble(MAX_MM);
     /** The longest length in inches, as messages write it. */
     private static final String MAX_LENGTH_IN = MessageNumbers.exact(MAX_LENGTH_MM / Units.MM_PER_IN);
 

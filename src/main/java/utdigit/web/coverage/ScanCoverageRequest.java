@@ -4,6 +4,7 @@ import io.swagger.v3.oas.annotations.media.Schema;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import utdigit.core.materials.WaveMode;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/scan-coverages. */
@@ -15,7 +16,7 @@ import utdigit.web.common.VelocityFields;
 public record ScanCoverageRequest(
         @Schema(description = "Pulse-echo -6 dB beam width at the reflector's sound path, mm (> 0, <= 100000)",
                 example = "8")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double beamWidth6dbMm,
 
         @Schema(description = "Pulse-echo -6 dB beam width, in (> 0, at most 100 m)", example = "0.315")
@@ -33,7 +34,7 @@ public record ScanCoverageRequest(
         @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "Round probe: element diameter, mm (> 0, <= 100000)", example = "10")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementDiameterMm,
 
         @Schema(description = "Round probe: element diameter, in (> 0, at most 100 m)", example = "0.375")
@@ -43,7 +44,7 @@ public record ScanCoverageRequest(
         @Schema(description = "Sound path from the probe to the reflector, mm (> 0, <= 100000): the round probe's "
                 + "beam width is taken there, and an angular step moves the beam sound_path x step there",
                 example = "60")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double soundPathMm,
 
         @Schema(description = "Sound path to the reflector, in (> 0, at most 100 m)", example = "2.36")
@@ -52,7 +53,7 @@ public record ScanCoverageRequest(
 
         @Schema(description = "Distance between neighbouring positions along the scan (encoder increment), mm "
                 + "(> 0, <= 100000)", example = "1")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double scanIncrementMm,
 
         @Schema(description = "Scan increment, in (> 0, at most 100 m)", example = "0.04")
@@ -61,7 +62,7 @@ public record ScanCoverageRequest(
 
         @Schema(description = "Distance between neighbouring scan lines (index offset), mm (> 0, <= 100000)",
                 example = "4")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double indexStepMm,
 
         @Schema(description = "Index step, in (> 0, at most 100 m)", example = "0.16")

@@ -7,6 +7,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/pulse-parameters. */
@@ -33,7 +34,7 @@ public record PulseParametersRequest(
         CentreFrequencyConvention centreFrequencyConvention,
 
         @Schema(description = "Element diameter (circular), mm (> 0, <= 100000)", example = "10")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementDiameterMm,
 
         @Schema(description = "Element diameter (circular), in", example = "0.375")
@@ -42,7 +43,7 @@ public record PulseParametersRequest(
 
         @Schema(description = "Distance in the part for the beam diameter, mm; needs the element diameter",
                 example = "50")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double distanceMm,
 
         @Schema(description = "Distance in the part for the beam diameter, in", example = "2")
@@ -51,7 +52,7 @@ public record PulseParametersRequest(
 
         @Schema(description = "Sound path in a wedge or delay line before the part, mm; needs "
                 + "wedge_velocity_m_per_s and the element diameter", example = "12")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double wedgePathMm,
 
         @Schema(description = "Sound path in a wedge or delay line, in", example = "0.5")

@@ -13,6 +13,7 @@ import utdigit.core.sampling.PeakReading;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.TfmImage;
 import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/sampling-assessments. */
@@ -64,7 +65,7 @@ public record SamplingAssessmentRequest(
         Double amplitudeToleranceDb,
 
         @Schema(description = "TFM grid step in depth dz, mm (> 0, <= 100000); needs a velocity", example = "0.1")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmGridSpacingMm,
 
         @Schema(description = "TFM grid step in depth dz, in (> 0, at most the equivalent of 100 m)", example = "0.004")
@@ -83,7 +84,7 @@ public record SamplingAssessmentRequest(
 
         @Schema(description = "TFM grid step across (lateral) dx, mm (> 0, <= 100000); with tfm_aperture and "
                 + "tfm_depth, and a velocity", example = "0.2")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmLateralGridSpacingMm,
 
         @Schema(description = "TFM grid step across (lateral) dx, in", example = "0.008")
@@ -92,7 +93,7 @@ public record SamplingAssessmentRequest(
 
         @Schema(description = "Active aperture A of the array for the lateral figure, mm (> 0, <= 100000)",
                 example = "38.4")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmApertureMm,
 
         @Schema(description = "Active aperture A of the array for the lateral figure, in", example = "1.5")
@@ -100,7 +101,7 @@ public record SamplingAssessmentRequest(
         Double tfmApertureIn,
 
         @Schema(description = "Depth z at which the lateral figure is assessed, mm (> 0, <= 100000)", example = "30")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmDepthMm,
 
         @Schema(description = "Depth z at which the lateral figure is assessed, in", example = "1.2")

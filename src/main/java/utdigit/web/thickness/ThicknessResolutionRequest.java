@@ -9,6 +9,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.thickness.Measurement;
 import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/thickness-resolutions. */
@@ -45,7 +46,7 @@ public record ThicknessResolutionRequest(
 
         @Schema(description = "Nominal wall thickness, mm (> 0, <= 100000); this or nominal_thickness_in is required",
                 example = "12.5")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double nominalThicknessMm,
 
         @Schema(description = "Nominal wall thickness, in (> 0, at most 100 m)", example = "0.5")
@@ -65,7 +66,7 @@ public record ThicknessResolutionRequest(
         @Schema(description = "Thickness resolution required, mm (> 0, <= 100000); gives "
                 + "required_sampling_frequency_mhz and warns when the resolution is coarser",
                 example = "0.05")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double requiredResolutionMm,
 
         @Schema(description = "Thickness resolution required, in (> 0, at most 100 m)", example = "0.002")

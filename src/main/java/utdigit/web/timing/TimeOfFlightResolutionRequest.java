@@ -10,6 +10,7 @@ import utdigit.core.materials.WaveMode;
 import utdigit.core.timing.Technique;
 import utdigit.core.timing.TimeReference;
 import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/time-of-flight-resolutions. */
@@ -46,7 +47,7 @@ public record TimeOfFlightResolutionRequest(
 
         @Schema(description = "TOFD only, required there: probe centre separation, the full distance 2S between "
                 + "the probe indices, mm (> 0, <= 100000)", example = "58")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double probeCentreSeparationMm,
 
         @Schema(description = "TOFD only: probe centre separation 2S, in (> 0, at most 100 m)", example = "2.25")
@@ -55,7 +56,7 @@ public record TimeOfFlightResolutionRequest(
 
         @Schema(description = "TOFD only: tip depth below the scanning surface, midway between the probes, mm "
                 + "(> 0, <= 100000; not below thickness)", example = "16")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double depthMm,
 
         @Schema(description = "TOFD only: tip depth, in (> 0, at most 100 m)", example = "0.625")
@@ -64,7 +65,7 @@ public record TimeOfFlightResolutionRequest(
 
         @Schema(description = "TOFD only: wall thickness, mm (> 0, <= 100000); with a pulse duration gives "
                 + "backwall_dead_zone_mm", example = "25")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double thicknessMm,
 
         @Schema(description = "TOFD only: wall thickness, in (> 0, at most 100 m)", example = "1")

@@ -7,6 +7,7 @@ import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.timing.TimeReference;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/tofd-setups. */
@@ -25,7 +26,7 @@ public record TofdSetupRequest(
 
         @Schema(description = "Probe centre separation, the full distance 2S between the probe indices, mm (> 0, "
                 + "<= 100000); required as _mm or _in", example = "70")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double probeCentreSeparationMm,
 
         @Schema(description = "Probe centre separation 2S, in (> 0, at most 100 m)", example = "2.75")
@@ -33,7 +34,7 @@ public record TofdSetupRequest(
         Double probeCentreSeparationIn,
 
         @Schema(description = "Wall thickness, mm (> 0, <= 100000); required as _mm or _in", example = "30")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double thicknessMm,
 
         @Schema(description = "Wall thickness, in (> 0, at most 100 m)", example = "1.18")
@@ -55,7 +56,7 @@ public record TofdSetupRequest(
 
         @Schema(description = "Tip depth below the scanning surface where the depth uncertainty is wanted, mm (> 0, "
                 + "<= 100000; not below thickness); or measured_time_us, not both", example = "15")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double depthMm,
 
         @Schema(description = "Tip depth, in (> 0, at most 100 m)", example = "0.59")
@@ -85,7 +86,7 @@ public record TofdSetupRequest(
 
         @Schema(description = "Standard uncertainty of the probe centre separation 2S, mm (0 to 100000)",
                 example = "0.5")
-        @DecimalMin("0") @DecimalMax("100000")
+        @DecimalMin("0") @DecimalMax(Mirrors.MAX_MM)
         Double probeCentreSeparationUncertaintyMm,
 
         @Schema(description = "Standard uncertainty of the probe centre separation 2S, in (0 to 100 m)",
