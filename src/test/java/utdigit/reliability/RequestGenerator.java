@@ -144,9 +144,24 @@ final class RequestGenerator {
         return null;
     }
 
+    /** A bound on the field, or on a composed constraint of it (the velocity fields' annotations). */
+    private static <A extends java.lang.annotation.Annotation> A bound(Field f, Class<A> type) {
+        A direct = f.getAnnotation(type);
+        if (direct != null) {
+            return direct;
+        }
+        for (java.lang.annotation.Annotation a : f.getAnnotations()) {
+            A composed = a.annotationType().getAnnotation(type);
+            if (composed != null) {
+                return composed;
+            }
+        }
+        return null;
+    }
+
     private double decimal(Field f) {
-        DecimalMin min = f.getAnnotation(DecimalMin.class);
-        DecimalMax max = f.getAnnotation(DecimalMax.class);
+        DecimalMin min = bound(f, DecimalMin.class);
+        DecimalMax max = bound(f, DecimalMax.class);
         double lo = min == null ? 1e-3 : Double.parseDouble(min.value());
         double hi = max == null ? 1e4 : Double.parseDouble(max.value());
         boolean loIn = min == null || min.inclusive();

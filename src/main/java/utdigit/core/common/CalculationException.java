@@ -37,14 +37,6 @@ public final class CalculationException extends RuntimeException {
                 CalculationError.INVALID_INPUT.format(field, value + 0.0, requirement)); // -0.0 + 0.0 is 0.0: no "-0" in a text
     }
 
-    /**
-     * The same failure with its field names rewritten by {@code rename}, for a caller that
-     * embeds a calculation in a larger document (a technique sheet's sections).
-     */
-    public CalculationException relocated(java.util.function.UnaryOperator<String> rename) {
-        return new CalculationException(error, fields.stream().map(rename).toList(), getMessage());
-    }
-
     public CalculationError error() {
         return error;
     }

@@ -17,4 +17,20 @@ public final class MessageNumbers {
         }
         return new BigDecimal(x).round(digits).stripTrailingZeros().toPlainString();
     }
+
+    /** {@code x} rounded to {@code significantDigits} digits, as {@link #plain(double, MathContext)}. */
+    public static String plain(double x, int significantDigits) {
+        return plain(x, new MathContext(significantDigits));
+    }
+
+    /**
+     * {@code x} in full (the shortest decimal that reads back as the same double), without trailing
+     * zeros or an exponent ("5920", "0.5"): a value the caller gave, or a limit computed from one.
+     */
+    public static String exact(double x) {
+        if (!Double.isFinite(x)) {
+            return plain(x, MathContext.UNLIMITED);
+        }
+        return BigDecimal.valueOf(x).stripTrailingZeros().toPlainString();
+    }
 }

@@ -36,6 +36,12 @@ public final class Sources {
                 "common practice, no published source: " + what);
     }
 
+    /** A clause of JCGM 100:2008, the GUM; {@code locator} begins with the clause number. */
+    private static Source gum(String clause, String locator, SourceCheck checked, String note) {
+        return add("jcgm-100-2008-" + clause, SourceKind.STANDARD, "JCGM 100, Evaluation of measurement data - "
+                + "Guide to the expression of uncertainty in measurement (GUM)", "2008", locator, checked, note);
+    }
+
     // ---- standards and metrology guides ----
 
     public static final Source ISO_22232_2_STEEL = add("iso-22232-2-steel-reference-values", SourceKind.STANDARD,
@@ -62,28 +68,21 @@ public final class Sources {
                     + "E494-05/-10 scope notes); the table values were transcribed in an earlier reading recorded in "
                     + "the project and not re-read here");
 
-    public static final Source GUM_RECTANGULAR = add("jcgm-100-2008-4.3.7", SourceKind.STANDARD,
-            "JCGM 100, Evaluation of measurement data - Guide to the expression of uncertainty in measurement (GUM)",
-            "2008", "4.3.7 (rectangular distribution: u = a/sqrt(3) for a half-width a)",
-            SourceCheck.READ_SECOND_HAND, "u = a/sqrt(3) read in a metrology guide's worked example of a "
+    public static final Source GUM_RECTANGULAR = gum("4.3.7",
+            "4.3.7 (rectangular distribution: u = a/sqrt(3) for a half-width a)", SourceCheck.READ_SECOND_HAND,
+            "u = a/sqrt(3) read in a metrology guide's worked example of a "
                     + "rectangular distribution (semi-range 1.5 gives 0.87); the clause number was not read in the "
                     + "GUM itself; the variance a^2/3 is also derived in the methods document, section 3.6");
 
-    public static final Source GUM_TRIANGULAR = add("jcgm-100-2008-4.3.9", SourceKind.STANDARD,
-            "JCGM 100, Evaluation of measurement data - Guide to the expression of uncertainty in measurement (GUM)",
-            "2008", "4.3.9 (triangular distribution: u = a/sqrt(6))",
+    public static final Source GUM_TRIANGULAR = gum("4.3.9", "4.3.9 (triangular distribution: u = a/sqrt(6))",
             SourceCheck.DERIVED, "the clause was not read; the variance a^2/6 of the difference of two independent "
                     + "rectangular errors of half-width a/2 is derived in the methods document, section 3.6");
 
-    public static final Source GUM_PROPAGATION = add("jcgm-100-2008-5.1.2", SourceKind.STANDARD,
-            "JCGM 100, Evaluation of measurement data - Guide to the expression of uncertainty in measurement (GUM)",
-            "2008", "5.1.2, equation (10) (law of propagation of uncertainty, uncorrelated inputs)",
-            SourceCheck.DERIVED, "the clause was not read; the first-order propagation for d = v t/(2m) is "
+    public static final Source GUM_PROPAGATION = gum("5.1.2",
+            "5.1.2, equation (10) (law of propagation of uncertainty, uncorrelated inputs)", SourceCheck.DERIVED, "the clause was not read; the first-order propagation for d = v t/(2m) is "
                     + "written out in the methods document, section 6.4");
 
-    public static final Source GUM_EXPANDED = add("jcgm-100-2008-6.2", SourceKind.STANDARD,
-            "JCGM 100, Evaluation of measurement data - Guide to the expression of uncertainty in measurement (GUM)",
-            "2008", "6.2 (expanded uncertainty U = k u_c)",
+    public static final Source GUM_EXPANDED = gum("6.2", "6.2 (expanded uncertainty U = k u_c)",
             SourceCheck.READ_SECOND_HAND, "U = k u_c(y), k typically 2 to 3, about 95 % for k = 2 only when the "
                     + "normal distribution applies: read in NIST Technical Note 1297, section 6, which follows the GUM");
 

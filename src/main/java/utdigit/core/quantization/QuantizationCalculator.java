@@ -7,6 +7,7 @@ import java.util.Optional;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Decibels;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
@@ -368,6 +369,6 @@ public final class QuantizationCalculator {
     }
 
     private static String fmt(double value) {
-        return String.format(Locale.ROOT, "%.4g", value);
+        return MessageNumbers.plain(value, 4);
     }
 }

@@ -1,6 +1,8 @@
 package utdigit.core.sampling;
 
 import utdigit.core.common.Checks;
+import utdigit.core.common.Source;
+import utdigit.core.common.Sources;
 
 /**
  * The digitizer's clock after decimation: the one place where sampling interval and timing
@@ -26,11 +28,6 @@ public record SampleClock(double rawSamplingFrequencyMhz, int decimationFactor, 
 
     public static SampleClock of(double rawSamplingFrequencyMhz, int decimationFactor, DecimationMode mode) {
         return new SampleClock(rawSamplingFrequencyMhz, decimationFactor, mode);
-    }
-
-    /** A clock without decimation. */
-    public static SampleClock undecimated(double samplingFrequencyMhz) {
-        return new SampleClock(samplingFrequencyMhz, 1, DecimationMode.DROP);
     }
 
     /** Effective (stored) sampling frequency fs/m, MHz. */
@@ -81,6 +78,20 @@ public record SampleClock(double rawSamplingFrequencyMhz, int decimationFactor, 
     public double differenceStandardUncertaintyNs() {
         return samplingIntervalNs() / SQRT_6;
     }
+
+    /**
+     * The timing of a reading: one instant read at the nearest sample (rectangular: dt/2, dt/sqrt(12)),
+     * or the difference of two such instants (triangular: dt, dt/sqrt(6)), with the GUM clause that
+     * gives its standard uncertainty.
+     */
+    public Timing timing(boolean difference) {
+        return difference
+                ? new Timing(differenceWorstCaseNs(), differenceStandardUncertaintyNs(), Sources.GUM_TRIANGULAR)
+                : new Timing(singleInstantWorstCaseNs(), singleInstantStandardUncertaintyNs(), Sources.GUM_RECTANGULAR);
+    }
+
+    /** Worst-case error and standard uncertainty of a reading's timing, ns, and their source. */
+    public record Timing(double worstCaseNs, double standardUncertaintyNs, Source source) {}
 
     /**
      * The raw sampling frequency to set, MHz, so that the rate deciding amplitude

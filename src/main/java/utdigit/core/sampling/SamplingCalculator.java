@@ -7,12 +7,14 @@ import java.util.Objects;
 import java.util.Optional;
 import org.apache.commons.math3.special.Erf;
 import utdigit.core.common.CalculationException;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.SearchBudget;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.core.pulse.GaussianPulse;
+import utdigit.core.pulse.Waves;
 
 /**
  * Sampling adequacy of a digitizer setting for a probe (POST /api/sampling-assessments): sampling
@@ -210,7 +212,7 @@ public final class SamplingCalculator {
         Double tfmLateralLossDb = null;
         TfmImage image = null;
         if (tfm.withGrid() || tfm.withLateral()) {
-            double wavelengthMm = TfmGridSampling.wavelengthMm(in.velocityMPerS(), f);
+            double wavelengthMm = Waves.wavelengthMm(in.velocityMPerS(), f);
             references.add(Reference.of("wavelength", Sources.DEFINITIONS));
             if (tfm.withGrid()) {
                 image = in.tfmImage() == null ? TfmImage.RF : in.tfmImage();
@@ -410,7 +412,7 @@ public final class SamplingCalculator {
 
     /** A number for a message: 6 significant digits, no exponent for ordinary magnitudes. */
     private static String num(double value) {
-        return new java.math.BigDecimal(value).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
+        return MessageNumbers.plain(value, 6);
     }
 
     /** The TFM inputs after the checks of their parents. */

@@ -29,18 +29,6 @@ public final class TfmGridSampling {
     public static final int BISECTION_MAX_EVALUATIONS = 120;
 
     /**
-     * Wavelength lambda = v / f in mm, v converted to mm/us (definition).
-     *
-     * @param velocityMPerS v, m/s, > 0
-     * @param frequencyMhz f, MHz, > 0
-     */
-    public static double wavelengthMm(double velocityMPerS, double frequencyMhz) {
-        Checks.positive("velocity_m_per_s", velocityMPerS);
-        Checks.positive("frequency_mhz", frequencyMhz);
-        return Units.mPerSToMmPerUs(velocityMPerS) / frequencyMhz;
-    }
-
-    /**
      * The -6 dB width in depth of a pulse-echo image's response, w = v tau(-6 dB) / 2, mm, with
      * tau the pulse model's -6 dB envelope duration (halved: the depth axis is a round trip).
      * Reference: src/docs/methods.md 3.7 (derived).

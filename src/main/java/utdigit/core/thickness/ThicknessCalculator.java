@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
@@ -92,17 +93,11 @@ public final class ThicknessCalculator {
         double relativeResolutionPercent = thicknessResolutionMm / thicknessMm * 100.0;
         references.add(Reference.of("thickness resolution", Sources.DEFINITIONS));
 
-        double timingStandardUncertaintyNs;
-        double timingWorstCaseErrorNs;
-        if (measurement == Measurement.ECHO_TO_ECHO) {
-            timingStandardUncertaintyNs = clock.differenceStandardUncertaintyNs();
-            timingWorstCaseErrorNs = clock.differenceWorstCaseNs();
-            references.add(Reference.of("timing, echo to echo", Sources.GUM_TRIANGULAR));
-        } else {
-            timingStandardUncertaintyNs = clock.singleInstantStandardUncertaintyNs();
-            timingWorstCaseErrorNs = clock.singleInstantWorstCaseNs();
-            references.add(Reference.of("timing, first echo", Sources.GUM_RECTANGULAR));
-        }
+        boolean echoToEcho = measurement == Measurement.ECHO_TO_ECHO;
+        SampleClock.Timing timing = clock.timing(echoToEcho);
+        double timingStandardUncertaintyNs = timing.standardUncertaintyNs();
+        double timingWorstCaseErrorNs = timing.worstCaseNs();
+        references.add(Reference.of(echoToEcho ? "timing, echo to echo" : "timing, first echo", timing.source()));
 
         // JCGM 100:2008 eq. 10 for d = v t / (2m): c_v = t / (2m), c_t = v / (2m), t = m round trips.
         double measuredTimeUs = echoSpacing * roundTripTimeUs;
@@ -120,10 +115,11 @@ public final class ThicknessCalculator {
                     String.format(Locale.ROOT,
                             "the sampling term dominates standard_uncertainty_mm; its distribution is %s, not"
                                     + " normal, so coverage_factor %s does not give a 95 %% coverage probability:"
-                                    + " for the sampling term alone k u covers %.1f %% and the worst case is"
-                                    + " +/- %.4g mm",
+                                    + " for the sampling term alone k u covers %s %% and the worst case is"
+                                    + " +/- %s mm",
                             measurement == Measurement.ECHO_TO_ECHO ? "triangular" : "rectangular",
-                            number(coverageFactor), coveragePercent, worstCaseMm)));
+                            MessageNumbers.exact(coverageFactor), MessageNumbers.plain(coveragePercent, 3),
+                            MessageNumbers.plain(worstCaseMm, 4))));
         }
 
         Double requiredSamplingFrequencyMhz = null;
@@ -134,9 +130,11 @@ public final class ThicknessCalculator {
             if (thicknessResolutionMm > requiredResolutionMm * (1.0 + REQUIRED_RESOLUTION_RELATIVE_MARGIN)) {
                 warnings.add(Warning.of("RESOLUTION_COARSER_THAN_REQUIRED",
                         String.format(Locale.ROOT,
-                                "thickness_resolution_mm (%.4g mm) is coarser than required_resolution (%.4g mm):"
-                                        + " sampling_frequency_mhz %.6g or more is needed",
-                                thicknessResolutionMm, requiredResolutionMm, requiredSamplingFrequencyMhz)));
+                                "thickness_resolution_mm (%s mm) is coarser than required_resolution (%s mm):"
+                                        + " sampling_frequency_mhz %s or more is needed",
+                                MessageNumbers.plain(thicknessResolutionMm, 4),
+                                MessageNumbers.plain(requiredResolutionMm, 4),
+                                MessageNumbers.plain(requiredSamplingFrequencyMhz, 6))));
             }
         }
 
@@ -223,14 +221,10 @@ public final class ThicknessCalculator {
         if (thicknessMm < axialResolutionMm) {
             warnings.add(Warning.of(THICKNESS_BELOW_AXIAL_RESOLUTION,
                     String.format(Locale.ROOT,
-                            "nominal_thickness (%.4g mm) is below the axial resolution v tau(-6 dB)/2 (%.4g mm,"
+                            "nominal_thickness (%s mm) is below the axial resolution v tau(-6 dB)/2 (%s mm,"
                                     + " model value from frequency_mhz and bandwidth_percent): successive wall echoes,"
                                     + " 2d/v apart, overlap and the reading depends on how the instrument picks them",
-                            thicknessMm, axialResolutionMm)));
+                            MessageNumbers.plain(thicknessMm, 4), MessageNumbers.plain(axialResolutionMm, 4))));
         }
-    }
-
-    private static String number(double value) {
-        return value == StrictMath.rint(value) ? String.valueOf((long) value) : String.valueOf(value);
     }
 }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
@@ -58,17 +59,12 @@ public final class TimeOfFlightCalculator {
         List<Reference> references = new ArrayList<>();
         references.add(Reference.of("time resolution", Sources.DEFINITIONS));
 
-        double timingErrorNs;
-        double timingStandardUncertaintyNs;
-        if (timeReference == TimeReference.LATERAL_WAVE) {
-            timingErrorNs = clock.differenceWorstCaseNs();
-            timingStandardUncertaintyNs = clock.differenceStandardUncertaintyNs();
-            references.add(Reference.of("timing from the lateral wave", Sources.GUM_TRIANGULAR));
-        } else {
-            timingErrorNs = clock.singleInstantWorstCaseNs();
-            timingStandardUncertaintyNs = clock.singleInstantStandardUncertaintyNs();
-            references.add(Reference.of("timing from the trigger", Sources.GUM_RECTANGULAR));
-        }
+        boolean fromLateralWave = timeReference == TimeReference.LATERAL_WAVE;
+        SampleClock.Timing timing = clock.timing(fromLateralWave);
+        double timingErrorNs = timing.worstCaseNs();
+        double timingStandardUncertaintyNs = timing.standardUncertaintyNs();
+        references.add(Reference.of(fromLateralWave ? "timing from the lateral wave" : "timing from the trigger",
+                timing.source()));
 
         double samplingIntervalUs = clock.samplingIntervalUs();
         double soundPathResolutionMm = soundPathResolutionMm(technique, velocityMmPerUs, samplingIntervalUs);
@@ -118,8 +114,9 @@ public final class TimeOfFlightCalculator {
                     references.add(Reference.of("TOFD depth step per sample", Sources.TOFD_GEOMETRY));
                     double ratio = TofdGeometry.depthPerHalfSeparationRatio(halfSeparationMm, depthMm);
                     references.add(Reference.of(String.format(Locale.ROOT,
-                            "probe centre separation error: dd/dS = -S/d = %.4g here, an error e in 2S moves the"
-                                    + " depth by %.4g e", ratio, ratio / 2.0), Sources.TOFD_GEOMETRY));
+                            "probe centre separation error: dd/dS = -S/d = %s here, an error e in 2S moves the"
+                                    + " depth by %s e", MessageNumbers.plain(ratio, 4), MessageNumbers.plain(ratio / 2.0, 4)),
+                            Sources.TOFD_GEOMETRY));
                 }
                 if (pulseDurationUsedUs != null) {
                     deadZoneDepthMm = TofdGeometry.deadZoneDepthMm(halfSeparationMm, pulseDurationUsedUs, velocityMmPerUs);
@@ -249,6 +246,6 @@ public final class TimeOfFlightCalculator {
     }
 
     private static String mm(double lengthMm) {
-        return String.format(Locale.ROOT, "%.4g mm", lengthMm);
+        return MessageNumbers.plain(lengthMm, 4) + " mm";
     }
 }

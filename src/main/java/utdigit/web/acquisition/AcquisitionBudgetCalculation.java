@@ -47,8 +47,7 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
     @Override
     public String pointer(String coreField, AcquisitionBudgetRequest q) {
         if ("velocity_m_per_s".equals(coreField)) {
-            return JsonPointers.property(q.material() != null ? "material"
-                    : q.velocityInPerUs() != null ? "velocity_in_per_us" : "velocity_m_per_s");
+            return Mirrors.velocityPointer(q);
         }
         return JsonPointers.property(inchInputs(q).getOrDefault(coreField, coreField));
     }
@@ -83,15 +82,7 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
         List<String> velocityGiven = given("velocity_m_per_s", q.velocityMPerS(), "velocity_in_per_us",
                 q.velocityInPerUs(), "material", q.material(), "wave_mode", q.waveMode(),
                 "temperature_c", q.temperatureC());
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        if (velocityNeeded) {
-            try {
-                velocity = Mirrors.velocity(errors, q, true);
-            } catch (CalculationException e) {
-                velocityImpossible = e; // a 422 (water with SHEAR) waits for the 400s of the other fields
-            }
-        }
+        VelocitySource velocity = velocityNeeded ? errors.orLater(() -> Mirrors.velocity(errors, q, true)) : null;
         errors.throwIfAny();
         if (!velocityNeeded && !velocityGiven.isEmpty()) {
             String detail = "a velocity applies only with a gate or a max_sound_path given as a length "
@@ -99,9 +90,6 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
                     + "already times";
             throw new InputProblem(ProblemType.INAPPLICABLE_INPUT, detail,
                     velocityGiven.stream().map(f -> FieldError.at(f, detail)).toList());
-        }
-        if (velocityImpossible != null) {
-            throw velocityImpossible;
         }
 
         Double velocityMPerS = velocity == null ? null : velocity.velocityMPerS();

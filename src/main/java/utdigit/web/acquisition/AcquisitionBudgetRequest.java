@@ -8,6 +8,8 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.acquisition.CaptureMode;
 import utdigit.core.materials.WaveMode;
+import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /**
@@ -24,70 +26,49 @@ import utdigit.web.common.VelocityFields;
         + "gate or a max_sound_path given as a length. Phased array: focal_laws; matrix capture: "
         + "fmc_element_count with capture. MB = 10^6 bytes.")
 public record AcquisitionBudgetRequest(
-        @Schema(description = "The converter's raw sampling frequency fs, MHz (> 0, <= 100000)", format = "double",
-                example = "100", exclusiveMinimumValue = 0, maximum = "100000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @Schema(description = "The converter's raw sampling frequency fs, MHz (> 0, <= 100000)", example = "100")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "Integer m by which fs is divided before storage: the stored rate is fs/m "
-                + "(integer 1 to 65536); default 1", format = "int32", example = "1", minimum = "1",
-                maximum = "65536")
+                + "(integer 1 to 65536); default 1", example = "1")
         @Min(1) @Max(65536)
         Integer decimationFactor,
 
         @Schema(description = "Converter resolution, bits (integer 1 to 32); each sample is counted in whole "
-                + "bytes, ceil(bits/8)", format = "int32", example = "8", minimum = "1", maximum = "32")
-        @NotNull(message = "is required") @Min(1) @Max(32)
+                + "bytes, ceil(bits/8)", example = "8")
+        @NotNull(message = InputMessages.REQUIRED) @Min(1) @Max(32)
         Integer bitDepth,
 
         @Schema(description = "Recorded gate length as a time, us (> 0, <= 100000); or give gate_length_mm / "
-                + "gate_length_in", format = "double", example = "20", exclusiveMinimumValue = 0,
-                maximum = "100000")
+                + "gate_length_in", example = "20")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double gateLengthUs,
 
         @Schema(description = "Recorded gate as a pulse-echo sound path in the part, mm (> 0, <= 100000); the "
-                + "time is 2 L / v; needs a velocity", format = "double", example = "50", exclusiveMinimumValue = 0,
-                maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "time is 2 L / v; needs a velocity", example = "50")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double gateLengthMm,
 
         @Schema(description = "Recorded gate as a pulse-echo sound path in the part, in (> 0, at most 100 m); "
-                + "needs a velocity", format = "double", example = "2", exclusiveMinimumValue = 0)
+                + "needs a velocity", example = "2")
         @DecimalMin(value = "0", inclusive = false)
         Double gateLengthIn,
 
-        @Schema(description = "Sound velocity in the part, m/s (100 to 20000); for gate_length_mm/_in and "
-                + "max_sound_path_mm/_in", format = "double", example = "5920", minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity in the part, in/us (equivalent of 100 to 20000 m/s)",
-                format = "double", example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials) whose velocity is used",
-                example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "Phased array: focal laws per scan position summed over all groups, one firing and "
                 + "one A-scan each (integer 1 to 65536); default 1. Not with fmc_element_count",
-                format = "int32", example = "120", minimum = "1", maximum = "65536")
+                example = "120")
         @Min(1) @Max(65536)
         Integer focalLaws,
 
         @Schema(description = "Matrix capture: number of elements n (integer 1 to 65536); FMC fires n times and "
-                + "records n^2 A-scans, HMC n firings and n(n+1)/2 A-scans", format = "int32", example = "64",
-                minimum = "1", maximum = "65536")
+                + "records n^2 A-scans, HMC n firings and n(n+1)/2 A-scans", example = "64")
         @Min(1) @Max(65536)
         Integer fmcElementCount,
 
@@ -96,74 +77,68 @@ public record AcquisitionBudgetRequest(
         CaptureMode capture,
 
         @Schema(description = "Firings averaged into one recorded A-scan (integer 1 to 65536); default 1. Costs "
-                + "scan speed, not data", format = "int32", example = "1", minimum = "1", maximum = "65536")
+                + "scan speed, not data", example = "1")
         @Min(1) @Max(65536)
         Integer averaging,
 
         @Schema(description = "Distance between recorded scan positions, mm (> 0, <= 100000); required: give "
-                + "scan_increment_mm or scan_increment_in", format = "double", example = "1",
-                exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "scan_increment_mm or scan_increment_in", example = "1")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double scanIncrementMm,
 
-        @Schema(description = "Distance between recorded scan positions, in (> 0, at most 100 m)", format = "double",
-                example = "0.04", exclusiveMinimumValue = 0)
+        @Schema(description = "Distance between recorded scan positions, in (> 0, at most 100 m)", example = "0.04")
         @DecimalMin(value = "0", inclusive = false)
         Double scanIncrementIn,
 
         @Schema(description = "Scan length of one file, mm (> 0, <= 100000); gives file_size_megabytes",
-                format = "double", example = "2000", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "2000")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double scanLengthMm,
 
-        @Schema(description = "Scan length of one file, in (> 0, at most 100 m)", format = "double", example = "80",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Scan length of one file, in (> 0, at most 100 m)", example = "80")
         @DecimalMin(value = "0", inclusive = false)
         Double scanLengthIn,
 
         @Schema(description = "The instrument's firing rate, all firings counted (every focal law or element), "
-                + "Hz (> 0, <= 1000000)", format = "double", example = "10000", exclusiveMinimumValue = 0,
-                maximum = "1000000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000000")
+                + "Hz (> 0, <= 1000000)", example = "10000")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000000")
         Double pulseRepetitionFrequencyHz,
 
         @Schema(description = "Planned scan speed, mm/s (> 0, <= 100000); a speed above the PRF-limited "
-                + "maximum is a warning. The data rate is given at this speed", format = "double", example = "50",
-                exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "maximum is a warning. The data rate is given at this speed", example = "50")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double plannedScanSpeedMmPerS,
 
         @Schema(description = "Planned scan speed, in/s (1 in/s = 25.4 mm/s; > 0, at most 3937 in/s); or give "
-                + "planned_scan_speed_mm_per_s", format = "double", example = "2", exclusiveMinimumValue = 0)
+                + "planned_scan_speed_mm_per_s", example = "2")
         @DecimalMin(value = "0", inclusive = false)
         Double plannedScanSpeedInPerS,
 
         @Schema(description = "Longest round trip of a firing, summed over all media (water, wedge, part), us "
                 + "(> 0, <= 100000); gives max_prf_without_wraparound_hz. Or give max_sound_path_mm/_in",
-                format = "double", example = "40", exclusiveMinimumValue = 0, maximum = "100000")
+                example = "40")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double maxRoundTripUs,
 
         @Schema(description = "Longest one-way sound path in the part, mm (> 0, <= 100000); round trip 2 L / v; "
-                + "needs a velocity", format = "double", example = "100", exclusiveMinimumValue = 0,
-                maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "needs a velocity", example = "100")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double maxSoundPathMm,
 
         @Schema(description = "Longest one-way sound path in the part, in (> 0, at most 100 m); needs a velocity",
-                format = "double", example = "4", exclusiveMinimumValue = 0)
+                example = "4")
         @DecimalMin(value = "0", inclusive = false)
         Double maxSoundPathIn,
 
         @Schema(description = "Factor q on the round trip for reverberation, PRF_max = 1/(q t_rt) (1 to 100); "
                 + "default 1, the bare physical limit (a warning says so). Only with a round trip",
-                format = "double", example = "2", minimum = "1", maximum = "100")
+                example = "2")
         @DecimalMin("1") @DecimalMax("100")
         Double wraparoundDecayFactor,
 
         @Schema(description = "Largest file wanted, MB of 10^6 bytes (> 0, <= 10^9); gives "
                 + "max_scan_length_per_file_mm, and a warning when file_size_megabytes is above it",
-                format = "double", example = "2000", exclusiveMinimumValue = 0, maximum = "1000000000")
+                example = "2000")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000000000")
         Double fileSizeLimitMegabytes) implements VelocityFields {
 }

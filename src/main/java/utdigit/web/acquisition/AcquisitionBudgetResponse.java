@@ -15,52 +15,47 @@ import utdigit.web.common.VelocitySourceView;
         + "inputs were not given are omitted.")
 record AcquisitionBudgetResponse(
         @Schema(description = "Samples in one A-scan, ceil(gate x fs/m) (an exact product is not rounded up)",
-                format = "int64", example = "2000")
+                example = "2000")
         long samplesPerAScan,
         @Schema(description = "Bytes stored per sample, ceil(bit_depth/8); instruments that pack samples store "
-                + "less", format = "int32", example = "1")
+                + "less", example = "1")
         int bytesPerSample,
-        @Schema(description = "Bytes per A-scan, samples x bytes per sample", format = "int64", example = "2000")
+        @Schema(description = "Bytes per A-scan, samples x bytes per sample", example = "2000")
         long bytesPerAScan,
         @Schema(description = "Firings per scan position, averaging excluded: focal laws, or n for FMC and HMC",
-                format = "int64", example = "64")
+                example = "64")
         long firingsPerPosition,
         @Schema(description = "A-scans recorded per scan position: focal laws, n^2 for FMC, n(n+1)/2 for HMC",
-                format = "int64", example = "4096")
+                example = "4096")
         long aScansPerPosition,
-        @Schema(description = "Bytes per scan position, bytes per A-scan x A-scans per position", format = "int64",
-                example = "8192000")
+        @Schema(description = "Bytes per scan position, bytes per A-scan x A-scans per position", example = "8192000")
         long bytesPerPosition,
-        @Schema(description = "Data per metre of scan, MB (10^6 bytes) per metre", format = "double",
-                example = "8192")
+        @Schema(description = "Data per metre of scan, MB (10^6 bytes) per metre", example = "8192")
         double megabytesPerMetre,
-        @Schema(description = "Data over scan_length, MB (10^6 bytes); only with scan_length_mm/_in",
-                format = "double", example = "16384")
+        @Schema(description = "Data over scan_length, MB (10^6 bytes); only with scan_length_mm/_in", example = "16384")
         Double fileSizeMegabytes,
         @Schema(description = "Highest scan speed the PRF allows, PRF x increment / (firings x averaging), mm/s",
-                format = "double", example = "156.25")
+                example = "156.25")
         double maxScanSpeedMmPerS,
         @Schema(description = "Data rate at the planned speed when given, else at the maximum, MB/s (10^6 bytes "
-                + "per second)", format = "double", example = "1280")
+                + "per second)", example = "1280")
         double dataRateMegabytesPerS,
         @Schema(description = "Highest PRF that keeps the echoes of one firing out of the next, 1/(q t_rt), Hz; "
-                + "only with max_round_trip_us or max_sound_path_mm/_in", format = "double", example = "14800")
+                + "only with max_round_trip_us or max_sound_path_mm/_in", example = "14800")
         Double maxPrfWithoutWraparoundHz,
         @Schema(description = "Scan length that fills file_size_limit_megabytes, mm; only with that limit",
-                format = "double", example = "244.140625")
+                example = "244.140625")
         Double maxScanLengthPerFileMm,
-        @Schema(description = "Stored sampling frequency fs/m, MHz", format = "double", example = "100")
+        @Schema(description = "Stored sampling frequency fs/m, MHz", example = "100")
         double effectiveSamplingFrequencyMhz,
-        @Schema(description = "The gate as a time, us (2 L / v when given as a sound path)", format = "double",
-                example = "20")
+        @Schema(description = "The gate as a time, us (2 L / v when given as a sound path)", example = "20")
         double gateLengthUsedUs,
-        @Schema(description = "Pulse repetition period 1/PRF, us", format = "double", example = "100")
+        @Schema(description = "Pulse repetition period 1/PRF, us", example = "100")
         double pulseRepetitionPeriodUs,
-        @Schema(description = "The scan speed data_rate_megabytes_per_s is given at, mm/s", format = "double",
-                example = "156.25")
+        @Schema(description = "The scan speed data_rate_megabytes_per_s is given at, mm/s", example = "156.25")
         double dataRateScanSpeedMmPerS,
         @Schema(description = "The round trip used for the wrap-around limit, us (2 L / v when given as a sound "
-                + "path); only with a round trip", format = "double", example = "33.78")
+                + "path); only with a round trip", example = "33.78")
         Double maxRoundTripUsedUs,
         @Schema(description = "Each figure compared with a tolerance or requirement of the request: "
                 + "planned_scan_speed_mm_per_s at most max_scan_speed_mm_per_s, pulse_repetition_frequency_hz at "

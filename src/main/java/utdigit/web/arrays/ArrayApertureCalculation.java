@@ -4,7 +4,6 @@ import org.springframework.stereotype.Component;
 import utdigit.core.arrays.ArrayApertureCalculator;
 import utdigit.core.arrays.ArrayApertureInput;
 import utdigit.core.arrays.ArrayApertureResult;
-import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
@@ -33,17 +32,8 @@ class ArrayApertureCalculation implements Calculation<ArrayApertureRequest> {
         Double pitchMm = Mirrors.lengthMm(errors, "element_pitch", q.elementPitchMm(), q.elementPitchIn(), true);
         Double apertureMm = Mirrors.lengthMm(errors, "active_aperture", q.activeApertureMm(), q.activeApertureIn(), false);
         Double lengthMm = Mirrors.lengthMm(errors, "element_length", q.elementLengthMm(), q.elementLengthIn(), false);
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        try {
-            velocity = Mirrors.velocity(errors, q, true);
-        } catch (CalculationException e) {
-            velocityImpossible = e;
-        }
+        VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         errors.throwIfAny();
-        if (velocityImpossible != null) {
-            throw velocityImpossible;
-        }
         ArrayApertureResult r = ArrayApertureCalculator.compute(new ArrayApertureInput(q.frequencyMhz(),
                 velocity.velocityMPerS(), pitchMm, q.activeElements(), apertureMm, lengthMm, q.maxSteeringAngleDeg()));
         ArrayApertureRequest inputs = new ArrayApertureRequest(q.frequencyMhz(), velocity.velocityMPerS(), null, null,

@@ -7,6 +7,8 @@ import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
+import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/array-apertures. */
@@ -16,71 +18,50 @@ import utdigit.web.common.VelocityFields;
         + "velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + temperature_c for water). Each length "
         + "once: _mm or _in. The active aperture as active_elements (n x pitch) or active_aperture, not both.")
 public record ArrayApertureRequest(
-        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", format = "double", example = "5",
-                exclusiveMinimumValue = 0, maximum = "1000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
-        @Schema(description = "Sound velocity of the medium where the beam is steered, m/s (100 to 20000)",
-                format = "double", example = "5920", minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity, in/us (equivalent of 100 to 20000 m/s)", format = "double",
-                example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "Element pitch, centre to centre, mm (> 0, <= 100000); required as _mm or _in",
-                format = "double", example = "0.6", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "0.6")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementPitchMm,
 
-        @Schema(description = "Element pitch, in (> 0, at most 100 m)", format = "double", example = "0.024",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Element pitch, in (> 0, at most 100 m)", example = "0.024")
         @DecimalMin(value = "0", inclusive = false)
         Double elementPitchIn,
 
         @Schema(description = "Elements fired together (integer 1 to 65536): the active aperture is active_elements x "
-                + "element_pitch", format = "int32", example = "16", minimum = "1", maximum = "65536")
+                + "element_pitch", example = "16")
         @Min(1) @Max(65536)
         Integer activeElements,
 
         @Schema(description = "Active aperture length in the steering plane, mm (> 0, <= 100000; not below one "
-                + "pitch); instead of active_elements", format = "double", example = "9.6", exclusiveMinimumValue = 0,
-                maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "pitch); instead of active_elements", example = "9.6")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double activeApertureMm,
 
-        @Schema(description = "Active aperture length, in (> 0, at most 100 m)", format = "double", example = "0.378",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Active aperture length, in (> 0, at most 100 m)", example = "0.378")
         @DecimalMin(value = "0", inclusive = false)
         Double activeApertureIn,
 
         @Schema(description = "Element length in the passive plane (the array's width), mm (> 0, <= 100000); gives "
-                + "the passive-plane near field and beam spread", format = "double", example = "10",
-                exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "the passive-plane near field and beam spread", example = "10")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementLengthMm,
 
-        @Schema(description = "Element length in the passive plane, in (> 0, at most 100 m)", format = "double",
-                example = "0.394", exclusiveMinimumValue = 0)
+        @Schema(description = "Element length in the passive plane, in (> 0, at most 100 m)", example = "0.394")
         @DecimalMin(value = "0", inclusive = false)
         Double elementLengthIn,
 
         @Schema(description = "Largest steering angle used, either side of the aperture's normal, deg (0 to below "
-                + "90); default 0", format = "double", example = "45", minimum = "0", exclusiveMaximumValue = 90)
+                + "90); default 0", example = "45")
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
         Double maxSteeringAngleDeg) implements VelocityFields {
 }

@@ -13,34 +13,33 @@ import utdigit.web.common.VelocitySourceView;
         + "against grating lobes up to the largest steering angle. Fields whose optional inputs were not given are "
         + "omitted; a value that cannot exist is null with a warning.")
 record ArrayApertureResponse(
-        @Schema(description = "Wavelength in the medium of the steering, v / f, mm", format = "double",
-                example = "1.184")
+        @Schema(description = "Wavelength in the medium of the steering, v / f, mm", example = "1.184")
         double wavelengthMm,
         @Schema(description = "Active aperture L used: active_elements x element_pitch, or as given, mm",
-                format = "double", example = "9.6")
+                example = "9.6")
         Double activeApertureMm,
-        @Schema(description = "Steering plane: near field L^2 / (4 lambda), mm", format = "double", example = "19.46")
+        @Schema(description = "Steering plane: near field L^2 / (4 lambda), mm", example = "19.46")
         Double nearFieldLengthMm,
         @Schema(description = "Steering plane, unsteered beam: pulse-echo -6 dB half-angle where (sin x / x)^2 falls "
                 + "to -6 dB, x = pi L sin(theta) / lambda, deg; null when the aperture is too short",
-                format = "double", example = "3.13", types = {"number", "null"})
+                example = "3.13", types = {"number", "null"})
         Optional<Double> beamSpread6dbDeg,
         @Schema(description = "Steering plane, unsteered beam: pulse-echo -20 dB half-angle, deg; null when the "
-                + "aperture is too short", format = "double", example = "5.2", types = {"number", "null"})
+                + "aperture is too short", example = "5.2", types = {"number", "null"})
         Optional<Double> beamSpread20dbDeg,
         @Schema(description = "Steering plane, unsteered beam: first null, sin(theta) = lambda / L, deg; null when "
-                + "the aperture is too short", format = "double", example = "7.09", types = {"number", "null"})
+                + "the aperture is too short", example = "7.09", types = {"number", "null"})
         Optional<Double> beamSpreadNullDeg,
         @Schema(description = "Passive plane: near field W^2 / (4 lambda) of the element length W, mm",
-                format = "double", example = "21.1")
+                example = "21.1")
         Double passiveNearFieldLengthMm,
         @Schema(description = "Passive plane: pulse-echo -6 dB half-angle, deg; null when the element is too short",
-                format = "double", example = "3.0", types = {"number", "null"})
+                example = "3.0", types = {"number", "null"})
         Optional<Double> passiveBeamSpread6dbDeg,
-        @Schema(description = "Element pitch over wavelength, p / lambda", format = "double", example = "0.507")
+        @Schema(description = "Element pitch over wavelength, p / lambda", example = "0.507")
         double pitchToWavelengthRatio,
         @Schema(description = "Largest pitch with no grating lobe in the medium up to the largest steering angle, "
-                + "lambda / (1 + sin(theta_max)), mm", format = "double", example = "0.694")
+                + "lambda / (1 + sin(theta_max)), mm", example = "0.694")
         double maxGratingLobeFreePitchMm,
         @Schema(description = "Whether element_pitch is below max_grating_lobe_free_pitch_mm")
         boolean gratingLobeFree,

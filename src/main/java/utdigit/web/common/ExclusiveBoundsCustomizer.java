@@ -122,9 +122,15 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
             if (min == null) {
                 min = field(type, rc, DecimalMin.class);
             }
+            if (min == null) {
+                min = composed(rc, DecimalMin.class);
+            }
             DecimalMax max = rc.getAccessor().getAnnotation(DecimalMax.class);
             if (max == null) {
                 max = field(type, rc, DecimalMax.class);
+            }
+            if (max == null) {
+                max = composed(rc, DecimalMax.class);
             }
             if (min != null && !min.inclusive()) {
                 property.setMinimum(null);
@@ -135,6 +141,17 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
                 property.setExclusiveMaximumValue(new BigDecimal(max.value()));
             }
         }
+    }
+
+    /** A bound of a composed constraint on the component (the velocity fields' annotations of VelocityFields). */
+    private static <A extends java.lang.annotation.Annotation> A composed(RecordComponent rc, Class<A> a) {
+        for (var c : rc.getAccessor().getAnnotations()) {
+            A bound = c.annotationType().getAnnotation(a);
+            if (bound != null) {
+                return bound;
+            }
+        }
+        return null;
     }
 
     private static <A extends java.lang.annotation.Annotation> A field(Class<?> type, RecordComponent rc, Class<A> a) {

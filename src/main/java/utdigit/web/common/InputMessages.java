@@ -1,8 +1,11 @@
 package utdigit.web.common;
 
 /** The fixed wording of input problems, in the caller's terms. */
-final class InputMessages {
+public final class InputMessages {
     private InputMessages() {}
+
+    /** A required property is missing (or null): the message of every request's {@code @NotNull}. */
+    public static final String REQUIRED = "is required";
 
     static final String FINITE_NUMBER = "must be a finite JSON number within the range of a double (not quoted, not NaN or Infinity, "
             + "not beyond about 1.8e308, not a non-zero value so small that it would read as 0)";

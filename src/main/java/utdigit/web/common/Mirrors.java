@@ -19,12 +19,15 @@ import utdigit.core.materials.WaveMode;
 public final class Mirrors {
     private Mirrors() {}
 
-    /** Lowest velocity accepted, m/s (the contract's ranges, README and OpenAPI). */
-    public static final double MIN_VELOCITY_M_PER_S = 100.0;
-    /** Highest velocity accepted, m/s. */
-    public static final double MAX_VELOCITY_M_PER_S = 20_000.0;
-    /** Longest length accepted, mm (100 m). */
-    public static final double MAX_LENGTH_MM = 100_000.0;
+    /**
+     * Longest length accepted, mm (100 m), as the requests' {@code @DecimalMax} of every length in mm
+     * (and speed in mm/s) writes it; the inch forms are checked against it after conversion.
+     */
+    public static final String MAX_MM = "100000";
+    /** The same, as a number. */
+    public static final double MAX_LENGTH_MM = Double.parseDouble(MAX_MM);
+    /** The longest length in inches, as messages write it. */
+    private static final String MAX_LENGTH_IN = MessageNumbers.exact(MAX_LENGTH_MM / Units.MM_PER_IN);
 
     /**
      * The length in mm of the input {@code base} given as {@code base_mm} or {@code base_in}, or null
@@ -34,8 +37,7 @@ public final class Mirrors {
         String mmName = base + "_mm";
         String inName = base + "_in";
         if (mm != null && in != null) {
-            String detail = "give " + base + " once: " + mmName + " or " + inName + ", not both";
-            errors.add(mmName, detail).add(inName, detail);
+            errors.notBoth(base, mmName, inName);
             return null;
         }
         if (mm == null && in == null) {
@@ -49,7 +51,7 @@ public final class Mirrors {
         }
         double converted = Units.inToMm(in);
         if (!(converted > 0 && converted <= MAX_LENGTH_MM)) {
-            errors.add(inName, "must be above 0 and at most " + (MAX_LENGTH_MM / Units.MM_PER_IN) + " in (100 m)");
+            errors.add(inName, "must be above 0 and at most " + MAX_LENGTH_IN + " in (100 m)");
             return null;
         }
         return converted;
@@ -63,8 +65,7 @@ public final class Mirrors {
         String mmName = base + "_mm_per_s";
         String inName = base + "_in_per_s";
         if (mmPerS != null && inPerS != null) {
-            String detail = "give " + base + " once: " + mmName + " or " + inName + ", not both";
-            errors.add(mmName, detail).add(inName, detail);
+            errors.notBoth(base, mmName, inName);
             return null;
         }
         if (inPerS == null) {
@@ -72,7 +73,7 @@ public final class Mirrors {
         }
         double converted = Units.inToMm(inPerS);
         if (!(converted > 0 && converted <= MAX_LENGTH_MM)) {
-            errors.add(inName, "must be above 0 and at most " + (MAX_LENGTH_MM / Units.MM_PER_IN) + " in/s");
+            errors.add(inName, "must be above 0 and at most " + MAX_LENGTH_IN + " in/s");
             return null;
         }
         return converted;
@@ -154,10 +155,11 @@ public final class Mirrors {
         }
         if (f.velocityInPerUs() != null) {
             double mPerS = Units.inPerUsToMPerS(f.velocityInPerUs());
-            if (!(mPerS >= MIN_VELOCITY_M_PER_S && mPerS <= MAX_VELOCITY_M_PER_S)) {
-                errors.add("velocity_in_per_us", "must correspond to 100 to 20000 m/s ("
-                        + Units.mPerSToInPerUs(MIN_VELOCITY_M_PER_S) + " to "
-                        + Units.mPerSToInPerUs(MAX_VELOCITY_M_PER_S) + " in/us)");
+            if (!(mPerS >= VelocityFields.MIN_M_PER_S && mPerS <= VelocityFields.MAX_M_PER_S)) {
+                errors.add("velocity_in_per_us", "must correspond to " + VelocityFields.MIN_M_PER_S + " to "
+                        + VelocityFields.MAX_M_PER_S + " m/s ("
+                        + MessageNumbers.exact(Units.mPerSToInPerUs(VelocityFields.MIN_M_PER_S)) + " to "
+                        + MessageNumbers.exact(Units.mPerSToInPerUs(VelocityFields.MAX_M_PER_S)) + " in/us)");
                 return null;
             }
             return VelocitySource.caller(mPerS);

@@ -17,11 +17,11 @@ import utdigit.core.rules.Comparison;
 public record ToleranceCheck(
         @Schema(description = "The answer's field compared (or the request's, for a planned value)",
                 example = "pulse_amplitude_loss_db") String figure,
-        @Schema(description = "Its value, in the unit its name gives", format = "double", example = "1.9525")
+        @Schema(description = "Its value, in the unit its name gives", example = "1.9525")
         double value,
         @Schema(description = "AT_MOST or AT_LEAST") Comparison comparison,
         @Schema(description = "The limit, in the same unit (a tolerance on a signed error below the reading is "
-                + "its negative)", format = "double", example = "1") double limit,
+                + "its negative)", example = "1") double limit,
         @Schema(description = "The field the limit comes from: a tolerance or requirement of the request, or a "
                 + "figure of the answer", example = "amplitude_tolerance_db") String limitField,
         @Schema(description = "Whether the figure is within the limit") boolean within) {

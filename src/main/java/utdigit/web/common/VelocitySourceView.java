@@ -1,7 +1,7 @@
 package utdigit.web.common;
 
 import io.swagger.v3.oas.annotations.media.Schema;
-import java.util.Locale;
+import utdigit.core.common.MessageNumbers;
 import utdigit.core.materials.UncertaintyKind;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.materials.WaveMode;
@@ -11,23 +11,23 @@ import utdigit.core.materials.WaveMode;
 public record VelocitySourceView(
         @Schema(description = "MATERIAL (built-in or operator material) or CALLER (given in the request)")
         VelocitySource.Kind kind,
-        @Schema(description = "Velocity used, m/s", format = "double", example = "5920")
+        @Schema(description = "Velocity used, m/s", example = "5920")
         double velocityMPerS,
         @Schema(description = "Material id when kind is MATERIAL", example = "carbon-steel")
         String material,
         @Schema(description = "Wave mode when kind is MATERIAL")
         WaveMode waveMode,
-        @Schema(description = "Water temperature used, C", format = "double", example = "20")
+        @Schema(description = "Water temperature used, C", example = "20")
         Double temperatureC,
         @Schema(description = "A built-in material's source id in the reference catalogue (GET /api/references/{id}), "
                 + "an operator material's own source text, or 'caller'", example = "iso-22232-2-steel-reference-values")
         String source,
-        @Schema(description = "The material's stated +/- value of this velocity, m/s", format = "double", example = "50")
+        @Schema(description = "The material's stated +/- value of this velocity, m/s", example = "50")
         Double uncertaintyMPerS,
         @Schema(description = "How that value reads: HALF_WIDTH or STANDARD")
         UncertaintyKind uncertaintyKind,
         @Schema(description = "The standard uncertainty it gives, m/s: a half-width a as a/sqrt(3) (rectangular, "
-                + "JCGM 100:2008 4.3.7), a standard uncertainty as it is", format = "double", example = "28.87")
+                + "JCGM 100:2008 4.3.7), a standard uncertainty as it is", example = "28.87")
         Double standardUncertaintyMPerS,
         @Schema(description = "Present when this answer used the material's own uncertainty because the request "
                 + "gave none: says so and how")
@@ -51,17 +51,12 @@ public record VelocitySourceView(
             return plain;
         }
         String how = v.uncertaintyKind() == UncertaintyKind.HALF_WIDTH
-                ? String.format(Locale.ROOT, "the material's half-width +/- %s m/s as rectangular: u = %s/sqrt(3) = %.4g m/s"
-                        + " (JCGM 100:2008 4.3.7)", num(v.statedUncertaintyMPerS()), num(v.statedUncertaintyMPerS()),
-                        v.standardUncertaintyMPerS())
-                : String.format(Locale.ROOT, "the material's standard uncertainty %s m/s", num(v.standardUncertaintyMPerS()));
+                ? "the material's half-width +/- " + MessageNumbers.exact(v.statedUncertaintyMPerS())
+                        + " m/s as rectangular: u = " + MessageNumbers.exact(v.statedUncertaintyMPerS()) + "/sqrt(3) = "
+                        + MessageNumbers.plain(v.standardUncertaintyMPerS(), 4) + " m/s (JCGM 100:2008 4.3.7)"
+                : "the material's standard uncertainty " + MessageNumbers.exact(v.standardUncertaintyMPerS()) + " m/s";
         return new VelocitySourceView(plain.kind(), plain.velocityMPerS(), plain.material(), plain.waveMode(),
                 plain.temperatureC(), plain.source(), plain.uncertaintyMPerS(), plain.uncertaintyKind(),
                 plain.standardUncertaintyMPerS(), how + ", used as velocity_uncertainty_m_per_s: none was given",
                 plain.caution());
-    }
-
-    private static String num(double value) {
-        return value == StrictMath.rint(value) ? String.valueOf((long) value) : String.valueOf(value);
-    }
-}
+    }}

@@ -1,7 +1,6 @@
 package utdigit.web.coverage;
 
 import org.springframework.stereotype.Component;
-import utdigit.core.common.CalculationException;
 import utdigit.core.coverage.ScanCoverageCalculator;
 import utdigit.core.coverage.ScanCoverageInput;
 import utdigit.core.coverage.ScanCoverageResult;
@@ -36,17 +35,8 @@ class ScanCoverageCalculation implements Calculation<ScanCoverageRequest> {
         Double pathMm = Mirrors.lengthMm(errors, "sound_path", q.soundPathMm(), q.soundPathIn(), false);
         Double incrementMm = Mirrors.lengthMm(errors, "scan_increment", q.scanIncrementMm(), q.scanIncrementIn(), false);
         Double indexMm = Mirrors.lengthMm(errors, "index_step", q.indexStepMm(), q.indexStepIn(), false);
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        try {
-            velocity = Mirrors.velocity(errors, q, false);
-        } catch (CalculationException e) {
-            velocityImpossible = e;
-        }
+        VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, false));
         errors.throwIfAny();
-        if (velocityImpossible != null) {
-            throw velocityImpossible;
-        }
         Double velocityMPerS = velocity == null ? null : velocity.velocityMPerS();
         ScanCoverageResult r = ScanCoverageCalculator.compute(new ScanCoverageInput(widthMm, q.frequencyMhz(),
                 velocityMPerS, diameterMm, pathMm, incrementMm, indexMm, q.angularStepDeg(), q.amplitudeToleranceDb()));

@@ -4,6 +4,7 @@ import io.swagger.v3.oas.annotations.media.Schema;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import utdigit.core.materials.WaveMode;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/scan-coverages. */
@@ -14,90 +15,67 @@ import utdigit.web.common.VelocityFields;
         + "temperature_c for water). angular_step_deg needs sound_path.")
 public record ScanCoverageRequest(
         @Schema(description = "Pulse-echo -6 dB beam width at the reflector's sound path, mm (> 0, <= 100000)",
-                format = "double", example = "8", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "8")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double beamWidth6dbMm,
 
-        @Schema(description = "Pulse-echo -6 dB beam width, in (> 0, at most 100 m)", format = "double",
-                example = "0.315", exclusiveMinimumValue = 0)
+        @Schema(description = "Pulse-echo -6 dB beam width, in (> 0, at most 100 m)", example = "0.315")
         @DecimalMin(value = "0", inclusive = false)
         Double beamWidth6dbIn,
 
-        @Schema(description = "Round probe: nominal frequency, MHz (> 0, <= 1000)", format = "double", example = "5",
-                exclusiveMinimumValue = 0, maximum = "1000")
+        @Schema(description = "Round probe: nominal frequency, MHz (> 0, <= 1000)", example = "5")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
-        @Schema(description = "Round probe: sound velocity of the wave mode in the part, m/s (100 to 20000)",
-                format = "double", example = "5920", minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
-        @Schema(description = "Round probe: sound velocity, in/us (equivalent of 100 to 20000 m/s)", format = "double",
-                example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Round probe: built-in material id (GET /api/materials)", example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
-
-        @Schema(description = "Round probe: element diameter, mm (> 0, <= 100000)", format = "double", example = "10",
-                exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @Schema(description = "Round probe: element diameter, mm (> 0, <= 100000)", example = "10")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementDiameterMm,
 
-        @Schema(description = "Round probe: element diameter, in (> 0, at most 100 m)", format = "double",
-                example = "0.375", exclusiveMinimumValue = 0)
+        @Schema(description = "Round probe: element diameter, in (> 0, at most 100 m)", example = "0.375")
         @DecimalMin(value = "0", inclusive = false)
         Double elementDiameterIn,
 
         @Schema(description = "Sound path from the probe to the reflector, mm (> 0, <= 100000): the round probe's "
                 + "beam width is taken there, and an angular step moves the beam sound_path x step there",
-                format = "double", example = "60", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "60")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double soundPathMm,
 
-        @Schema(description = "Sound path to the reflector, in (> 0, at most 100 m)", format = "double",
-                example = "2.36", exclusiveMinimumValue = 0)
+        @Schema(description = "Sound path to the reflector, in (> 0, at most 100 m)", example = "2.36")
         @DecimalMin(value = "0", inclusive = false)
         Double soundPathIn,
 
         @Schema(description = "Distance between neighbouring positions along the scan (encoder increment), mm "
-                + "(> 0, <= 100000)", format = "double", example = "1", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "(> 0, <= 100000)", example = "1")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double scanIncrementMm,
 
-        @Schema(description = "Scan increment, in (> 0, at most 100 m)", format = "double", example = "0.04",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Scan increment, in (> 0, at most 100 m)", example = "0.04")
         @DecimalMin(value = "0", inclusive = false)
         Double scanIncrementIn,
 
         @Schema(description = "Distance between neighbouring scan lines (index offset), mm (> 0, <= 100000)",
-                format = "double", example = "4", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "4")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double indexStepMm,
 
-        @Schema(description = "Index step, in (> 0, at most 100 m)", format = "double", example = "0.16",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Index step, in (> 0, at most 100 m)", example = "0.16")
         @DecimalMin(value = "0", inclusive = false)
         Double indexStepIn,
 
         @Schema(description = "Angle between neighbouring beams of a sector scan, deg (above 0, below 90); needs "
-                + "sound_path", format = "double", example = "1", exclusiveMinimumValue = 0, exclusiveMaximumValue = 90)
+                + "sound_path", example = "1")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "90", inclusive = false)
         Double angularStepDeg,
 
         @Schema(description = "Largest acceptable amplitude loss between positions, dB (above 0, at most 40); gives "
-                + "the largest steps and whether each step is within it", format = "double", example = "1",
-                exclusiveMinimumValue = 0, maximum = "40")
+                + "the largest steps and whether each step is within it", example = "1")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("40")
         Double amplitudeToleranceDb) implements VelocityFields {
 }

@@ -15,23 +15,23 @@ import utdigit.web.common.VelocitySourceView;
         + "cannot be known (the reflector inside the probe's near field) is null with a warning.")
 record ScanCoverageResponse(
         @Schema(description = "Pulse-echo -6 dB beam width used: as given, or 2 z tan(theta_6dB) of the round probe "
-                + "(far field only; null inside the near field), mm", format = "double", example = "8",
+                + "(far field only; null inside the near field), mm", example = "8",
                 types = {"number", "null"})
         Optional<Double> beamWidth6dbMm,
         @Schema(description = "With scan_increment: worst loss midway between positions, 6 (dx / w)^2, dB",
-                format = "double", example = "0.094", types = {"number", "null"})
+                example = "0.094", types = {"number", "null"})
         Optional<Double> scanIncrementLossDb,
         @Schema(description = "With index_step: worst loss midway between scan lines, 6 (dx / w)^2, dB",
-                format = "double", example = "1.5", types = {"number", "null"})
+                example = "1.5", types = {"number", "null"})
         Optional<Double> indexStepLossDb,
         @Schema(description = "With angular_step_deg: worst loss midway between beams, 6 (z dtheta / w)^2, dB",
-                format = "double", example = "1.03", types = {"number", "null"})
+                example = "1.03", types = {"number", "null"})
         Optional<Double> angularStepLossDb,
         @Schema(description = "With amplitude_tolerance_db: largest scan increment or index step, w sqrt(X / 6), mm",
-                format = "double", example = "3.27", types = {"number", "null"})
+                example = "3.27", types = {"number", "null"})
         Optional<Double> maxStepMm,
         @Schema(description = "With amplitude_tolerance_db and sound_path: largest angular step, w sqrt(X / 6) / z "
-                + "in degrees", format = "double", example = "3.1", types = {"number", "null"})
+                + "in degrees", example = "3.1", types = {"number", "null"})
         Optional<Double> maxAngularStepDeg,
         @Schema(description = "With scan_increment and amplitude_tolerance_db: whether its loss is at most the "
                 + "tolerance", types = {"boolean", "null"})

@@ -9,29 +9,29 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.quantization.CodeMapping;
 import utdigit.core.quantization.DigitizedSignal;
 import utdigit.core.quantization.Quantizer;
+import utdigit.web.common.InputMessages;
 
 /** POST /api/dac-quantizations. */
 @Schema(name = "DacQuantizationRequest", description = "The converter's bit depth and code mapping, a DAC curve's "
         + "span and the height of its highest reference point, with the amplitude tolerance to check.")
 public record DacQuantizationRequest(
-        @Schema(description = "Converter resolution, bits (integer 1 to 32)", format = "int32", example = "12",
-                minimum = "1", maximum = "32")
-        @NotNull(message = "is required") @Min(1) @Max(32)
+        @Schema(description = "Converter resolution, bits (integer 1 to 32)", example = "12")
+        @NotNull(message = InputMessages.REQUIRED) @Min(1) @Max(32)
         Integer bitDepth,
 
         @Schema(description = "Span of the DAC curve from its highest to its lowest reference point, dB (above 0, at "
-                + "most 60)", format = "double", example = "24", exclusiveMinimumValue = 0, maximum = "60")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("60")
+                + "most 60)", example = "24")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("60")
         Double dacSpanDb,
 
         @Schema(description = "Screen height of the highest reference point, %FSH (> 0, <= 100); 80 is usual",
-                format = "double", example = "80", exclusiveMinimumValue = 0, maximum = "100")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100")
+                example = "80")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100")
         Double referenceHeightPercentFsh,
 
         @Schema(description = "Amplitude tolerance of the evaluation, dB (> 0, <= 40); gives the lowest height read "
                 + "within it, the largest span without correction and whether each set-up meets it",
-                format = "double", example = "1", exclusiveMinimumValue = 0, maximum = "40")
+                example = "1")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("40")
         Double amplitudeToleranceDb,
 

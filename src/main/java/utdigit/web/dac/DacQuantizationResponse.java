@@ -13,31 +13,30 @@ import utdigit.web.common.ResultNotes.WarningView;
         + "applied to digitized data. Errors are the worst reading below the true height (negative dB). Fields whose "
         + "optional inputs were not given are omitted; a value that cannot exist is null with a warning.")
 record DacQuantizationResponse(
-        @Schema(description = "One code step, %FSH", format = "double", example = "0.0488")
+        @Schema(description = "One code step, %FSH", example = "0.0488")
         double lsbPercentFsh,
         @Schema(description = "Lowest reference point without correction, reference_height_percent_fsh x "
-                + "10^(-dac_span_db/20), %FSH", format = "double", example = "5.05")
+                + "10^(-dac_span_db/20), %FSH", example = "5.05")
         double lowestReferenceHeightPercentFsh,
         @Schema(description = "No correction: worst reading below the lowest reference point, dB; null when it can "
-                + "read as 0", format = "double", example = "-0.042", types = {"number", "null"})
+                + "read as 0", example = "-0.042", types = {"number", "null"})
         Optional<Double> uncorrectedErrorUnderDb,
         @Schema(description = "TCG before the converter: every reference point digitized at "
-                + "reference_height_percent_fsh, worst reading below it, dB", format = "double", example = "-0.0027",
+                + "reference_height_percent_fsh, worst reading below it, dB", example = "-0.0027",
                 types = {"number", "null"})
         Optional<Double> analogTcgErrorUnderDb,
         @Schema(description = "TCG on digitized data: the displayed LSB at the lowest point, grown by dac_span_db, "
-                + "%FSH", format = "double", example = "0.774")
+                + "%FSH", example = "0.774")
         double digitalTcgLsbPercentFsh,
         @Schema(description = "TCG on digitized data: worst reading below the lowest point displayed at "
                 + "reference_height_percent_fsh, dB (the same as without correction: gain after the converter adds "
-                + "no resolution); null when it can read as 0", format = "double", example = "-0.042",
+                + "no resolution); null when it can read as 0", example = "-0.042",
                 types = {"number", "null"})
         Optional<Double> digitalTcgErrorUnderDb,
-        @Schema(description = "With amplitude_tolerance_db: the lowest height read within it, %FSH", format = "double",
-                example = "0.225")
+        @Schema(description = "With amplitude_tolerance_db: the lowest height read within it, %FSH", example = "0.225")
         Double minimumHeightPercentFsh,
         @Schema(description = "With amplitude_tolerance_db: the largest span without correction whose lowest point is "
-                + "still read within it, dB; null when the highest point itself is not", format = "double",
+                + "still read within it, dB; null when the highest point itself is not",
                 example = "51", types = {"number", "null"})
         Optional<Double> maxUncorrectedSpanDb,
         @Schema(description = "With amplitude_tolerance_db: whether the lowest point is read within it without "

@@ -15,23 +15,20 @@ record MaterialView(
         String name,
         @Schema(description = "BUILT_IN, or OPERATOR (from the operator's materials directory)")
         Material.Origin origin,
-        @Schema(description = "Longitudinal velocity, m/s", format = "double", example = "5920")
+        @Schema(description = "Longitudinal velocity, m/s", example = "5920")
         double longitudinalMPerS,
         @Schema(description = "Shear velocity, m/s; null for liquids and where no shear velocity is tabulated",
-                format = "double", example = "3255", types = {"number", "null"})
+                example = "3255", types = {"number", "null"})
         @JsonInclude(JsonInclude.Include.ALWAYS)
         Double shearMPerS,
-        @Schema(description = "+/- value of the longitudinal velocity, m/s, when the source states one",
-                format = "double", example = "50")
+        @Schema(description = "+/- value of the longitudinal velocity, m/s, when the source states one", example = "50")
         Double longitudinalUncertaintyMPerS,
-        @Schema(description = "+/- value of the shear velocity, m/s, when the source states one",
-                format = "double", example = "30")
+        @Schema(description = "+/- value of the shear velocity, m/s, when the source states one", example = "30")
         Double shearUncertaintyMPerS,
         @Schema(description = "How the +/- values are to be read: HALF_WIDTH of a stated range (a thickness "
                 + "calculation uses a/sqrt(3)), STANDARD uncertainty (used as it is), or NOT_STATED")
         UncertaintyKind uncertaintyKind,
-        @Schema(description = "Water only: the temperature the velocity is given at, C", format = "double",
-                example = "20")
+        @Schema(description = "Water only: the temperature the velocity is given at, C", example = "20")
         Double temperatureC,
         @Schema(description = "Built-in: the id of the source in the reference catalogue (GET /api/references/{id}); "
                 + "operator: the operator's own source text", example = "iso-22232-2-steel-reference-values")

@@ -9,6 +9,7 @@ import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.JsonPointers;
 import utdigit.web.common.Mirrors;
+import utdigit.web.common.VelocityFields;
 import utdigit.web.common.ResultNotes;
 import utdigit.web.common.VelocitySourceView;
 
@@ -30,16 +31,12 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
     @Override
     public String pointer(String coreField, PulseParametersRequest q) {
         return switch (coreField) {
-            case "element_diameter_mm", "element_diameter" ->
-                    JsonPointers.property(q.elementDiameterIn() != null ? "element_diameter_in" : "element_diameter_mm");
-            case "distance_mm", "distance" ->
-                    JsonPointers.property(q.distanceIn() != null ? "distance_in" : "distance_mm");
-            case "wedge_path_mm", "wedge_path" ->
-                    JsonPointers.property(q.wedgePathIn() != null ? "wedge_path_in" : "wedge_path_mm");
+            case "element_diameter_mm", "element_diameter" -> Mirrors.lengthPointer("element_diameter", q.elementDiameterIn());
+            case "distance_mm", "distance" -> Mirrors.lengthPointer("distance", q.distanceIn());
+            case "wedge_path_mm", "wedge_path" -> Mirrors.lengthPointer("wedge_path", q.wedgePathIn());
             case "wedge_velocity_m_per_s", "wedge_velocity" -> JsonPointers.property(
                     q.wedgeVelocityInPerUs() != null ? "wedge_velocity_in_per_us" : "wedge_velocity_m_per_s");
-            case "velocity_m_per_s", "velocity" -> JsonPointers.property(q.material() != null ? "material"
-                    : q.velocityInPerUs() != null ? "velocity_in_per_us" : "velocity_m_per_s");
+            case "velocity_m_per_s", "velocity" -> Mirrors.velocityPointer(q);
             default -> JsonPointers.property(coreField);
         };
     }
@@ -47,12 +44,12 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
     @Override
     public PulseParametersResponse answer(PulseParametersRequest q) {
         FieldErrors errors = FieldErrors.create();
-        VelocitySource velocity = Mirrors.velocity(errors, q, true);
+        VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         Double diameterMm = Mirrors.lengthMm(errors, "element_diameter", q.elementDiameterMm(), q.elementDiameterIn(), false);
         Double distanceMm = Mirrors.lengthMm(errors, "distance", q.distanceMm(), q.distanceIn(), false);
         Double wedgePathMm = Mirrors.lengthMm(errors, "wedge_path", q.wedgePathMm(), q.wedgePathIn(), false);
         Double wedgeVelocityMPerS = Mirrors.speedMPerS(errors, "wedge_velocity", q.wedgeVelocityMPerS(),
-                q.wedgeVelocityInPerUs(), Mirrors.MIN_VELOCITY_M_PER_S, Mirrors.MAX_VELOCITY_M_PER_S);
+                q.wedgeVelocityInPerUs(), VelocityFields.MIN_M_PER_S, VelocityFields.MAX_M_PER_S);
         // centre_frequency_convention without bandwidth_percent is the core's NOT_APPLICABLE (400
         // inapplicable-input), not a field error of this layer (which would answer invalid-input).
         errors.throwIfAny();

@@ -6,6 +6,8 @@ import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.pulse.CentreFrequencyConvention;
+import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/pulse-parameters. */
@@ -13,34 +15,17 @@ import utdigit.web.common.VelocityFields;
         + "velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + temperature_c for water). "
         + "Each length once: _mm or _in; the wedge velocity once: _m_per_s or _in_per_us.")
 public record PulseParametersRequest(
-        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", format = "double", example = "5",
-                exclusiveMinimumValue = 0, maximum = "1000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
-        @Schema(description = "Sound velocity in the part, m/s (100 to 20000)", format = "double", example = "5920",
-                minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
-        @Schema(description = "Sound velocity in the part, in/us (equivalent of 100 to 20000 m/s)", format = "double",
-                example = "0.2331")
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
-
-        @Schema(description = "-6 dB fractional bandwidth of the probe, % (0 to 200 exclusive)", format = "double",
-                example = "60", exclusiveMinimumValue = 0, exclusiveMaximumValue = 200)
+        @Schema(description = "-6 dB fractional bandwidth of the probe, % (0 to 200 exclusive)", example = "60")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
         Double bandwidthPercent,
 
@@ -48,45 +33,39 @@ public record PulseParametersRequest(
                 + "sqrt(fl fu); default ARITHMETIC. Only with bandwidth_percent")
         CentreFrequencyConvention centreFrequencyConvention,
 
-        @Schema(description = "Element diameter (circular), mm (> 0, <= 100000)", format = "double", example = "10",
-                exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @Schema(description = "Element diameter (circular), mm (> 0, <= 100000)", example = "10")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double elementDiameterMm,
 
-        @Schema(description = "Element diameter (circular), in", format = "double", example = "0.375",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Element diameter (circular), in", example = "0.375")
         @DecimalMin(value = "0", inclusive = false)
         Double elementDiameterIn,
 
         @Schema(description = "Distance in the part for the beam diameter, mm; needs the element diameter",
-                format = "double", example = "50", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "50")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double distanceMm,
 
-        @Schema(description = "Distance in the part for the beam diameter, in", format = "double", example = "2",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Distance in the part for the beam diameter, in", example = "2")
         @DecimalMin(value = "0", inclusive = false)
         Double distanceIn,
 
         @Schema(description = "Sound path in a wedge or delay line before the part, mm; needs "
-                + "wedge_velocity_m_per_s and the element diameter", format = "double", example = "12",
-                exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "wedge_velocity_m_per_s and the element diameter", example = "12")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double wedgePathMm,
 
-        @Schema(description = "Sound path in a wedge or delay line, in", format = "double", example = "0.5",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Sound path in a wedge or delay line, in", example = "0.5")
         @DecimalMin(value = "0", inclusive = false)
         Double wedgePathIn,
 
         @Schema(description = "Longitudinal velocity of the wedge or delay line, m/s (100 to 20000); wedge grades "
-                + "vary by maker and temperature: give the measured value", format = "double", example = "2730",
-                minimum = "100", maximum = "20000")
+                + "vary by maker and temperature: give the measured value", example = "2730")
         @DecimalMin("100") @DecimalMax("20000")
         Double wedgeVelocityMPerS,
 
         @Schema(description = "Incident angle in the wedge, deg (0 to below 90); needs wedge_velocity_m_per_s",
-                format = "double", example = "36", minimum = "0", exclusiveMaximumValue = 90)
+                example = "36")
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
         Double incidentAngleDeg,
 

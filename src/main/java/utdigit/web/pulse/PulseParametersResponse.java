@@ -12,86 +12,86 @@ import utdigit.web.common.VelocitySourceView;
         + "and the circular piston's near field and beam spread. Fields whose optional inputs were not given are "
         + "omitted; a value that cannot exist is null with a warning.")
 record PulseParametersResponse(
-        @Schema(description = "Period of the nominal frequency, us", format = "double", example = "0.2")
+        @Schema(description = "Period of the nominal frequency, us", example = "0.2")
         double periodUs,
-        @Schema(description = "Wavelength in the part at the nominal frequency, mm", format = "double", example = "1.184")
+        @Schema(description = "Wavelength in the part at the nominal frequency, mm", example = "1.184")
         double wavelengthMm,
-        @Schema(description = "Wavelength in the part, in", format = "double", example = "0.0466")
+        @Schema(description = "Wavelength in the part, in", example = "0.0466")
         double wavelengthIn,
-        @Schema(description = "Lower -6 dB band edge of the chosen convention, MHz", format = "double", example = "3.5")
+        @Schema(description = "Lower -6 dB band edge of the chosen convention, MHz", example = "3.5")
         Double lowerFrequencyMhz,
-        @Schema(description = "Upper -6 dB band edge of the chosen convention, MHz", format = "double", example = "6.5")
+        @Schema(description = "Upper -6 dB band edge of the chosen convention, MHz", example = "6.5")
         Double upperFrequencyMhz,
-        @Schema(description = "Lower -20 dB edge of the pulse model, MHz; null below 0 Hz", format = "double",
+        @Schema(description = "Lower -20 dB edge of the pulse model, MHz; null below 0 Hz",
                 types = {"number", "null"}, example = "2.26")
         Optional<Double> lowerFrequency20dbMhz,
-        @Schema(description = "Upper -20 dB edge of the pulse model, MHz", format = "double", example = "7.74")
+        @Schema(description = "Upper -20 dB edge of the pulse model, MHz", example = "7.74")
         Double upperFrequency20dbMhz,
-        @Schema(description = "Lower -40 dB edge of the pulse model, MHz; null below 0 Hz", format = "double",
+        @Schema(description = "Lower -40 dB edge of the pulse model, MHz; null below 0 Hz",
                 types = {"number", "null"}, example = "0.39")
         Optional<Double> lowerFrequency40dbMhz,
-        @Schema(description = "Upper -40 dB edge of the pulse model, MHz", format = "double", example = "9.61")
+        @Schema(description = "Upper -40 dB edge of the pulse model, MHz", example = "9.61")
         Double upperFrequency40dbMhz,
-        @Schema(description = "Envelope duration between its -6 dB points, us", format = "double", example = "0.294")
+        @Schema(description = "Envelope duration between its -6 dB points, us", example = "0.294")
         Double pulseDuration6dbUs,
-        @Schema(description = "Envelope duration between its -20 dB points, us", format = "double", example = "0.537")
+        @Schema(description = "Envelope duration between its -20 dB points, us", example = "0.537")
         Double pulseDuration20dbUs,
-        @Schema(description = "Carrier cycles within the -6 dB envelope duration", format = "double", example = "1.47")
+        @Schema(description = "Carrier cycles within the -6 dB envelope duration", example = "1.47")
         Double cycles6db,
-        @Schema(description = "Spatial pulse length, velocity x -6 dB duration, mm", format = "double", example = "1.74")
+        @Schema(description = "Spatial pulse length, velocity x -6 dB duration, mm", example = "1.74")
         Double spatialPulseLengthMm,
         @Schema(description = "Axial (range) resolution, half the spatial pulse length, mm (common practice)",
-                format = "double", example = "0.87")
+                example = "0.87")
         Double axialResolutionMm,
         @Schema(description = "Near-field length D^2 / (4 lambda), mm; for an angle beam the plane perpendicular "
-                + "to incidence (see incidence_plane_near_field_length_mm)", format = "double", example = "21.1")
+                + "to incidence (see incidence_plane_near_field_length_mm)", example = "21.1")
         Double nearFieldLengthMm,
         @Schema(description = "Last on-axis maximum (D^2 - lambda^2) / (4 lambda), mm; null when D <= lambda",
-                format = "double", types = {"number", "null"}, example = "20.8")
+                types = {"number", "null"}, example = "20.8")
         Optional<Double> nearFieldLengthExactMm,
         @Schema(description = "Pulse-echo (two-way) -6 dB beam-spread half-angle with D, deg (for an angle beam: "
                 + "the plane perpendicular to incidence); null when none exists",
-                format = "double", types = {"number", "null"}, example = "3.49")
+                types = {"number", "null"}, example = "3.49")
         Optional<Double> beamSpread6dbDeg,
         @Schema(description = "Pulse-echo (two-way) -20 dB beam-spread half-angle, deg; null when none exists",
-                format = "double", types = {"number", "null"}, example = "5.9")
+                types = {"number", "null"}, example = "5.9")
         Optional<Double> beamSpread20dbDeg,
         @Schema(description = "Half-angle to the first null of the far-field directivity, deg; null when none exists",
-                format = "double", types = {"number", "null"}, example = "8.3")
+                types = {"number", "null"}, example = "8.3")
         Optional<Double> beamSpreadNullDeg,
         @Schema(description = "Beam diameter at the distance, 2 z tan(theta -6 dB), mm (for an angle beam: the "
                 + "plane perpendicular to incidence); null inside the near field, where the far-field cone does not "
                 + "hold, or when no angle exists",
-                format = "double", types = {"number", "null"}, example = "6.1")
+                types = {"number", "null"}, example = "6.1")
         Optional<Double> beamDiameter6dbMm,
         @Schema(description = "Near field left in the part behind the wedge or delay line, N - w v_w / v, mm (for "
                 + "an angle beam: the plane perpendicular to incidence); negative: the part sees only far field",
-                format = "double", example = "15.6")
+                example = "15.6")
         Double nearFieldInPartMm,
         @Schema(description = "Refracted angle in the part by Snell's law, deg; null past the critical angle",
-                format = "double", types = {"number", "null"}, example = "45.3")
+                types = {"number", "null"}, example = "45.3")
         Optional<Double> refractedAngleDeg,
         @Schema(description = "Angle beam, incidence plane (with element_diameter and incident_angle_deg): the "
                 + "projected aperture the part sees, D cos(beta)/cos(alpha), mm; null past the critical angle. The "
                 + "other near-field and beam fields then hold for the plane perpendicular to incidence (full D)",
-                format = "double", types = {"number", "null"}, example = "7.73")
+                types = {"number", "null"}, example = "7.73")
         Optional<Double> incidencePlaneApertureMm,
         @Schema(description = "Angle beam, incidence plane: near field of the projected aperture D_eff^2/(4 lambda), "
-                + "mm; null past the critical angle", format = "double", types = {"number", "null"}, example = "12.6")
+                + "mm; null past the critical angle", types = {"number", "null"}, example = "12.6")
         Optional<Double> incidencePlaneNearFieldLengthMm,
         @Schema(description = "Angle beam, incidence plane (with wedge_path): near field left in the part, "
                 + "D_eff^2/(4 lambda) - w (v_w/v) cos^2(beta)/cos^2(alpha), mm; negative: only far field in this "
-                + "plane; null past the critical angle", format = "double", types = {"number", "null"},
+                + "plane; null past the critical angle", types = {"number", "null"},
                 example = "9.8")
         Optional<Double> incidencePlaneNearFieldInPartMm,
         @Schema(description = "Angle beam, incidence plane: pulse-echo (two-way) -6 dB beam-spread half-angle with "
-                + "D_eff, deg; null when none exists", format = "double", types = {"number", "null"}, example = "2.9")
+                + "D_eff, deg; null when none exists", types = {"number", "null"}, example = "2.9")
         Optional<Double> incidencePlaneBeamSpread6dbDeg,
         @Schema(description = "Angle beam, incidence plane: pulse-echo (two-way) -20 dB beam-spread half-angle with "
-                + "D_eff, deg; null when none exists", format = "double", types = {"number", "null"}, example = "4.9")
+                + "D_eff, deg; null when none exists", types = {"number", "null"}, example = "4.9")
         Optional<Double> incidencePlaneBeamSpread20dbDeg,
         @Schema(description = "Angle beam, incidence plane (with distance): -6 dB beam width 2 z tan(theta) with "
-                + "D_eff's angle, mm; null inside this plane's near field or when no angle exists", format = "double",
+                + "D_eff's angle, mm; null inside this plane's near field or when no angle exists",
                 types = {"number", "null"}, example = "5.1")
         Optional<Double> incidencePlaneBeamDiameter6dbMm,
         @Schema(description = "The normalised request, with every default that has an effect; itself a valid "

@@ -64,21 +64,18 @@ class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentReq
                 q.tfmLateralGridSpacingIn(), false);
         Double apertureMm = Mirrors.lengthMm(errors, "tfm_aperture", q.tfmApertureMm(), q.tfmApertureIn(), false);
         Double depthMm = Mirrors.lengthMm(errors, "tfm_depth", q.tfmDepthMm(), q.tfmDepthIn(), false);
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        try {
-            velocity = Mirrors.velocity(errors, q, false);
-        } catch (CalculationException e) {
-            velocityImpossible = e; // a 422 (water with SHEAR) waits for the 400s of the other fields
-        }
+        boolean tfmGiven = q.tfmGridSpacingMm() != null || q.tfmGridSpacingIn() != null
+                || q.tfmLateralGridSpacingMm() != null || q.tfmLateralGridSpacingIn() != null
+                || q.tfmApertureMm() != null || q.tfmApertureIn() != null
+                || q.tfmDepthMm() != null || q.tfmDepthIn() != null;
+        VelocitySource velocity = errors.orLater(() -> {
+            try {
+                return Mirrors.velocity(errors, q, false);
+            } catch (CalculationException e) {
+                throw tfmGiven ? e : CalculationException.notApplicable("velocity", VELOCITY_NOT_APPLICABLE);
+            }
+        });
         errors.throwIfAny();
-        if (velocityImpossible != null) {
-            boolean tfmGiven = q.tfmGridSpacingMm() != null || q.tfmGridSpacingIn() != null
-                    || q.tfmLateralGridSpacingMm() != null || q.tfmLateralGridSpacingIn() != null
-                    || q.tfmApertureMm() != null || q.tfmApertureIn() != null
-                    || q.tfmDepthMm() != null || q.tfmDepthIn() != null;
-            throw tfmGiven ? velocityImpossible : CalculationException.notApplicable("velocity", VELOCITY_NOT_APPLICABLE);
-        }
         Double velocityMPerS = velocity == null ? null : velocity.velocityMPerS();
 
         SamplingResult r = SamplingCalculator.compute(SamplingInput.of(q.samplingFrequencyMhz(), q.frequencyMhz())

@@ -12,6 +12,8 @@ import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.PeakReading;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.TfmImage;
+import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/sampling-assessments. */
@@ -20,18 +22,16 @@ import utdigit.web.common.VelocityFields;
         + "_in. A velocity (once: velocity_m_per_s, velocity_in_per_us or material + wave_mode, + temperature_c for "
         + "water) only with the TFM grid figures.")
 public record SamplingAssessmentRequest(
-        @Schema(description = "The converter's (raw) sampling frequency fs, MHz (> 0, <= 100000)", format = "double",
-                example = "100", exclusiveMinimumValue = 0, maximum = "100000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @Schema(description = "The converter's (raw) sampling frequency fs, MHz (> 0, <= 100000)", example = "100")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
-        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", format = "double", example = "5",
-                exclusiveMinimumValue = 0, maximum = "1000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
+        @Schema(description = "Nominal probe frequency, MHz (> 0, <= 1000)", example = "5")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
         @Schema(description = "Decimation (compression) factor m: one stored sample per m converted (integer 1 to "
-                + "65536); default 1", format = "int32", example = "4", minimum = "1", maximum = "65536")
+                + "65536); default 1", example = "4")
         @Min(1) @Max(65536)
         Integer decimationFactor,
 
@@ -43,8 +43,7 @@ public record SamplingAssessmentRequest(
 
         @Schema(description = "-6 dB fractional bandwidth of the probe, % (0 to 200 exclusive); gives the pulse "
                 + "figures. With amplitude_tolerance_db and signal RF it must be at least 1 (the floor of the pulse "
-                + "rate search)", format = "double", example = "60", exclusiveMinimumValue = 0,
-                exclusiveMaximumValue = 200)
+                + "rate search)", example = "60")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
         Double bandwidthPercent,
 
@@ -61,75 +60,51 @@ public record SamplingAssessmentRequest(
         PeakReading peakReading,
 
         @Schema(description = "Amplitude tolerance of the evaluation, dB (> 0, <= 40); gives the required rates "
-                + "(and with tfm_grid_spacing the largest grid step)", format = "double", example = "1",
-                exclusiveMinimumValue = 0, maximum = "40")
+                + "(and with tfm_grid_spacing the largest grid step)", example = "1")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("40")
         Double amplitudeToleranceDb,
 
-        @Schema(description = "TFM grid step in depth dz, mm (> 0, <= 100000); needs a velocity", format = "double",
-                example = "0.1", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @Schema(description = "TFM grid step in depth dz, mm (> 0, <= 100000); needs a velocity", example = "0.1")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmGridSpacingMm,
 
-        @Schema(description = "TFM grid step in depth dz, in (> 0, at most the equivalent of 100 m)",
-                format = "double", example = "0.004", exclusiveMinimumValue = 0)
+        @Schema(description = "TFM grid step in depth dz, in (> 0, at most the equivalent of 100 m)", example = "0.004")
         @DecimalMin(value = "0", inclusive = false)
         Double tfmGridSpacingIn,
 
-        @Schema(description = "Sound velocity in the part for the TFM grid figures, m/s (100 to 20000)",
-                format = "double", example = "5920", minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity in the part for the TFM grid figures, in/us (equivalent of 100 to "
-                + "20000 m/s)", format = "double", example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id for the TFM grid figures' velocity (GET /api/materials)",
-                example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "What the TFM image holds: RF (signed; carrier and envelope terms) or ENVELOPE "
                 + "(magnitude; envelope term only, needs bandwidth_percent); default RF. Only with tfm_grid_spacing")
         TfmImage tfmImage,
 
         @Schema(description = "TFM grid step across (lateral) dx, mm (> 0, <= 100000); with tfm_aperture and "
-                + "tfm_depth, and a velocity", format = "double", example = "0.2", exclusiveMinimumValue = 0,
-                maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "tfm_depth, and a velocity", example = "0.2")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmLateralGridSpacingMm,
 
-        @Schema(description = "TFM grid step across (lateral) dx, in", format = "double", example = "0.008",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "TFM grid step across (lateral) dx, in", example = "0.008")
         @DecimalMin(value = "0", inclusive = false)
         Double tfmLateralGridSpacingIn,
 
         @Schema(description = "Active aperture A of the array for the lateral figure, mm (> 0, <= 100000)",
-                format = "double", example = "38.4", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "38.4")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmApertureMm,
 
-        @Schema(description = "Active aperture A of the array for the lateral figure, in", format = "double",
-                example = "1.5", exclusiveMinimumValue = 0)
+        @Schema(description = "Active aperture A of the array for the lateral figure, in", example = "1.5")
         @DecimalMin(value = "0", inclusive = false)
         Double tfmApertureIn,
 
-        @Schema(description = "Depth z at which the lateral figure is assessed, mm (> 0, <= 100000)",
-                format = "double", example = "30", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @Schema(description = "Depth z at which the lateral figure is assessed, mm (> 0, <= 100000)", example = "30")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double tfmDepthMm,
 
-        @Schema(description = "Depth z at which the lateral figure is assessed, in", format = "double",
-                example = "1.2", exclusiveMinimumValue = 0)
+        @Schema(description = "Depth z at which the lateral figure is assessed, in", example = "1.2")
         @DecimalMin(value = "0", inclusive = false)
         Double tfmDepthIn) implements VelocityFields {
 }

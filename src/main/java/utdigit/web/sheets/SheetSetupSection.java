@@ -9,6 +9,7 @@ import utdigit.core.dac.TcgMode;
 import utdigit.core.sheets.SheetSetup;
 import utdigit.web.common.FieldErrors;
 import utdigit.web.common.Mirrors;
+import utdigit.web.common.VelocityFields;
 
 /** The set-up section of a technique sheet: coverage, array, DAC/TCG, the TOFD gate and an angle beam's wedge. */
 @Schema(name = "SheetSetup", description = "Scan coverage (with acquisition.scan_increment), the array's pitch and "
@@ -88,9 +89,9 @@ public record SheetSetupSection(
                     "give the gate whole: gate_start_us and gate_end_us together");
         }
         Double steeringMPerS = Mirrors.speedMPerS(errors, "steering_velocity", steeringVelocityMPerS,
-                steeringVelocityInPerUs, Mirrors.MIN_VELOCITY_M_PER_S, Mirrors.MAX_VELOCITY_M_PER_S);
+                steeringVelocityInPerUs, VelocityFields.MIN_M_PER_S, VelocityFields.MAX_M_PER_S);
         Double wedgeMPerS = Mirrors.speedMPerS(errors, "wedge_velocity", wedgeVelocityMPerS, wedgeVelocityInPerUs,
-                Mirrors.MIN_VELOCITY_M_PER_S, Mirrors.MAX_VELOCITY_M_PER_S);
+                VelocityFields.MIN_M_PER_S, VelocityFields.MAX_M_PER_S);
         return new SheetSetup(widthMm, pathMm, indexMm, angularStepDeg, pitchMm, activeElements, maxSteeringAngleDeg,
                 steeringMPerS, dacSpanDb, tcg, gateStartUs, gateEndUs, incidentAngleDeg, wedgeMPerS);
     }

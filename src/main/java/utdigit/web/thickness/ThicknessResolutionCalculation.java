@@ -1,10 +1,6 @@
 package utdigit.web.thickness;
 
-import java.math.MathContext;
-import java.util.List;
-import java.util.Locale;
 import org.springframework.stereotype.Component;
-import utdigit.core.common.CalculationException;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Units;
 import utdigit.core.materials.VelocitySource;
@@ -17,7 +13,6 @@ import utdigit.web.common.FieldErrors;
 import utdigit.web.common.JsonPointers;
 import utdigit.web.common.Mirrors;
 import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocityFields;
 import utdigit.web.common.VelocitySourceView;
 
 /**
@@ -56,30 +51,18 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
         String uncertaintyName = q.velocityUncertaintyInPerUs() != null
                 ? "velocity_uncertainty_in_per_us" : "velocity_uncertainty_m_per_s";
         if (givenUncertaintyMPerS != null && q.velocityUncertaintyPercent() != null) {
-            String detail = "give the velocity uncertainty once: velocity_uncertainty_m_per_s (or _in_per_us) or "
-                    + "velocity_uncertainty_percent, not both";
-            errors.add(uncertaintyName, detail).add("velocity_uncertainty_percent", detail);
+            errors.notBoth("the velocity uncertainty", uncertaintyName, "velocity_uncertainty_percent");
         }
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        try {
-            velocity = Mirrors.velocity(errors, q, true);
-        } catch (CalculationException e) {
-            velocityImpossible = e; // a 422 (water with SHEAR) waits for the 400s of the other fields
-        }
+        VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         if (velocity != null && givenUncertaintyMPerS != null
                 && givenUncertaintyMPerS > MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS()) {
             double limitMPerS = MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS();
             errors.add(uncertaintyName, q.velocityUncertaintyInPerUs() != null
-                    ? String.format(Locale.ROOT, "must be at most 20 %% of the velocity (%s in/us here)",
-                            MessageNumbers.plain(Units.mPerSToInPerUs(limitMPerS), new MathContext(4)))
-                    : String.format(Locale.ROOT, "must be at most 20 %% of the velocity (%s m/s here)",
-                            number(limitMPerS)));
+                    ? "must be at most 20 % of the velocity (" + MessageNumbers.plain(Units.mPerSToInPerUs(limitMPerS), 4)
+                            + " in/us here)"
+                    : "must be at most 20 % of the velocity (" + MessageNumbers.exact(limitMPerS) + " m/s here)");
         }
         errors.throwIfAny();
-        if (velocityImpossible != null) {
-            throw velocityImpossible;
-        }
 
         // No velocity uncertainty given and a material that states one: its standard uncertainty is used.
         boolean materialUncertainty = givenUncertaintyMPerS == null && q.velocityUncertaintyPercent() == null
@@ -129,10 +112,5 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
                     ? "velocity_uncertainty_in_per_us" : "velocity_uncertainty_m_per_s");
             default -> Calculation.super.pointer(coreField, q);
         };
-    }
-
-
-    private static String number(double value) {
-        return value == StrictMath.rint(value) ? String.valueOf((long) value) : String.valueOf(value);
     }
 }

@@ -8,6 +8,8 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.thickness.Measurement;
+import utdigit.web.common.InputMessages;
+import utdigit.web.common.Mirrors;
 import utdigit.web.common.VelocityFields;
 
 /** POST /api/thickness-resolutions. */
@@ -16,57 +18,38 @@ import utdigit.web.common.VelocityFields;
         + "velocity_in_per_us or material (+ wave_mode, + temperature_c for water); the velocity uncertainty at most "
         + "once; each length once: _mm or _in.")
 public record ThicknessResolutionRequest(
-        @Schema(description = "Converter (raw) sampling frequency, MHz (> 0, <= 100000)", format = "double",
-                example = "50", exclusiveMinimumValue = 0, maximum = "100000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+        @Schema(description = "Converter (raw) sampling frequency, MHz (> 0, <= 100000)", example = "50")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "Stored rate is sampling_frequency_mhz / decimation_factor (integer 1 to 65536); "
-                + "default 1", format = "int32", example = "1", minimum = "1", maximum = "65536")
+                + "default 1", example = "1")
         @Min(1) @Max(65536)
         Integer decimationFactor,
 
-        @Schema(description = "Sound velocity in the part, m/s (100 to 20000)", format = "double", example = "5920",
-                minimum = "100", maximum = "20000")
-        @DecimalMin("100") @DecimalMax("20000")
-        Double velocityMPerS,
-
-        @Schema(description = "Sound velocity in the part, in/us (equivalent of 100 to 20000 m/s)", format = "double",
-                example = "0.2331", exclusiveMinimumValue = 0)
-        @DecimalMin(value = "0", inclusive = false)
-        Double velocityInPerUs,
-
-        @Schema(description = "Built-in material id (GET /api/materials)", example = "carbon-steel")
-        String material,
-
-        @Schema(description = "Wave mode of the material's velocity; default LONGITUDINAL. Only with material")
-        WaveMode waveMode,
-
-        @Schema(description = "Water only: temperature, C (0 to 95); default 20", format = "double", example = "20",
-                minimum = "0", maximum = "95")
-        @DecimalMin("0") @DecimalMax("95")
-        Double temperatureC,
+        @VelocityFields.MPerS Double velocityMPerS,
+        @VelocityFields.InPerUs Double velocityInPerUs,
+        @VelocityFields.MaterialId String material,
+        @VelocityFields.Mode WaveMode waveMode,
+        @VelocityFields.TemperatureC Double temperatureC,
 
         @Schema(description = "Standard uncertainty (not a half-width) of the velocity, m/s (0 to 4000, and at most "
                 + "20 % of the velocity); or give velocity_uncertainty_percent, not both. Neither: 0, with a warning "
-                + "that the uncertainty then holds the sampling alone", format = "double", example = "15",
-                minimum = "0", maximum = "4000")
+                + "that the uncertainty then holds the sampling alone", example = "15")
         @DecimalMin("0") @DecimalMax("4000")
         Double velocityUncertaintyMPerS,
 
         @Schema(description = "Standard uncertainty (not a half-width) of the velocity, % of the velocity (0 to 20); "
-                + "or give velocity_uncertainty_m_per_s, not both", format = "double", example = "0.5",
-                minimum = "0", maximum = "20")
+                + "or give velocity_uncertainty_m_per_s, not both", example = "0.5")
         @DecimalMin("0") @DecimalMax("20")
         Double velocityUncertaintyPercent,
 
         @Schema(description = "Nominal wall thickness, mm (> 0, <= 100000); this or nominal_thickness_in is required",
-                format = "double", example = "12.5", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "12.5")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double nominalThicknessMm,
 
-        @Schema(description = "Nominal wall thickness, in (> 0, at most 100 m)", format = "double", example = "0.5",
-                exclusiveMinimumValue = 0)
+        @Schema(description = "Nominal wall thickness, in (> 0, at most 100 m)", example = "0.5")
         @DecimalMin(value = "0", inclusive = false)
         Double nominalThicknessIn,
 
@@ -76,38 +59,35 @@ public record ThicknessResolutionRequest(
         Measurement measurement,
 
         @Schema(description = "ECHO_TO_ECHO: round trips m between the timed echoes (integer 1 to 65536; 1 for "
-                + "adjacent echoes); default 1, the only value with FIRST_ECHO", format = "int32", example = "1",
-                minimum = "1", maximum = "65536")
+                + "adjacent echoes); default 1, the only value with FIRST_ECHO", example = "1")
         @Min(1) @Max(65536)
         Integer echoSpacing,
 
         @Schema(description = "Thickness resolution required, mm (> 0, <= 100000); gives "
-                + "required_sampling_frequency_mhz and warns when the resolution is coarser", format = "double",
-                example = "0.05", exclusiveMinimumValue = 0, maximum = "100000")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                + "required_sampling_frequency_mhz and warns when the resolution is coarser",
+                example = "0.05")
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
         Double requiredResolutionMm,
 
-        @Schema(description = "Thickness resolution required, in (> 0, at most 100 m)", format = "double",
-                example = "0.002", exclusiveMinimumValue = 0)
+        @Schema(description = "Thickness resolution required, in (> 0, at most 100 m)", example = "0.002")
         @DecimalMin(value = "0", inclusive = false)
         Double requiredResolutionIn,
 
         @Schema(description = "Coverage factor k of expanded_uncertainty_mm (1 to 5); default 2. The coverage "
                 + "probability is not stated: k = 2 is about 95 % only when the velocity term dominates",
-                format = "double", example = "2", minimum = "1", maximum = "5")
+                example = "2")
         @DecimalMin("1") @DecimalMax("5")
         Double coverageFactor,
 
         @Schema(description = "Optional, with bandwidth_percent (an input added to the endpoint's core list): "
                 + "nominal probe frequency, MHz (> 0, <= 1000), used only to warn when nominal_thickness is below "
-                + "the axial resolution v tau(-6 dB)/2 of the Gaussian pulse model (the wall echoes overlap)", format = "double", example = "5",
-                exclusiveMinimumValue = 0, maximum = "1000")
+                + "the axial resolution v tau(-6 dB)/2 of the Gaussian pulse model (the wall echoes overlap)", example = "5")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
         Double frequencyMhz,
 
         @Schema(description = "Optional, with frequency_mhz (an input added to the endpoint's core list): -6 dB "
                 + "fractional bandwidth of the probe, % (0 to 200 exclusive), used only for the wall-echo overlap warning",
-                format = "double", example = "60", exclusiveMinimumValue = 0, exclusiveMaximumValue = 200)
+                example = "60")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
         Double bandwidthPercent,
 

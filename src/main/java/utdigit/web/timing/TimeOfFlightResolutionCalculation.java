@@ -1,7 +1,6 @@
 package utdigit.web.timing;
 
 import org.springframework.stereotype.Component;
-import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.timing.Technique;
 import utdigit.core.timing.TimeOfFlightCalculator;
@@ -9,10 +8,8 @@ import utdigit.core.timing.TimeOfFlightInput;
 import utdigit.core.timing.TimeOfFlightResult;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.FieldErrors;
-import utdigit.web.common.JsonPointers;
 import utdigit.web.common.Mirrors;
 import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocityFields;
 import utdigit.web.common.VelocitySourceView;
 
 /**
@@ -46,17 +43,8 @@ class TimeOfFlightResolutionCalculation implements Calculation<TimeOfFlightResol
         }
         Double depthMm = Mirrors.lengthMm(errors, "depth", q.depthMm(), q.depthIn(), false);
         Double thicknessMm = Mirrors.lengthMm(errors, "thickness", q.thicknessMm(), q.thicknessIn(), false);
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        try {
-            velocity = Mirrors.velocity(errors, q, true);
-        } catch (CalculationException e) {
-            velocityImpossible = e; // a 422 (water with SHEAR) waits for the 400s of the other fields
-        }
+        VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         errors.throwIfAny();
-        if (velocityImpossible != null) {
-            throw velocityImpossible;
-        }
 
         TimeOfFlightResult r = TimeOfFlightCalculator.compute(
                 TimeOfFlightInput.builder(q.samplingFrequencyMhz(), velocity.velocityMPerS())

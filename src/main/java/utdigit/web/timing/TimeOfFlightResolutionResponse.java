@@ -14,42 +14,42 @@ import utdigit.web.common.VelocitySourceView;
         + "technique, are omitted.")
 record TimeOfFlightResolutionResponse(
         @Schema(description = "One sample of the stored time base dt = decimation_factor / sampling_frequency_mhz, ns",
-                format = "double", example = "10")
+                example = "10")
         double timeResolutionNs,
         @Schema(description = "Worst-case timing error: dt/2 from the trigger, dt from the lateral wave, ns",
-                format = "double", example = "5")
+                example = "5")
         double timingErrorNs,
         @Schema(description = "Standard uncertainty of the timing: dt/sqrt(12) from the trigger (rectangular), "
-                + "dt/sqrt(6) from the lateral wave (triangular), ns", format = "double", example = "2.887")
+                + "dt/sqrt(6) from the lateral wave (triangular), ns", example = "2.887")
         double timingStandardUncertaintyNs,
         @Schema(description = "Sound path of one sample: v dt/2 pulse-echo (one way), v dt through-transmission, "
-                + "v dt TOFD (both legs together), mm", format = "double", example = "0.0296")
+                + "v dt TOFD (both legs together), mm", example = "0.0296")
         double soundPathResolutionMm,
         @Schema(description = "PULSE_ECHO with refracted_angle_deg: depth per sample, sound_path_resolution_mm x "
                 + "cos(angle); TOFD with depth: the depth step of one sample at that depth (exact forward "
-                + "difference d(t + dt) - d(t)), mm", format = "double", example = "0.0148")
+                + "difference d(t + dt) - d(t)), mm", example = "0.0148")
         Double depthResolutionMm,
         @Schema(description = "PULSE_ECHO with refracted_angle_deg: surface distance per sample, "
-                + "sound_path_resolution_mm x sin(angle), mm", format = "double", example = "0.0256")
+                + "sound_path_resolution_mm x sin(angle), mm", example = "0.0256")
         Double surfaceDistanceResolutionMm,
-        @Schema(description = "TOFD: lateral wave arrival 2S/v in the part, us", format = "double", example = "9.8")
+        @Schema(description = "TOFD: lateral wave arrival 2S/v in the part, us", example = "9.8")
         Double lateralWaveTimeUs,
         @Schema(description = "TOFD with depth: tip signal arrival 2 sqrt(S^2 + d^2)/v in the part, us",
-                format = "double", example = "11.6")
+                example = "11.6")
         Double timeOfFlightUs,
         @Schema(description = "TOFD with depth and a pulse duration: the depth range within one pulse duration "
-                + "after the tip signal, sqrt((v (t + tp)/2)^2 - S^2) - d, mm", format = "double", example = "1.2")
+                + "after the tip signal, sqrt((v (t + tp)/2)^2 - S^2) - d, mm", example = "1.2")
         Double pulseLimitedDepthResolutionMm,
         @Schema(description = "TOFD with a pulse duration: near-surface dead zone sqrt((S + v tp/2)^2 - S^2), mm",
-                format = "double", example = "6.4")
+                example = "6.4")
         Double deadZoneDepthMm,
         @Schema(description = "TOFD with thickness and a pulse duration: back-wall dead zone, the depths above the "
-                + "back wall whose tip signal arrives within tp before the back-wall signal, mm", format = "double",
+                + "back wall whose tip signal arrives within tp before the back-wall signal, mm",
                 example = "0.9")
         Double backwallDeadZoneMm,
         @Schema(description = "TOFD with a pulse duration: the pulse duration tp used, pulse_duration_us as given "
                 + "or the model's -20 dB envelope duration from frequency_mhz and bandwidth_percent, us",
-                format = "double", example = "0.3")
+                example = "0.3")
         Double pulseDurationUsedUs,
         @Schema(description = "The normalised request (lengths in mm, velocity in m/s, technique, "
                 + "decimation_factor and for TOFD time_reference filled in); itself a valid request that "

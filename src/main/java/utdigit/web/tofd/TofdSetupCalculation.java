@@ -1,7 +1,6 @@
 package utdigit.web.tofd;
 
 import org.springframework.stereotype.Component;
-import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
 import utdigit.core.timing.TofdSetupCalculator;
 import utdigit.core.timing.TofdSetupInput;
@@ -35,17 +34,8 @@ class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
         Double thicknessMm = Mirrors.lengthMm(errors, "thickness", q.thicknessMm(), q.thicknessIn(), true);
         Double depthMm = Mirrors.lengthMm(errors, "depth", q.depthMm(), q.depthIn(), false);
         Double separationUncertaintyMm = separationUncertaintyMm(errors, q);
-        VelocitySource velocity = null;
-        CalculationException velocityImpossible = null;
-        try {
-            velocity = Mirrors.velocity(errors, q, true);
-        } catch (CalculationException e) {
-            velocityImpossible = e;
-        }
+        VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         errors.throwIfAny();
-        if (velocityImpossible != null) {
-            throw velocityImpossible;
-        }
         TofdSetupResult r = TofdSetupCalculator.compute(new TofdSetupInput(velocity.velocityMPerS(), separationMm,
                 thicknessMm, q.gateStartUs(), q.gateEndUs(), q.pulseDurationUs(), depthMm, q.measuredTimeUs(),
                 q.samplingFrequencyMhz(), q.decimationFactor(), q.timeReference(), separationUncertaintyMm,
@@ -77,9 +67,8 @@ class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
         Double mm = q.probeCentreSeparationUncertaintyMm();
         Double in = q.probeCentreSeparationUncertaintyIn();
         if (mm != null && in != null) {
-            String detail = "give probe_centre_separation_uncertainty once: probe_centre_separation_uncertainty_mm or "
-                    + "probe_centre_separation_uncertainty_in, not both";
-            errors.add("probe_centre_separation_uncertainty_mm", detail).add("probe_centre_separation_uncertainty_in", detail);
+            errors.notBoth("probe_centre_separation_uncertainty", "probe_centre_separation_uncertainty_mm",
+                    "probe_centre_separation_uncertainty_in");
             return null;
         }
         if (in != null) {

@@ -13,6 +13,7 @@ import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.PeakReading;
 import utdigit.core.waveform.WaveformInput;
+import utdigit.web.common.InputMessages;
 
 /** POST /api/waveform-analyses. */
 @Schema(name = "WaveformAnalysisRequest", description = "A recorded pulse (its samples, equally spaced, and the rate "
@@ -26,13 +27,13 @@ public record WaveformAnalysisRequest(
                 schema = @Schema(type = "number", format = "double", example = "0.12"))
         // The count (16 to 8192) is checked by WaveformInput at /samples; a Bean Validation @Size here
         // would be written onto the items' schema as minimum/maximum by the model resolver.
-        @NotNull(message = "is required")
+        @NotNull(message = InputMessages.REQUIRED)
         List<Double> samples,
 
         @Schema(description = "The rate the record was sampled at, MHz (> 0, <= 100000); it should be well above "
                 + "the probe's band (the record's energy near its own Nyquist frequency is checked)",
-                format = "double", example = "100", exclusiveMinimumValue = 0, maximum = "100000")
-        @NotNull(message = "is required") @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
+                example = "100")
+        @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double recordSamplingFrequencyMhz,
 
         @Schema(description = "How the centre frequency is taken from the measured -6 dB edges: ARITHMETIC "
@@ -40,13 +41,12 @@ public record WaveformAnalysisRequest(
         CentreFrequencyConvention centreFrequencyConvention,
 
         @Schema(description = "The target (raw) sampling frequency to judge the recorded pulse at, MHz (> 0, "
-                + "<= 100000); gives the target figures", format = "double", example = "25",
-                exclusiveMinimumValue = 0, maximum = "100000")
+                + "<= 100000); gives the target figures", example = "25")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double samplingFrequencyMhz,
 
         @Schema(description = "The target's decimation factor m (integer 1 to 65536); default 1. Only with "
-                + "sampling_frequency_mhz", format = "int32", example = "1", minimum = "1", maximum = "65536")
+                + "sampling_frequency_mhz", example = "1")
         @Min(1) @Max(65536)
         Integer decimationFactor,
 
@@ -59,8 +59,7 @@ public record WaveformAnalysisRequest(
         PeakReading peakReading,
 
         @Schema(description = "Amplitude tolerance, dB (> 0, <= 40); gives the required rates of the record and of "
-                + "the model. Only with sampling_frequency_mhz", format = "double", example = "1",
-                exclusiveMinimumValue = 0, maximum = "40")
+                + "the model. Only with sampling_frequency_mhz", example = "1")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("40")
         Double amplitudeToleranceDb) {
 }

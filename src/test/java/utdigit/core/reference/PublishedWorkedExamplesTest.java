@@ -22,6 +22,7 @@ import utdigit.core.pulse.PistonDirectivity;
 import utdigit.core.quantization.DigitizedSignal;
 import utdigit.core.quantization.QuantizationCalculator;
 import utdigit.core.quantization.QuantizationInput;
+import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.SampleClock;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.SamplingCalculator;
@@ -110,8 +111,8 @@ class PublishedWorkedExamplesTest {
             case "DYNAMIC_RANGE_DB" -> QuantizationCalculator.compute(QuantizationInput.ofBitDepth(e.p1().intValue())
                     .withDigitizedSignal(DigitizedSignal.RECTIFIED)).dynamicRangeDb();
             case "SINGLE_INSTANT_UNCERTAINTY_NS" ->
-                    SampleClock.undecimated(1000.0 / e.p1()).singleInstantStandardUncertaintyNs();
-            case "DIFFERENCE_UNCERTAINTY_NS" -> SampleClock.undecimated(1000.0 / e.p1()).differenceStandardUncertaintyNs();
+                    SampleClock.of(1000.0 / e.p1(), 1, DecimationMode.DROP).singleInstantStandardUncertaintyNs();
+            case "DIFFERENCE_UNCERTAINTY_NS" -> SampleClock.of(1000.0 / e.p1(), 1, DecimationMode.DROP).differenceStandardUncertaintyNs();
             case "TWO_WAY_CONSTANT" -> PistonDirectivity.twoWayConstant(e.p1());
             case "FIRST_NULL_CONSTANT" -> PistonDirectivity.firstNullConstant();
             case "FIRST_ZERO_OF_J1" -> PistonDirectivity.firstNullConstant() * Math.PI;

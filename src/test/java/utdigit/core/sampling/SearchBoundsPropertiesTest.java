@@ -17,6 +17,7 @@ import org.quicktheories.generators.Generate;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.SearchBudget;
 import utdigit.core.pulse.GaussianPulse;
+import utdigit.core.pulse.Waves;
 
 /**
  * The work bounds of the numerical searches, over the whole ranges the contract admits (frequency
@@ -184,7 +185,7 @@ class SearchBoundsPropertiesTest {
         qt().withFixedSeed(SEED).withExamples(1000)
                 .forAll(positiveUpTo(40.0), logBetween(100.0, 20_000.0), positiveUpTo(1000.0), positiveUpTo(199.99999999999997))
                 .checkAssert((toleranceDb, velocityMPerS, fcMhz, bwPercent) -> {
-                    double wavelengthMm = TfmGridSampling.wavelengthMm(velocityMPerS, fcMhz);
+                    double wavelengthMm = Waves.wavelengthMm(velocityMPerS, fcMhz);
                     double widthMm;
                     try {
                         widthMm = TfmGridSampling.depthResponseWidthMm(velocityMPerS, GaussianPulse.of(fcMhz, bwPercent / 100.0));

@@ -12,6 +12,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 import utdigit.core.common.CalculationException;
 import utdigit.core.pulse.GaussianPulse;
+import utdigit.core.pulse.Waves;
 
 /** The TFM grid formulas: all derived models (src/docs/methods.md 3.7). */
 class TfmGridSamplingTest {
@@ -33,7 +34,7 @@ class TfmGridSamplingTest {
     @Test
     @DisplayName("wavelength lambda = v/f: 5920 m/s at 5 MHz is 1.184 mm (definition)")
     void wavelengthIsVelocityOverFrequency() {
-        assertThat(TfmGridSampling.wavelengthMm(5920.0, 5.0)).isCloseTo(1.184, within(ALLOWED_ROUNDING));
+        assertThat(Waves.wavelengthMm(5920.0, 5.0)).isCloseTo(1.184, within(ALLOWED_ROUNDING));
     }
 
     @ParameterizedTest

@@ -265,7 +265,7 @@ class ThicknessCalculatorTest {
     void dominantRectangularTermIsWarned() {
         // Rectangular of half-width a: 2u = 2a/sqrt(3) > a, so +/- 2u covers the whole distribution.
         ThicknessResult r = ThicknessCalculator.compute(ThicknessInput.of(100.0, V_M_PER_S, 10.0));
-        assertThat(warningMessage(r, "SAMPLING_TERM_DOMINATES")).contains("rectangular").contains("100.0 %");
+        assertThat(warningMessage(r, "SAMPLING_TERM_DOMINATES")).contains("rectangular").contains("covers 100 %");
         assertThat(r.expandedUncertaintyMm()).isGreaterThan(2.96 * 0.005); // beyond the worst case v/2 x dt/2
         assertThat(r.references()).anyMatch(ref -> ref.topic().equals("expanded uncertainty")
                 && ref.id().equals("jcgm-100-2008-6.2"));

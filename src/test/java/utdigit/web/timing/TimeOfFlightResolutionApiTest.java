@@ -400,6 +400,19 @@ class TimeOfFlightResolutionApiTest extends ApiTest {
         }
 
         @Test
+        @DisplayName("the velocity fields' shared annotations (VelocityFields) give each its Bean Validation range")
+        void velocityFieldRanges() {
+            // The contract's ranges: velocity 100 to 20000 m/s, in/us above 0, water 0 to 95 C; the details are
+            // Bean Validation's own messages, which the service's range checks after conversion do not write.
+            assertInvalid(PATH, "{\"sampling_frequency_mhz\": 100, \"velocity_m_per_s\": 20001}", "/velocity_m_per_s")
+                    .body("errors.detail", hasItem("must be less than or equal to 20000"));
+            assertInvalid(PATH, "{\"sampling_frequency_mhz\": 100, \"velocity_in_per_us\": 0}", "/velocity_in_per_us")
+                    .body("errors.detail", hasItem("must be greater than 0"));
+            assertInvalid(PATH, "{\"sampling_frequency_mhz\": 100, \"material\": \"water\", \"temperature_c\": 96}",
+                    "/temperature_c").body("errors.detail", hasItem("must be less than or equal to 95"));
+        }
+
+        @Test
         void shearWaveInWaterIsImpossible() {
             post(PATH, """
                     {"sampling_frequency_mhz": 100, "material": "water", "wave_mode": "SHEAR"}""")
