@@ -14,7 +14,7 @@ import utdigit.web.common.VelocitySourceView;
 
 /** Request to core input, core result to answer, for TOFD set-ups. */
 @Component
-class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
+class TofdSetupCalculation implements Calculation<TofdSetupRequest, TofdSetupResponse> {
     static final String NAME = "tofd-setups";
 
     @Override
@@ -25,6 +25,11 @@ class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
     @Override
     public Class<TofdSetupRequest> requestType() {
         return TofdSetupRequest.class;
+    }
+
+    @Override
+    public Class<TofdSetupResponse> answerType() {
+        return TofdSetupResponse.class;
     }
 
     @Override
