@@ -30,6 +30,7 @@ final class CanonicalWriter {
     CanonicalWriter(JsonMapper mapper) {
         this.writer = mapper.rebuild()
                 .enable(MapperFeature.SORT_PROPERTIES_ALPHABETICALLY)
+                .disable(MapperFeature.SORT_CREATOR_PROPERTIES_FIRST) // a record's members are its creator's: sort them too
                 .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
                 .disable(SerializationFeature.INDENT_OUTPUT)
                 .disable(JsonWriteFeature.WRITE_HEX_UPPER_CASE, JsonWriteFeature.ESCAPE_FORWARD_SLASHES,

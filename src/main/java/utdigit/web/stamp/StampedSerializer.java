@@ -46,6 +46,9 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
             extra.add(WARNINGS);
         }
         extra.add(Stamper.STAMP);
+        if (canonical) {
+            extra.sort(null); // merged into the sorted members
+        }
         JsonGenerator out = canonical ? gen : new FiniteNumbers(gen);
         gen.writeStartObject(value);
         try {
