@@ -30,6 +30,7 @@ import utdigit.web.common.CalculationRunner;
 import utdigit.web.common.FieldError;
 import utdigit.web.common.InputProblem;
 import utdigit.web.common.Problems;
+import utdigit.web.common.RecordMembers;
 import utdigit.web.common.ProblemType;
 import utdigit.web.metrics.ServiceMetrics;
 import utdigit.web.stamp.Stamped;
@@ -286,22 +287,60 @@ class BatchProcessor implements DisposableBean {
 
     /** One row's answer: OK with the single endpoint's answer, or INVALID with its problem. */
     <Q, A> BatchRow answer(Calculation<Q, A> c, Row row) {
+        if (row.line() != null) {
+            try {
+                Q request = runner.read(c, mapper.createParser(row.line()));
+                if (request != null) { // a line "null" is answered as a tree: "must be a JSON object"
+                    return answered(c, row, printable(RecordMembers.get(request, ID)), request);
+                }
+            } catch (InputProblem | tools.jackson.core.JacksonException unread) {
+                // explained as before: the line's own JSON problem, or the tree's reading of the request
+                String notJson = NdjsonSource.unreadable(mapper, row.line());
+                if (notJson != null) {
+                    return problemRow(row.number(), null, ProblemType.MALFORMED_BODY, notJson,
+                            List.of(new FieldError("", notJson)));
+                }
+            }
+            row = Row.of(row.number(), mapper.readTree(row.line()));
+        }
         JsonNode body = row.body();
-        String id = row.id() != null ? row.id() : body != null && body.path("sheet_id").isString()
-                ? utdigit.web.common.IJson.printable(body.get("sheet_id").stringValue()) : null;
+        String id = row.id() != null ? row.id() : body != null && body.path(ID).isString()
+                ? printable(body.get(ID).stringValue()) : null;
         if (!row.readable()) {
             return problemRow(row.number(), id, row.readProblem(), row.readDetail(), row.readErrors());
         }
         try {
-            Q request = row.tokens() != null ? runner.read(c, row.tokens().asParser()) : runner.read(c, body);
+            return answered(c, row, id, row.tokens() != null ? runner.read(c, row.tokens().asParser())
+                    : runner.read(c, body));
+        } catch (InputProblem p) {
+            return problemRow(row.number(), id, p.type(), p.getMessage(), p.errors());
+        } catch (RuntimeException e) {
+            return failed(c, row, id, e);
+        }
+    }
+
+    private static BatchRow failed(Calculation<?, ?> c, Row row, String id, RuntimeException e) {
+        log.error("unexpected failure on batch row {} of {}", row.number(), c.name(), e);
+        return problemRow(row.number(), id, ProblemType.INTERNAL_ERROR,
+                "the service could not answer this row; the failure is logged", List.of());
+    }
+
+    /** The id of a row: its request's sheet_id, when it has one. */
+    private static final String ID = "sheet_id";
+
+    private static String printable(Object id) {
+        return id instanceof String s ? utdigit.web.common.IJson.printable(s) : null;
+    }
+
+    /** A row whose request was read: OK with its answer, or INVALID with its problem. */
+    private <Q, A> BatchRow answered(Calculation<Q, A> c, Row row, String id, Q request) {
+        try {
             Stamped<A> result = runner.run(c, request);
             return new BatchRow(row.number(), id, BatchRow.OK, null, result, null);
         } catch (InputProblem p) {
             return problemRow(row.number(), id, p.type(), p.getMessage(), p.errors());
         } catch (RuntimeException e) {
-            log.error("unexpected failure on batch row {} of {}", row.number(), c.name(), e);
-            return problemRow(row.number(), id, ProblemType.INTERNAL_ERROR,
-                    "the service could not answer this row; the failure is logged", List.of());
+            return failed(c, row, id, e);
         }
     }
 

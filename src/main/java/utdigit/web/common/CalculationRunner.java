@@ -18,6 +18,7 @@ import org.springframework.stereotype.Component;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.SearchBudget;
@@ -39,6 +40,8 @@ import utdigit.web.stamp.Stamper;
 public class CalculationRunner implements DisposableBean {
     private static final org.slf4j.Logger log = org.slf4j.LoggerFactory.getLogger(CalculationRunner.class);
     private final Map<String, Calculation<?, ?>> byName = new LinkedHashMap<>();
+    /** The strict reader of each request type (batch rows). */
+    private final Map<Class<?>, ObjectReader> readers = new java.util.concurrent.ConcurrentHashMap<>();
     private final Validator validator;
     private final JsonMapper mapper;
     private final Stamper stamper;
@@ -119,7 +122,7 @@ public class CalculationRunner implements DisposableBean {
      */
     public <Q> Q read(Calculation<Q, ?> c, JsonParser tokens) {
         try (tokens) {
-            return mapper.readerFor(c.requestType()).readValue(tokens);
+            return readers.computeIfAbsent(c.requestType(), mapper::readerFor).readValue(tokens);
         } catch (JacksonException e) {
             throw JacksonProblems.toInputProblem(e);
         }
