@@ -162,10 +162,10 @@ public class CalculationRunner implements DisposableBean {
             scheduled.cancel(false);
             alarm.disarm();
         }
-        List<String> nonFinite = NonFiniteFields.of(answer);
-        String notRepresentable = nonFinite.isEmpty() ? null : "no finite value exists for "
-                + String.join(", ", nonFinite) + " with these inputs; returned as null";
-        return stamper.stamp(c.name(), answer, notRepresentable);
+        // numbers with no finite value are seen as the stamp's canonical bytes are written; only then
+        // is the answer walked for their pointers
+        return stamper.stamp(c.name(), answer, a -> "no finite value exists for "
+                + String.join(", ", NonFiniteFields.of(a)) + " with these inputs; returned as null");
     }
 
     /**

@@ -1,15 +1,15 @@
 package utdigit.web.common;
 
-import java.lang.invoke.MethodHandle;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Function;
 
 /**
  * The backstop for numbers with no finite value in an answer: the JSON Pointers of every NaN or
  * infinite double, found by walking the answer record's members ({@link RecordMembers}), in the
- * order the answer writes them. The core answers null with a warning where a
+ * order the answer writes them; called only when the stamp's canonical pass met such a number. The core answers null with a warning where a
  * value cannot exist; a formula that still yields a non-finite value is written as null with a
  * RESULT_NOT_REPRESENTABLE warning naming it, never as a non-JSON number.
  */
@@ -46,8 +46,8 @@ final class NonFiniteFields {
                 walk(e.getValue(), JsonPointers.child(pointer, String.valueOf(e.getKey())), found);
             }
         } else if (value.getClass().isRecord()) {
-            for (Map.Entry<String, MethodHandle> m : RecordMembers.of(value.getClass()).entrySet()) {
-                walk(RecordMembers.invoke(m.getValue(), value), JsonPointers.child(pointer, m.getKey()), found);
+            for (Map.Entry<String, Function<Object, Object>> m : RecordMembers.of(value.getClass()).entrySet()) {
+                walk(m.getValue().apply(value), JsonPointers.child(pointer, m.getKey()), found);
             }
         }
     }

@@ -41,21 +41,25 @@ final class CanonicalWriter {
     }
 
     /** Writes the canonical bytes the stamp of {@code answer} covers into {@code out}. */
-    void write(Stamped<?> answer, OutputStream out) {
-        try (JsonGenerator gen = new Canonical(writer.createGenerator(out))) {
+    void write(Stamped<?> answer, Stamper.NonFiniteSeen seen, OutputStream out) {
+        try (JsonGenerator gen = new Canonical(writer.createGenerator(out), seen)) {
             writer.writeValue(gen, answer);
         }
     }
 
     /** Numbers and strings as RFC 8785 writes them. */
     private static final class Canonical extends JsonGeneratorDelegate {
-        Canonical(JsonGenerator delegate) {
+        private final Stamper.NonFiniteSeen seen;
+
+        Canonical(JsonGenerator delegate, Stamper.NonFiniteSeen seen) {
             super(delegate, false);
+            this.seen = seen;
         }
 
         @Override
         public JsonGenerator writeNumber(double v) {
             if (!Double.isFinite(v)) {
+                seen.any = true;
                 delegate.writeNull(); // named by the answer's RESULT_NOT_REPRESENTABLE warning
             } else {
                 delegate.writeRawValue(CanonicalJson.number(v));

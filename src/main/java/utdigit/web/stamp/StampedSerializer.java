@@ -3,6 +3,8 @@ package utdigit.web.stamp;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import tools.jackson.core.JsonGenerator;
 import tools.jackson.databind.SerializationContext;
 import tools.jackson.databind.ValueSerializer;
@@ -23,23 +25,34 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
     static final Object CANONICAL = StampedSerializer.class.getName() + ".canonical";
     private static final String WARNINGS = "warnings";
 
+    /** The members of each answer serializer (one per answer type and mapper), in the order it writes them. */
+    private static final Map<ValueSerializer<?>, PropertyWriter[]> MEMBERS = new ConcurrentHashMap<>();
+
     StampedSerializer() {
         super(Stamped.class);
+    }
+
+    private static PropertyWriter[] members(ValueSerializer<?> serializer) {
+        List<PropertyWriter> members = new ArrayList<>(24);
+        for (Iterator<PropertyWriter> it = serializer.properties(); it.hasNext(); ) {
+            members.add(it.next());
+        }
+        if (members.isEmpty()) {
+            throw new IllegalStateException("an answer must be a record with members: " + serializer.handledType());
+        }
+        return members.toArray(PropertyWriter[]::new);
     }
 
     @Override
     public void serialize(Stamped<?> value, JsonGenerator gen, SerializationContext ctxt) {
         boolean canonical = ctxt.getAttribute(CANONICAL) != null;
         Object answer = value.answer();
-        ValueSerializer<Object> serializer = ctxt.findValueSerializer(answer.getClass());
-        List<PropertyWriter> members = new ArrayList<>(24);
-        for (Iterator<PropertyWriter> it = serializer.properties(); it.hasNext(); ) {
-            members.add(it.next());
+        PropertyWriter[] members = MEMBERS.computeIfAbsent(ctxt.findValueSerializer(answer.getClass()),
+                StampedSerializer::members);
+        boolean hasWarnings = false;
+        for (PropertyWriter m : members) {
+            hasWarnings |= WARNINGS.equals(m.getName());
         }
-        if (members.isEmpty()) {
-            throw new IllegalStateException("an answer must be a record with members: " + answer.getClass());
-        }
-        boolean hasWarnings = members.stream().anyMatch(m -> WARNINGS.equals(m.getName()));
         // members the answer record does not have: the stamp, and the warnings when one must be added
         List<String> extra = new ArrayList<>(2);
         if (!hasWarnings && value.notRepresentable() != null) {

@@ -43,16 +43,32 @@ public class Stamper {
 
     /**
      * Stamps a typed answer: its canonical bytes (RFC 8785, with the stamp reduced to {calculation,
-     * service_version}) are written once, straight into SHA-256 and, with a key, HMAC-SHA256.
-     *
-     * @param notRepresentable null, or the message of the RESULT_NOT_REPRESENTABLE warning the
-     *     answer carries after its own warnings
+     * service_version}) are written once, straight into SHA-256 and, with a key, HMAC-SHA256. Its
+     * numbers are checked as they are written: when one
+     * has no finite value (written as null), {@code notRepresentable} gives the message of the
+     * RESULT_NOT_REPRESENTABLE warning that names them, and the answer is stamped again with it.
+     * Every number is looked at once, in the pass the stamp needs anyway.
      */
-    public <A> Stamped<A> stamp(String calculation, A answer, String notRepresentable) {
+    public <A> Stamped<A> stamp(String calculation, A answer, java.util.function.Function<A, String> notRepresentable) {
+        NonFiniteSeen seen = new NonFiniteSeen();
+        Stamped<A> stamped = stampOnce(calculation, answer, null, seen);
+        return seen.any ? stampOnce(calculation, answer, notRepresentable.apply(answer)) : stamped;
+    }
+
+    /** Set when a canonical pass met a number with no finite value. */
+    static final class NonFiniteSeen {
+        boolean any;
+    }
+
+    private <A> Stamped<A> stampOnce(String calculation, A answer, String notRepresentable) {
+        return stampOnce(calculation, answer, notRepresentable, new NonFiniteSeen());
+    }
+
+    private <A> Stamped<A> stampOnce(String calculation, A answer, String notRepresentable, NonFiniteSeen seen) {
         Stamped<A> unsigned = new Stamped<>(answer, calculation, serviceVersion, null, null, null, notRepresentable);
         MessageDigest sha256 = sha256();
         Mac mac = key.configured() ? key.mac() : null;
-        canonical.write(unsigned, new OutputStream() {
+        canonical.write(unsigned, seen, new OutputStream() {
             @Override
             public void write(int b) {
                 sha256.update((byte) b);
@@ -78,7 +94,7 @@ public class Stamper {
     /** The canonical bytes the stamp of {@code answer} covers (for tests and tools). */
     public static byte[] coveredBytes(JsonMapper mapper, Stamped<?> answer) {
         java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
-        new CanonicalWriter(mapper).write(answer, out);
+        new CanonicalWriter(mapper).write(answer, new NonFiniteSeen(), out);
         return out.toByteArray();
     }
 
