@@ -26,7 +26,7 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
     private static final String WARNINGS = "warnings";
 
     /** The members of each answer serializer (one per answer type and mapper), in the order it writes them. */
-    private static final Map<ValueSerializer<?>, PropertyWriter[]> MEMBERS = new ConcurrentHashMap<>();
+    private static final Map<ValueSerializer<?>, Layout> LAYOUTS = new ConcurrentHashMap<>();
 
     StampedSerializer() {
         super(Stamped.class);
@@ -47,31 +47,32 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
     public void serialize(Stamped<?> value, JsonGenerator gen, SerializationContext ctxt) {
         boolean canonical = ctxt.getAttribute(CANONICAL) != null;
         Object answer = value.answer();
-        PropertyWriter[] members = MEMBERS.computeIfAbsent(ctxt.findValueSerializer(answer.getClass()),
-                StampedSerializer::members);
-        boolean hasWarnings = false;
-        for (PropertyWriter m : members) {
-            hasWarnings |= WARNINGS.equals(m.getName());
-        }
-        // members the answer record does not have: the stamp, and the warnings when one must be added
-        List<String> extra = new ArrayList<>(2);
-        if (!hasWarnings && value.notRepresentable() != null) {
-            extra.add(WARNINGS);
-        }
-        extra.add(Stamper.STAMP);
-        if (canonical) {
-            extra.sort(null); // merged into the sorted members
-        }
+        Layout layout = LAYOUTS.computeIfAbsent(ctxt.findValueSerializer(answer.getClass()), Layout::of);
+        boolean warn = value.notRepresentable() != null;
+        // members the answer record does not have: the stamp, and the warnings when one must be added;
+        // in the canonical form each goes before the first member whose name sorts after it (else last)
+        int stampAt = canonical ? layout.sortedBefore(Stamper.STAMP) : layout.members.length;
+        int warningsAt = !warn || layout.warnings >= 0 ? -1
+                : canonical ? layout.sortedBefore(WARNINGS) : layout.members.length;
         JsonGenerator out = canonical ? gen : new FiniteNumbers(gen);
         gen.writeStartObject(value);
         try {
-            for (PropertyWriter m : members) {
-                if (canonical) {
-                    while (!extra.isEmpty() && extra.get(0).compareTo(m.getName()) < 0) {
-                        writeExtra(extra.remove(0), value, out, ctxt, true);
-                    }
+            for (int i = 0; i <= layout.members.length; i++) {
+                // "stamp" sorts before "warnings": at one place, the stamp first in the canonical form
+                if (canonical && i == stampAt) {
+                    writeStamp(value, out, true);
                 }
-                if (WARNINGS.equals(m.getName()) && value.notRepresentable() != null) {
+                if (i == warningsAt) {
+                    writeWarnings(null, value, out, ctxt);
+                }
+                if (!canonical && i == stampAt) {
+                    writeStamp(value, out, false);
+                }
+                if (i == layout.members.length) {
+                    break;
+                }
+                PropertyWriter m = layout.members[i];
+                if (warn && i == layout.warnings) {
                     writeWarnings(((BeanPropertyWriter) m).get(answer), value, out, ctxt);
                 } else {
                     m.serializeAsProperty(answer, out, ctxt);
@@ -82,18 +83,36 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
         } catch (Exception e) {
             throw new IllegalStateException("could not write the answer of " + value.calculation(), e);
         }
-        for (String name : extra) {
-            writeExtra(name, value, out, ctxt, canonical);
-        }
         gen.writeEndObject();
     }
 
-    private static void writeExtra(String name, Stamped<?> value, JsonGenerator gen, SerializationContext ctxt,
-                                   boolean canonical) {
-        if (WARNINGS.equals(name)) {
-            writeWarnings(null, value, gen, ctxt);
-            return;
+    /** The members of an answer serializer in the order it writes them, their names, and where warnings is. */
+    private record Layout(PropertyWriter[] members, String[] names, int warnings) {
+        static Layout of(ValueSerializer<?> serializer) {
+            PropertyWriter[] members = StampedSerializer.members(serializer);
+            String[] names = new String[members.length];
+            int warnings = -1;
+            for (int i = 0; i < members.length; i++) {
+                names[i] = members[i].getName();
+                if (WARNINGS.equals(names[i])) {
+                    warnings = i;
+                }
+            }
+            return new Layout(members, names, warnings);
         }
+
+        /** The index of the first member whose name sorts after {@code name} (members sorted by name). */
+        int sortedBefore(String name) {
+            for (int i = 0; i < names.length; i++) {
+                if (name.compareTo(names[i]) < 0) {
+                    return i;
+                }
+            }
+            return names.length;
+        }
+    }
+
+    private static void writeStamp(Stamped<?> value, JsonGenerator gen, boolean canonical) {
         gen.writeName(Stamper.STAMP);
         gen.writeStartObject();
         gen.writeStringProperty("calculation", value.calculation());

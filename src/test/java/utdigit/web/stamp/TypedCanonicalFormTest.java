@@ -27,6 +27,8 @@ class TypedCanonicalFormTest {
     CalculationRunner runner;
     @Autowired
     JsonMapper mapper;
+    @Autowired
+    Stamper stamper;
 
     @Test
     void typedCanonicalBytesEqualTheTreeFormOfEveryCommittedExampleAnswer() throws Exception {
@@ -76,5 +78,42 @@ class TypedCanonicalFormTest {
         assertThat(new String(typed, StandardCharsets.UTF_8)).contains("\"huge\":1e+21", "\"tiny\":1e-7",
                 "\"smallest\":5e-324", "\"negative_zero\":0,", "\"integral\":25,", "\\u0000", "\\u001f",
                 "\\b", "\\f", "slash /", "\"none\":null");
+    }
+
+    record Note(String code, String message) {}
+
+    record WithNonFinite(double a, java.util.Optional<Double> b, List<Double> c, double negativeZero, List<Note> warnings) {}
+
+    record NoWarnings(double a, String z) {}
+
+    /**
+     * A number with no finite value is written as null with a RESULT_NOT_REPRESENTABLE warning after
+     * the answer's own (a warnings member is added when the answer has none), -0.0 as 0.0, and the
+     * stamp covers exactly that document: its sha256 equals the tree form's over the written answer.
+     */
+    @Test
+    void numbersWithNoFiniteValueAreNullWithAWarningAndStampedAsWritten() {
+        WithNonFinite answer = new WithNonFinite(Double.NaN, java.util.Optional.of(Double.POSITIVE_INFINITY),
+                List.of(1.0, Double.NEGATIVE_INFINITY), -0.0, List.of(new Note("OWN", "the answer's own warning")));
+        Stamped<WithNonFinite> stamped = stamper.stamp("non-finite", answer, a -> "three figures");
+        assertThat(stamped.notRepresentable()).isEqualTo("three figures");
+        JsonNode written = mapper.readTree(mapper.writeValueAsString(stamped));
+        assertThat(written.get("a").isNull()).isTrue();
+        assertThat(written.get("b").isNull()).isTrue();
+        assertThat(written.get("c").get(1).isNull()).isTrue();
+        assertThat(Double.doubleToRawLongBits(written.get("negative_zero").doubleValue())).isZero();
+        assertThat(written.get("warnings").get(0).get("code").asString()).isEqualTo("OWN");
+        assertThat(written.get("warnings").get(1).get("code").asString()).isEqualTo(Stamped.NOT_REPRESENTABLE);
+        assertThat(written.get("warnings").get(1).get("message").asString()).isEqualTo("three figures");
+        assertThat(List.copyOf(written.propertyNames())).endsWith("warnings", "stamp");
+        assertThat(stamped.sha256()).isEqualTo(StampKey.sha256Hex(Stamper.coveredBytes(written)));
+
+        Stamped<NoWarnings> added = stamper.stamp("non-finite", new NoWarnings(Double.NaN, "z"), a -> "one figure");
+        JsonNode withWarnings = mapper.readTree(mapper.writeValueAsString(added));
+        assertThat(List.copyOf(withWarnings.propertyNames())).containsExactly("a", "z", "warnings", "stamp");
+        assertThat(added.sha256()).isEqualTo(StampKey.sha256Hex(Stamper.coveredBytes(withWarnings)));
+
+        Stamped<NoWarnings> finite = stamper.stamp("finite", new NoWarnings(1.0, "z"), a -> "never asked");
+        assertThat(finite.notRepresentable()).isNull();
     }
 }
