@@ -30,7 +30,7 @@ import utdigit.web.common.VelocitySourceView;
  * millimetre input the caller gave in inches is pointed at the inch input.
  */
 @Component
-class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetRequest> {
+class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetRequest, AcquisitionBudgetResponse> {
     static final String NAME = "acquisition-budgets";
 
     @Override
@@ -41,6 +41,11 @@ class AcquisitionBudgetCalculation implements Calculation<AcquisitionBudgetReque
     @Override
     public Class<AcquisitionBudgetRequest> requestType() {
         return AcquisitionBudgetRequest.class;
+    }
+
+    @Override
+    public Class<AcquisitionBudgetResponse> answerType() {
+        return AcquisitionBudgetResponse.class;
     }
 
     /** A core input named in mm points at the inch form when the caller gave that; a velocity at its source. */

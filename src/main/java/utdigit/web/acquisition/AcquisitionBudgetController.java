@@ -9,16 +9,18 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Acquisition", description = "Acquisition budget: data volume, scan speed and wrap-around PRF")
 class AcquisitionBudgetController {
     private final CalculationRunner runner;
+    private final AcquisitionBudgetCalculation calculation;
 
-    AcquisitionBudgetController(CalculationRunner runner) {
+    AcquisitionBudgetController(CalculationRunner runner, AcquisitionBudgetCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + AcquisitionBudgetCalculation.NAME,
@@ -38,7 +40,7 @@ class AcquisitionBudgetController {
                     + "qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The budget",
             content = @Content(schema = @Schema(implementation = AcquisitionBudgetResponse.class)))
-    ObjectNode budget(@RequestBody AcquisitionBudgetRequest request) {
-        return runner.run(AcquisitionBudgetCalculation.NAME, request);
+    Stamped<AcquisitionBudgetResponse> budget(@RequestBody AcquisitionBudgetRequest request) {
+        return runner.run(calculation, request);
     }
 }

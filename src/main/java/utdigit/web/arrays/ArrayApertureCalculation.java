@@ -13,7 +13,7 @@ import utdigit.web.common.VelocitySourceView;
 
 /** Request to core input, core result to answer, for array apertures. */
 @Component
-class ArrayApertureCalculation implements Calculation<ArrayApertureRequest> {
+class ArrayApertureCalculation implements Calculation<ArrayApertureRequest, ArrayApertureResponse> {
     static final String NAME = "array-apertures";
 
     @Override
@@ -24,6 +24,11 @@ class ArrayApertureCalculation implements Calculation<ArrayApertureRequest> {
     @Override
     public Class<ArrayApertureRequest> requestType() {
         return ArrayApertureRequest.class;
+    }
+
+    @Override
+    public Class<ArrayApertureResponse> answerType() {
+        return ArrayApertureResponse.class;
     }
 
     @Override

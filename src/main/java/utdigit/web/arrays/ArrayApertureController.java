@@ -9,16 +9,18 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Arrays", description = "A linear array's active aperture: near field, beam spread and grating lobes")
 class ArrayApertureController {
     private final CalculationRunner runner;
+    private final ArrayApertureCalculation calculation;
 
-    ArrayApertureController(CalculationRunner runner) {
+    ArrayApertureController(CalculationRunner runner, ArrayApertureCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + ArrayApertureCalculation.NAME,
@@ -35,7 +37,7 @@ class ArrayApertureController {
                     + "and procedure decide; results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The aperture",
             content = @Content(schema = @Schema(implementation = ArrayApertureResponse.class)))
-    ObjectNode assess(@RequestBody ArrayApertureRequest request) {
-        return runner.run(ArrayApertureCalculation.NAME, request);
+    Stamped<ArrayApertureResponse> assess(@RequestBody ArrayApertureRequest request) {
+        return runner.run(calculation, request);
     }
 }

@@ -9,8 +9,9 @@ import org.springframework.boot.context.properties.ConfigurationProperties;
  *     a chunked body that grows past it ends with a LIMIT_REACHED row
  * @param maxRows most rows answered; the next ends the stream with a LIMIT_REACHED row
  * @param flushEveryRows rows written between flushes of the answer (progress for the caller)
- * @param workers threads that answer the rows of all batches (the request's own thread reads the
- *     body and writes the answer in input order); 0 or 1 answers each row on the request's thread
+ * @param workers threads that answer the rows of all batches (a Spring task executor; the request's own
+ *     thread reads the body and writes the answer in input order); 0 or 1 answers each row on the
+ *     request's thread
  */
 @ConfigurationProperties("utdigit.batch")
 record BatchLimits(Long maxBodyBytes, Long maxRows, Integer flushEveryRows, Integer workers) {

@@ -15,32 +15,32 @@ import java.util.Map;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
-import java.util.concurrent.ThreadFactory;
-import java.util.concurrent.atomic.AtomicInteger;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.beans.factory.DisposableBean;
+import org.springframework.boot.task.ThreadPoolTaskExecutorBuilder;
+import org.springframework.scheduling.concurrent.ThreadPoolTaskExecutor;
 import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
-import tools.jackson.databind.node.ObjectNode;
 import tools.jackson.dataformat.csv.CsvMapper;
 import utdigit.web.common.Calculation;
 import utdigit.web.common.CalculationRunner;
 import utdigit.web.common.FieldError;
 import utdigit.web.common.InputProblem;
 import utdigit.web.common.Problems;
+import utdigit.web.common.RecordMembers;
 import utdigit.web.common.ProblemType;
 import utdigit.web.metrics.ServiceMetrics;
+import utdigit.web.stamp.Stamped;
 
 /**
  * The one streaming component behind every batch endpoint: reads rows one at a time in the body's
  * format, answers each through the same {@link CalculationRunner} path as the single endpoint (on
  * the shared worker threads, utdigit.batch.workers), and writes each answer as soon as it and every
- * row before it are computed, in input order. Memory stays flat whatever the
+ * row before it are computed, in input order. A row stays typed from its request record to its
+ * stamped answer ({@link BatchRow}). Memory stays flat whatever the
  * number of rows. A bad row is answered INVALID with its problem and never stops the batch; a
  * limit reached mid-way ends the stream with one LIMIT_REACHED row naming the first row not
  * processed.
@@ -67,31 +67,34 @@ class BatchProcessor implements DisposableBean {
     private final ServiceMetrics metrics;
     private final Map<String, RecordShape> requestShapes = new ConcurrentHashMap<>();
     private final Map<String, List<String>> answerColumns = new ConcurrentHashMap<>();
-    /** The threads that answer rows, shared by every batch; null: rows are answered on the request's thread. */
-    private final ExecutorService workers;
+    /**
+     * The threads that answer rows, shared by every batch: Spring's task executor, built by Spring
+     * Boot's builder (not a bean: an Executor bean would replace the application's own); null: rows
+     * are answered on the request's thread.
+     */
+    private final ThreadPoolTaskExecutor workers;
 
-    BatchProcessor(CalculationRunner runner, JsonMapper mapper, BatchLimits limits, ServiceMetrics metrics) {
+    BatchProcessor(CalculationRunner runner, JsonMapper mapper, BatchLimits limits, ServiceMetrics metrics,
+                   ThreadPoolTaskExecutorBuilder executors) {
         this.runner = runner;
         this.mapper = mapper;
         this.csv = CsvMapper.builder().build();
         this.limits = limits;
         this.metrics = metrics;
-        this.workers = limits.workers() <= 1 ? null : Executors.newFixedThreadPool(limits.workers(), new ThreadFactory() {
-            private final AtomicInteger count = new AtomicInteger();
-
-            @Override
-            public Thread newThread(Runnable r) {
-                Thread t = new Thread(r, "batch-worker-" + count.incrementAndGet());
-                t.setDaemon(true);
-                return t;
-            }
-        });
+        if (limits.workers() <= 1) {
+            this.workers = null;
+        } else {
+            this.workers = executors.corePoolSize(limits.workers()).maxPoolSize(limits.workers())
+                    .threadNamePrefix("batch-worker-").build();
+            this.workers.setDaemon(true);
+            this.workers.initialize();
+        }
     }
 
     @Override
     public void destroy() {
         if (workers != null) {
-            workers.shutdownNow();
+            workers.shutdown(); // interrupts rows still being answered
         }
     }
 
@@ -104,7 +107,7 @@ class BatchProcessor implements DisposableBean {
      * row is answered) and returns its rows.
      */
     RowSource open(String calculation, Format format, InputStream body) {
-        Calculation<?> c = runner.calculation(calculation);
+        Calculation<?, ?> c = runner.calculation(calculation);
         InputStream in = new CountingInputStream(skipBom(body), limits.maxBodyBytes());
         return switch (format) {
             case JSON -> new JsonArraySource(mapper, in);
@@ -119,8 +122,8 @@ class BatchProcessor implements DisposableBean {
         return switch (format) {
             case JSON -> new JsonArraySink(mapper, out);
             case NDJSON -> new NdjsonSink(mapper, out);
-            case CSV -> new CsvSink(csv, out, answerColumns.computeIfAbsent(calculation,
-                    k -> RecordShape.answerColumns(answerType(runner.calculation(k)))));
+            case CSV -> new CsvSink(csv, mapper, out, answerColumns.computeIfAbsent(calculation,
+                    k -> RecordShape.answerColumns(runner.calculation(k).answerType())));
         };
     }
 
@@ -130,6 +133,12 @@ class BatchProcessor implements DisposableBean {
      * threads, at most {@link #WINDOW} rows ahead of the one being written, so memory stays flat.
      */
     long process(String calculation, RowSource rows, RowSink answers, OutputStream flushTarget) throws IOException {
+        return process(runner.calculation(calculation), rows, answers, flushTarget);
+    }
+
+    private <Q, A> long process(Calculation<Q, A> c, RowSource rows, RowSink answers, OutputStream flushTarget)
+            throws IOException {
+        String calculation = c.name();
         InOrder pending = new InOrder(counted(calculation, answers), flushTarget);
         long answered = 0;
         try (rows) {
@@ -161,9 +170,9 @@ class BatchProcessor implements DisposableBean {
                     break;
                 }
                 if (workers == null) {
-                    pending.add(answer(calculation, row));
+                    pending.add(answer(c, row));
                 } else {
-                    pending.add(workers.submit(() -> answer(calculation, row)));
+                    pending.add(workers.submit(() -> answer(c, row)));
                 }
                 answered++;
             }
@@ -181,7 +190,7 @@ class BatchProcessor implements DisposableBean {
 
     /** The answers not yet written, oldest first; written in input order as they complete. */
     private final class InOrder {
-        private final ArrayDeque<Future<ObjectNode>> queue = new ArrayDeque<>();
+        private final ArrayDeque<Future<BatchRow>> queue = new ArrayDeque<>();
         private final RowSink sink;
         private final OutputStream flushTarget;
         private long written;
@@ -191,11 +200,11 @@ class BatchProcessor implements DisposableBean {
             this.flushTarget = flushTarget;
         }
 
-        void add(ObjectNode done) throws IOException {
+        void add(BatchRow done) throws IOException {
             add(CompletableFuture.completedFuture(done));
         }
 
-        void add(Future<ObjectNode> answer) throws IOException {
+        void add(Future<BatchRow> answer) throws IOException {
             queue.add(answer);
             // write what is already done; wait for the oldest only when the window is full
             while (!queue.isEmpty() && (queue.size() > WINDOW || queue.peek().isDone())) {
@@ -218,7 +227,7 @@ class BatchProcessor implements DisposableBean {
             queue.clear();
         }
 
-        private ObjectNode result(Future<ObjectNode> answer) {
+        private BatchRow result(Future<BatchRow> answer) {
             try {
                 return answer.get();
             } catch (InterruptedException e) {
@@ -229,7 +238,7 @@ class BatchProcessor implements DisposableBean {
             }
         }
 
-        private void write(ObjectNode row) throws IOException {
+        private void write(BatchRow row) throws IOException {
             sink.write(row);
             if (++written % limits.flushEveryRows() == 0) {
                 sink.flush();
@@ -242,9 +251,9 @@ class BatchProcessor implements DisposableBean {
     private RowSink counted(String calculation, RowSink sink) {
         return new RowSink() {
             @Override
-            public void write(ObjectNode outputRow) throws IOException {
+            public void write(BatchRow outputRow) throws IOException {
                 sink.write(outputRow);
-                metrics.batchRow(calculation, outputRow.path("status").asString());
+                metrics.batchRow(calculation, outputRow.status());
             }
 
             @Override
@@ -277,63 +286,73 @@ class BatchProcessor implements DisposableBean {
     }
 
     /** One row's answer: OK with the single endpoint's answer, or INVALID with its problem. */
-    ObjectNode answer(String calculation, Row row) {
+    <Q, A> BatchRow answer(Calculation<Q, A> c, Row row) {
+        if (row.line() != null) {
+            try {
+                Q request = runner.read(c, mapper.createParser(row.line()));
+                if (request != null) { // a line "null" is answered as a tree: "must be a JSON object"
+                    return answered(c, row, printable(RecordMembers.get(request, ID)), request);
+                }
+            } catch (InputProblem | tools.jackson.core.JacksonException unread) {
+                // explained as before: the line's own JSON problem, or the tree's reading of the request
+                String notJson = NdjsonSource.unreadable(mapper, row.line());
+                if (notJson != null) {
+                    return problemRow(row.number(), null, ProblemType.MALFORMED_BODY, notJson,
+                            List.of(new FieldError("", notJson)));
+                }
+            }
+            row = Row.of(row.number(), mapper.readTree(row.line()));
+        }
         JsonNode body = row.body();
-        String id = body != null && body.path("sheet_id").isString()
-                ? utdigit.web.common.IJson.printable(body.get("sheet_id").stringValue()) : null;
+        String id = row.id() != null ? row.id() : body != null && body.path(ID).isString()
+                ? printable(body.get(ID).stringValue()) : null;
         if (!row.readable()) {
             return problemRow(row.number(), id, row.readProblem(), row.readDetail(), row.readErrors());
         }
         try {
-            ObjectNode result = runner.runTree(calculation, body);
-            ObjectNode out = mapper.createObjectNode();
-            out.put("row", row.number());
-            if (id != null) {
-                out.put("id", id);
-            }
-            out.put("status", "OK");
-            out.set("result", result);
-            return out;
+            return answered(c, row, id, row.tokens() != null ? runner.read(c, row.tokens().asParser())
+                    : runner.read(c, body));
         } catch (InputProblem p) {
             return problemRow(row.number(), id, p.type(), p.getMessage(), p.errors());
         } catch (RuntimeException e) {
-            log.error("unexpected failure on batch row {} of {}", row.number(), calculation, e);
-            return problemRow(row.number(), id, ProblemType.INTERNAL_ERROR,
-                    "the service could not answer this row; the failure is logged", List.of());
+            return failed(c, row, id, e);
         }
     }
 
-    private ObjectNode problemRow(long number, String id, ProblemType type, String detail, List<FieldError> errors) {
-        ObjectNode out = mapper.createObjectNode();
-        out.put("row", number);
-        if (id != null) {
-            out.put("id", id);
-        }
-        out.put("status", "INVALID");
-        out.set("problem", mapper.valueToTree(Problems.body(type, detail, errors, null)));
-        return out;
+    private static BatchRow failed(Calculation<?, ?> c, Row row, String id, RuntimeException e) {
+        log.error("unexpected failure on batch row {} of {}", row.number(), c.name(), e);
+        return problemRow(row.number(), id, ProblemType.INTERNAL_ERROR,
+                "the service could not answer this row; the failure is logged", List.of());
     }
 
-    private ObjectNode limitRow(long firstUnprocessed, String why) {
-        ObjectNode out = mapper.createObjectNode();
-        out.put("row", firstUnprocessed);
-        out.put("status", "LIMIT_REACHED");
-        out.put("first_unprocessed_row", firstUnprocessed);
-        ObjectNode problem = mapper.valueToTree(Problems.body(ProblemType.PAYLOAD_TOO_LARGE, why + "; row "
-                + firstUnprocessed + " and every later row were not processed: resume from row " + firstUnprocessed,
-                List.of(), null));
-        out.set("problem", problem);
-        return out;
+    /** The id of a row: its request's sheet_id, when it has one. */
+    private static final String ID = "sheet_id";
+
+    private static String printable(Object id) {
+        return id instanceof String s ? utdigit.web.common.IJson.printable(s) : null;
     }
 
-    private static Class<?> answerType(Calculation<?> c) {
-        for (var m : c.getClass().getMethods()) {
-            if (m.getName().equals("answer") && m.getParameterCount() == 1
-                    && m.getParameterTypes()[0] == c.requestType() && m.getReturnType().isRecord()) {
-                return m.getReturnType();
-            }
+    /** A row whose request was read: OK with its answer, or INVALID with its problem. */
+    private <Q, A> BatchRow answered(Calculation<Q, A> c, Row row, String id, Q request) {
+        try {
+            Stamped<A> result = runner.run(c, request);
+            return new BatchRow(row.number(), id, BatchRow.OK, null, result, null);
+        } catch (InputProblem p) {
+            return problemRow(row.number(), id, p.type(), p.getMessage(), p.errors());
+        } catch (RuntimeException e) {
+            return failed(c, row, id, e);
         }
-        throw new IllegalStateException("calculation " + c.name() + " does not declare its answer record type");
+    }
+
+    private static BatchRow problemRow(long number, String id, ProblemType type, String detail, List<FieldError> errors) {
+        return new BatchRow(number, id, BatchRow.INVALID, null, null, Problems.body(type, detail, errors, null));
+    }
+
+    private static BatchRow limitRow(long firstUnprocessed, String why) {
+        return new BatchRow(firstUnprocessed, null, BatchRow.LIMIT_REACHED, firstUnprocessed, null,
+                Problems.body(ProblemType.PAYLOAD_TOO_LARGE, why + "; row " + firstUnprocessed
+                        + " and every later row were not processed: resume from row " + firstUnprocessed,
+                        List.of(), null));
     }
 
     private static BufferedReader reader(InputStream in) {

@@ -5,26 +5,36 @@ import java.io.OutputStream;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import org.springframework.http.ProblemDetail;
 import tools.jackson.core.io.NumberOutput;
-import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.SequenceWriter;
 import tools.jackson.databind.SerializationFeature;
-import tools.jackson.databind.node.ObjectNode;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.dataformat.csv.CsvMapper;
 import tools.jackson.dataformat.csv.CsvSchema;
+import utdigit.web.common.FieldError;
+import utdigit.web.common.RecordMembers;
+import utdigit.web.stamp.Stamped;
 
 /**
  * Output rows as CSV with a fixed header per calculation: row, id, status, every result field it
  * can produce (flattened with dotted names), the warnings' codes, then the problem's type, detail
  * and pointers. A cell is empty where the row has no value; a value that does not exist (JSON null)
- * is empty too, with its warning in the warnings column.
+ * is empty too, with its warning in the warnings column. The cells are read from the typed answer
+ * member by member ({@link RecordMembers}), not from a JSON tree.
  */
 final class CsvSink implements RowSink {
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
+
     private final List<String> resultColumns;
     private final String[][] resultPaths;
     private final SequenceWriter writer;
+    private final JsonMapper mapper;
 
-    CsvSink(CsvMapper csv, OutputStream out, List<String> resultColumns) throws IOException {
+    CsvSink(CsvMapper csv, JsonMapper mapper, OutputStream out, List<String> resultColumns) throws IOException {
+        this.mapper = mapper;
         this.resultColumns = resultColumns;
         this.resultPaths = resultColumns.stream().map(c -> c.split("\\.")).toArray(String[][]::new);
         List<String> header = new ArrayList<>();
@@ -48,65 +58,128 @@ final class CsvSink implements RowSink {
     }
 
     @Override
-    public void write(ObjectNode row) throws IOException {
+    public void write(BatchRow row) throws IOException {
         List<String> cells = new ArrayList<>(resultColumns.size() + 6);
-        cells.add(row.get("row").asString());
-        cells.add(row.has("id") ? row.get("id").asString() : "");
-        cells.add(row.get("status").asString());
-        JsonNode result = row.get("result");
+        cells.add(Long.toString(row.row()));
+        cells.add(row.id() != null ? row.id() : "");
+        cells.add(row.status());
+        Stamped<?> result = row.result();
         for (String[] path : resultPaths) {
             cells.add(result == null ? "" : cell(result, path));
         }
-        JsonNode problem = row.get("problem");
+        ProblemDetail problem = row.problem();
         if (problem == null) {
             cells.add("");
             cells.add("");
             cells.add("");
         } else {
-            cells.add(problem.path("type").asString(""));
-            cells.add(problem.path("detail").asString(""));
+            cells.add(problem.getType() == null ? "" : problem.getType().toString());
+            cells.add(problem.getDetail() == null ? "" : problem.getDetail());
             List<String> pointers = new ArrayList<>();
-            for (JsonNode e : problem.path("errors")) {
-                pointers.add(e.path("pointer").asString(""));
+            Object errors = problem.getProperties() == null ? null : problem.getProperties().get("errors");
+            if (errors instanceof Iterable<?> list) {
+                for (Object e : list) {
+                    pointers.add(e instanceof FieldError f && f.pointer() != null ? f.pointer() : "");
+                }
             }
             cells.add(String.join(";", pointers));
         }
         writer.write(cells);
     }
 
-    private static String cell(JsonNode result, String[] path) {
-        JsonNode node = result;
-        for (String part : path) {
-            node = node == null ? null : node.get(part);
+    /** The cell of a dotted column: the member's value as the JSON answer writes it, flattened. */
+    private String cell(Stamped<?> result, String[] path) {
+        if (path.length == 2 && path[0].equals("stamp") && path[1].equals("sha256")) {
+            return result.sha256();
         }
-        if (node == null || node.isNull()) {
+        Object value = result.answer();
+        for (String part : path) {
+            value = member(value, part);
+        }
+        if (path.length == 1 && path[0].equals("warnings") && result.notRepresentable() != null) {
+            String codes = value instanceof List<?> list ? list(list) : "";
+            return codes.isEmpty() ? Stamped.NOT_REPRESENTABLE : codes + ";" + Stamped.NOT_REPRESENTABLE;
+        }
+        return value(value);
+    }
+
+    /** A member of a record or an entry of a map; null where there is none. */
+    private static Object member(Object value, String name) {
+        value = unwrap(value);
+        if (value == null) {
+            return null;
+        }
+        if (value instanceof Map<?, ?> map) {
+            return map.get(name);
+        }
+        return value.getClass().isRecord() ? RecordMembers.get(value, name) : null;
+    }
+
+    private static Object unwrap(Object value) {
+        return value instanceof Optional<?> o ? o.orElse(null) : value;
+    }
+
+    private String value(Object value) {
+        value = unwrap(value);
+        if (value == null) {
             return "";
         }
-        if (node.isArray()) {
-            List<String> parts = new ArrayList<>();
-            for (JsonNode item : node) {
-                if (item.has("code")) {
-                    parts.add(item.get("code").asString());
-                } else if (item.has("rule_id")) {
-                    parts.add((item.has("profile_id") ? item.get("profile_id").asString() + "/" : "")
-                            + item.get("rule_id").asString() + "=" + item.path("verdict").asString());
-                } else if (item.has("figure") && item.has("within")) {
-                    parts.add(item.get("figure").asString() + "=" + (item.get("within").asBoolean() ? "WITHIN" : "OUTSIDE"));
-                } else if (item.has("id") && item.has("verdict")) {
-                    parts.add(item.get("id").asString() + "=" + item.get("verdict").asString());
-                } else {
-                    parts.add(item.isValueNode() ? item.asString() : item.toString());
-                }
+        if (value instanceof Double d) {
+            // as the JSON answer writes it; a value with no finite form is null there (with its warning)
+            return Double.isFinite(d) ? NumberOutput.toString(d == 0.0 ? 0.0 : d, true) : "";
+        }
+        if (value instanceof List<?> list) {
+            return list(list);
+        }
+        if (value instanceof Enum<?> e) {
+            return e.name();
+        }
+        if (value instanceof Map<?, ?> || value.getClass().isRecord()) {
+            return json(value);
+        }
+        return value.toString(); // texts, integers, booleans
+    }
+
+    /**
+     * A list in one cell, items separated by ';': warnings by their codes, findings as
+     * [profile/]rule=verdict, tolerance checks as figure=WITHIN|OUTSIDE, profiles as id=verdict.
+     */
+    private String list(List<?> items) {
+        List<String> parts = new ArrayList<>(items.size());
+        for (Object item : items) {
+            if (item == null) {
+                parts.add("");
+            } else if (!item.getClass().isRecord()) {
+                parts.add(item instanceof Double d ? NODES.numberNode(d).asString() : value(item));
+            } else if (has(item, "code")) {
+                parts.add(text(item, "code"));
+            } else if (has(item, "rule_id")) {
+                parts.add((has(item, "profile_id") ? text(item, "profile_id") + "/" : "") + text(item, "rule_id") + "="
+                        + text(item, "verdict"));
+            } else if (has(item, "figure") && has(item, "within")) {
+                parts.add(text(item, "figure") + "=" + (Boolean.TRUE.equals(unwrap(RecordMembers.get(item, "within")))
+                        ? "WITHIN" : "OUTSIDE"));
+            } else if (has(item, "id") && has(item, "verdict")) {
+                parts.add(text(item, "id") + "=" + text(item, "verdict"));
+            } else {
+                parts.add(json(item));
             }
-            return String.join(";", parts);
         }
-        if (node.isObject()) {
-            return node.toString();
-        }
-        if (node.isDouble()) {
-            return NumberOutput.toString(node.doubleValue(), true); // as the JSON answer writes it
-        }
-        return node.asString();
+        return String.join(";", parts);
+    }
+
+    private static boolean has(Object record, String name) {
+        return RecordMembers.of(record.getClass()).containsKey(name) && RecordMembers.get(record, name) != null;
+    }
+
+    private String text(Object record, String name) {
+        Object v = unwrap(RecordMembers.get(record, name));
+        return v == null ? "" : v instanceof Enum<?> e ? e.name() : v.toString();
+    }
+
+    /** An object in one cell: its compact JSON (rare: the columns flatten records). */
+    private String json(Object value) {
+        return mapper.valueToTree(value).toString();
     }
 
     @Override

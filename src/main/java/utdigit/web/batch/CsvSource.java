@@ -5,31 +5,80 @@ import java.util.ArrayList;
 import java.util.List;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.MappingIterator;
-import tools.jackson.databind.node.JsonNodeFactory;
-import tools.jackson.databind.node.ObjectNode;
+import tools.jackson.databind.util.TokenBuffer;
 import tools.jackson.dataformat.csv.CsvMapper;
 import tools.jackson.dataformat.csv.CsvReadFeature;
 import utdigit.web.common.FieldError;
+import utdigit.web.common.IJson;
 import utdigit.web.common.JsonPointers;
 import utdigit.web.common.ProblemType;
 
 /**
  * Rows of a text/csv body (RFC 4180: a header row of field names, dotted for nested sections such
  * as {@code probe.frequency_mhz}; quoted fields; LF or CRLF; UTF-8, a BOM is skipped by the caller).
- * Each data row becomes the JSON request the single endpoint takes: an empty cell is an absent
- * field, a number column must hold a finite decimal number, an integer column a whole number.
+ * Each data row becomes the tokens of the JSON request the single endpoint takes, read into its
+ * request record as JSON is (no tree): an empty cell is an absent field, a number column must hold
+ * a finite decimal number, an integer column a whole number.
  * A header naming an unknown column is a 400 before any row. A blank line is not a row (as in
  * NDJSON): it is skipped and not counted, so row numbers stay those of the data rows.
  */
 final class CsvSource implements RowSource {
-    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
+    /** The column of a row's id (technique sheets). */
+    private static final String ID_COLUMN = "sheet_id";
     private static final java.util.regex.Pattern DECIMAL =
             java.util.regex.Pattern.compile("[-+]?(?:[0-9]+\\.?[0-9]*|\\.[0-9]+)(?:[eE][-+]?[0-9]+)?");
 
     private final MappingIterator<String[]> rows;
     private final String[] header;
     private final RecordShape shape;
+    /** The request's members as the header gives them: leaves and nested sections (dotted columns). */
+    private final Member plan;
+    private final int idColumn;
+    /** The JSON Pointer of each column's field. */
+    private final String[] pointers;
     private long row;
+
+    /**
+     * A member of the request: a leaf (its column) or a section (its members, in the order the header
+     * first names them). A section is written only when one of its cells is not empty.
+     */
+    private record Member(String name, String pointer, int column, List<Member> members) {
+        boolean anyValue(Object[] values) {
+            if (column >= 0) {
+                return values[column] != null;
+            }
+            for (Member m : members) {
+                if (m.anyValue(values)) {
+                    return true;
+                }
+            }
+            return false;
+        }
+    }
+
+    private static Member plan(String[] header) {
+        Member root = new Member("", "", -1, new ArrayList<>());
+        for (int i = 0; i < header.length; i++) {
+            String[] path = header[i].split("\\.");
+            Member section = root;
+            for (int k = 0; k < path.length - 1; k++) {
+                Member child = null;
+                for (Member m : section.members()) {
+                    if (m.name().equals(path[k]) && m.column() < 0) {
+                        child = m;
+                    }
+                }
+                if (child == null) {
+                    child = new Member(path[k], JsonPointers.child(section.pointer(), path[k]), -1, new ArrayList<>());
+                    section.members().add(child);
+                }
+                section = child;
+            }
+            String leaf = path[path.length - 1];
+            section.members().add(new Member(leaf, JsonPointers.child(section.pointer(), leaf), i, List.of()));
+        }
+        return root;
+    }
 
     CsvSource(CsvMapper csv, Reader reader, RecordShape shape) {
         this.shape = shape;
@@ -58,6 +107,16 @@ final class CsvSource implements RowSource {
             throw new BatchBodyException("unknown column(s) " + String.join(", ", unknown)
                     + "; the columns of this calculation are: " + String.join(", ", shape.names()), "");
         }
+        this.plan = plan(header);
+        this.pointers = new String[header.length];
+        for (int i = 0; i < header.length; i++) {
+            String pointer = "";
+            for (String part : header[i].split("\\.")) {
+                pointer = JsonPointers.child(pointer, part);
+            }
+            pointers[i] = pointer;
+        }
+        this.idColumn = List.of(header).indexOf(ID_COLUMN);
     }
 
     @Override
@@ -75,21 +134,18 @@ final class CsvSource implements RowSource {
                 String detail = "the row has " + cells.length + " cells; the header has " + header.length;
                 return Row.unreadable(row, ProblemType.INVALID_INPUT, detail, List.of(new FieldError("", detail)));
             }
-            ObjectNode body = NODES.objectNode();
+            String id = idColumn >= 0 && cells[idColumn] != null && !cells[idColumn].isEmpty() && shape.kind(ID_COLUMN) == RecordShape.Kind.TEXT
+                    ? IJson.printable(cells[idColumn]) : null;
             List<FieldError> errors = new ArrayList<>();
-            for (int i = 0; i < cells.length; i++) {
-                String cell = cells[i];
-                if (cell == null || cell.isEmpty()) {
-                    continue;
-                }
-                put(body, header[i], cell, errors);
+            Object[] values = values(cells, errors);
+            if (errors.isEmpty()) {
+                TokenBuffer tokens = TokenBuffer.forGeneration();
+                write(plan, values, tokens);
+                return Row.of(row, tokens, id);
             }
-            if (!errors.isEmpty()) {
-                return Row.unreadable(row, body, ProblemType.INVALID_INPUT,
-                        errors.size() == 1 ? errors.get(0).pointer() + ": " + errors.get(0).detail()
-                                : errors.size() + " fields are invalid; see errors", errors);
-            }
-            return Row.of(row, body);
+            return Row.unreadable(row, id, ProblemType.INVALID_INPUT,
+                    errors.size() == 1 ? errors.get(0).pointer() + ": " + errors.get(0).detail()
+                            : errors.size() + " fields are invalid; see errors", errors);
         } catch (JacksonException e) {
             CountingInputStream.rethrowIfLimit(e);
             row++;
@@ -98,42 +154,78 @@ final class CsvSource implements RowSource {
         }
     }
 
-    private void put(ObjectNode body, String column, String cell, List<FieldError> errors) {
-        String[] path = column.split("\\.");
-        ObjectNode target = body;
-        String pointer = "";
-        for (int i = 0; i < path.length - 1; i++) {
-            pointer = JsonPointers.child(pointer, path[i]);
-            ObjectNode child = target.has(path[i]) ? (ObjectNode) target.get(path[i]) : target.putObject(path[i]);
-            target = child;
+    /**
+     * The value of each cell, in header order: null for an empty cell, a Double, an Integer, a
+     * String or a list of Strings by the column's kind; a cell that is not of its kind adds an error.
+     */
+    private Object[] values(String[] cells, List<FieldError> errors) {
+        Object[] values = new Object[cells.length];
+        for (int i = 0; i < cells.length; i++) {
+            String cell = cells[i];
+            if (cell == null || cell.isEmpty()) {
+                continue;
+            }
+            String column = header[i];
+            values[i] = switch (shape.kind(column)) {
+                case TEXT -> cell;
+                case TEXT_LIST -> {
+                    List<String> items = new ArrayList<>();
+                    for (String item : cell.split(";", -1)) {
+                        items.add(item.trim());
+                    }
+                    yield items;
+                }
+                case NUMBER -> {
+                    Double v = parseDecimal(cell.trim());
+                    if (v == null) {
+                        errors.add(new FieldError(pointers[i], "must be a finite decimal number (column " + column + ")"));
+                    }
+                    yield v;
+                }
+                case INTEGER -> {
+                    Double v = parseDecimal(cell.trim());
+                    if (v == null || v != Math.rint(v) || Math.abs(v) > Integer.MAX_VALUE) {
+                        errors.add(new FieldError(pointers[i], "must be a whole number (column " + column + ")"));
+                        yield null;
+                    }
+                    yield v.intValue();
+                }
+            };
         }
-        String leaf = path[path.length - 1];
-        pointer = JsonPointers.child(pointer, leaf);
-        switch (shape.kind(column)) {
-            case TEXT -> target.put(leaf, cell);
-            case TEXT_LIST -> {
-                var items = target.putArray(leaf);
-                for (String item : cell.split(";", -1)) {
-                    items.add(item.trim());
+        return values;
+    }
+
+    /** The tokens of a section: its given values, and its sections with a given value. */
+    private static void write(Member section, Object[] values, TokenBuffer out) {
+        out.writeStartObject();
+        for (Member m : section.members()) {
+            if (m.column() < 0) {
+                if (m.anyValue(values)) {
+                    out.writeName(m.name());
+                    write(m, values, out);
                 }
+                continue;
             }
-            case NUMBER -> {
-                Double v = parseDecimal(cell.trim());
-                if (v == null) {
-                    errors.add(new FieldError(pointer, "must be a finite decimal number (column " + column + ")"));
-                } else {
-                    target.put(leaf, v);
-                }
+            Object v = values[m.column()];
+            if (v == null) {
+                continue;
             }
-            case INTEGER -> {
-                Double v = parseDecimal(cell.trim());
-                if (v == null || v != Math.rint(v) || Math.abs(v) > Integer.MAX_VALUE) {
-                    errors.add(new FieldError(pointer, "must be a whole number (column " + column + ")"));
-                } else {
-                    target.put(leaf, v.intValue());
+            out.writeName(m.name());
+            if (v instanceof Double d) {
+                out.writeNumber(d);
+            } else if (v instanceof Integer n) {
+                out.writeNumber(n);
+            } else if (v instanceof List<?> items) {
+                out.writeStartArray();
+                for (Object item : items) {
+                    out.writeString((String) item);
                 }
+                out.writeEndArray();
+            } else {
+                out.writeString((String) v);
             }
         }
+        out.writeEndObject();
     }
 
     /** A decimal number as JSON writes it (no NaN, Infinity, hex or type suffixes); null otherwise. */

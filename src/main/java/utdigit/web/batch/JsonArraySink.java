@@ -3,7 +3,6 @@ package utdigit.web.batch;
 import java.io.IOException;
 import java.io.OutputStream;
 import tools.jackson.databind.json.JsonMapper;
-import tools.jackson.databind.node.ObjectNode;
 
 /** One JSON array of output rows (application/json), written row by row. */
 final class JsonArraySink implements RowSink {
@@ -18,7 +17,7 @@ final class JsonArraySink implements RowSink {
     }
 
     @Override
-    public void write(ObjectNode row) throws IOException {
+    public void write(BatchRow row) throws IOException {
         if (!first) {
             out.write(',');
         }

@@ -3,7 +3,6 @@ package utdigit.web.batch;
 import java.io.IOException;
 import java.io.OutputStream;
 import tools.jackson.databind.json.JsonMapper;
-import tools.jackson.databind.node.ObjectNode;
 
 /** One JSON object per line (application/x-ndjson). */
 final class NdjsonSink implements RowSink {
@@ -16,7 +15,7 @@ final class NdjsonSink implements RowSink {
     }
 
     @Override
-    public void write(ObjectNode row) throws IOException {
+    public void write(BatchRow row) throws IOException {
         out.write(mapper.writeValueAsBytes(row));
         out.write('\n');
     }

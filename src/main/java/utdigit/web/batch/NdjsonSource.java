@@ -11,7 +11,7 @@ import utdigit.web.common.ProblemType;
 
 /**
  * Rows of an application/x-ndjson body: one JSON object per line (LF or CRLF); blank lines are not
- * rows. A line that is not JSON is an INVALID row; the next line is read as usual. A line longer
+ * rows. A line that is not JSON is an INVALID row ({@link #unreadable}); the next line is read as usual. A line longer
  * than {@link #MAX_LINE_CHARS} (a JSON array sent as NDJSON is one such line) is read to its end
  * without being kept and is an INVALID row: memory stays flat whatever the body.
  */
@@ -48,13 +48,7 @@ final class NdjsonSource implements RowSource {
                 String detail = "the line is longer than " + MAX_LINE_CHARS + " characters; one JSON object per line";
                 return Row.unreadable(row, ProblemType.MALFORMED_BODY, detail, List.of(new FieldError("", detail)));
             }
-            try {
-                return Row.of(row, mapper.readTree(text));
-            } catch (JacksonException e) {
-                String detail = e.getOriginalMessage() != null && e.getOriginalMessage().startsWith("Duplicate")
-                        ? "a key appears more than once in the same object" : "the line is not well-formed JSON";
-                return Row.unreadable(row, ProblemType.MALFORMED_BODY, detail, List.of(new FieldError("", detail)));
-            }
+            return Row.ofLine(row, text); // read on a worker (BatchProcessor)
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
@@ -106,6 +100,17 @@ final class NdjsonSource implements RowSource {
             line.setLength(0);
         }
         return line.toString();
+    }
+
+    /** Why a line that failed to read is not JSON, or null if it is JSON (and then an invalid request). */
+    static String unreadable(JsonMapper mapper, String line) {
+        try {
+            mapper.readTree(line);
+            return null;
+        } catch (JacksonException e) {
+            return e.getOriginalMessage() != null && e.getOriginalMessage().startsWith("Duplicate")
+                    ? "a key appears more than once in the same object" : "the line is not well-formed JSON";
+        }
     }
 
     @Override

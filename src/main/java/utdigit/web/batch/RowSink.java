@@ -2,13 +2,12 @@ package utdigit.web.batch;
 
 import java.io.Closeable;
 import java.io.IOException;
-import tools.jackson.databind.node.ObjectNode;
 
 /** Writes answered rows in the format the caller accepts. */
 interface RowSink extends Closeable {
 
     /** Writes one output row: {row, id?, status, result | problem}. */
-    void write(ObjectNode outputRow) throws IOException;
+    void write(BatchRow outputRow) throws IOException;
 
     /** Hands the rows written so far to the output stream (the caller then flushes that to the client). */
     default void flush() throws IOException {}

@@ -6,13 +6,17 @@ package utdigit.web.common;
  * calculation has exactly one path from request to answer.
  *
  * @param <Q> the request record (Bean Validation annotated)
+ * @param <A> the answer record (the stamp is added by {@link CalculationRunner})
  */
-public interface Calculation<Q> {
+public interface Calculation<Q, A> {
 
     /** The endpoint's path name, e.g. {@code sampling-assessments}; also the stamp's calculation. */
     String name();
 
     Class<Q> requestType();
+
+    /** The answer record's type: its members name the columns of a CSV batch answer. */
+    Class<A> answerType();
 
     /**
      * The answer record for a request that passed Bean Validation: the flat result fields plus
@@ -21,7 +25,7 @@ public interface Calculation<Q> {
      * @throws InputProblem for fields wrong together (400)
      * @throws utdigit.core.common.CalculationException from the core (400 or 422)
      */
-    Object answer(Q request);
+    A answer(Q request);
 
     /**
      * The JSON Pointer of an input the core names in a failure. The core names a quantity that

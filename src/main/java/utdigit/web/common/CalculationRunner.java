@@ -16,18 +16,20 @@ import org.springframework.beans.factory.DisposableBean;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.stereotype.Component;
 import tools.jackson.core.JacksonException;
+import tools.jackson.core.JsonParser;
 import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
-import tools.jackson.databind.node.ArrayNode;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.SearchBudget;
+import utdigit.web.stamp.Stamped;
 import utdigit.web.stamp.Stamper;
 
 /**
  * The one path from a request to a stamped answer, shared by the single endpoints, the batch
  * endpoints, technique sheets and stamp verification: Bean Validation (pointers to the caller's
- * fields), the calculation, a check that every number in the answer is finite, and the stamp.
+ * fields), the calculation, a check that every number in the answer is finite, and the stamp. The
+ * answer stays typed from the calculation to the wire ({@link Stamped}).
  *
  * <p>Every calculation runs under a deadline ({@code utdigit.calculation.deadline}): when it passes,
  * the thread is interrupted, the core's searches see it ({@link SearchBudget}) and stop, and the
@@ -37,7 +39,9 @@ import utdigit.web.stamp.Stamper;
 @Component
 public class CalculationRunner implements DisposableBean {
     private static final org.slf4j.Logger log = org.slf4j.LoggerFactory.getLogger(CalculationRunner.class);
-    private final Map<String, Calculation<?>> byName = new LinkedHashMap<>();
+    private final Map<String, Calculation<?, ?>> byName = new LinkedHashMap<>();
+    /** The strict reader of each request type (batch rows). */
+    private final Map<Class<?>, ObjectReader> readers = new java.util.concurrent.ConcurrentHashMap<>();
     private final Validator validator;
     private final JsonMapper mapper;
     private final Stamper stamper;
@@ -45,9 +49,9 @@ public class CalculationRunner implements DisposableBean {
     /** One daemon thread that interrupts calculations past their deadline. */
     private final ScheduledThreadPoolExecutor alarms;
 
-    CalculationRunner(List<Calculation<?>> calculations, Validator validator, JsonMapper mapper, Stamper stamper,
+    CalculationRunner(List<Calculation<?, ?>> calculations, Validator validator, JsonMapper mapper, Stamper stamper,
                       @Value("${utdigit.calculation.deadline:3s}") java.time.Duration deadline) {
-        for (Calculation<?> c : calculations) {
+        for (Calculation<?, ?> c : calculations) {
             if (byName.put(c.name(), c) != null) {
                 throw new IllegalStateException("two calculations named " + c.name());
             }
@@ -74,35 +78,34 @@ public class CalculationRunner implements DisposableBean {
         return byName.keySet();
     }
 
-    public Calculation<?> calculation(String name) {
-        Calculation<?> c = byName.get(name);
+    /** The calculation of a path name (batch endpoints, stamp verification); a 404 problem if none. */
+    public Calculation<?, ?> calculation(String name) {
+        Calculation<?, ?> c = byName.get(name);
         if (c == null) {
             throw new NotFoundProblem("no calculation named '" + name + "'");
         }
         return c;
     }
 
-    /** Answers a request already read by the HTTP layer. */
-    public <Q> ObjectNode run(String name, Q request) {
-        @SuppressWarnings("unchecked")
-        Calculation<Q> c = (Calculation<Q>) calculation(name);
+    /** Answers a request already read (by the HTTP layer or a batch row): validated, computed, stamped. */
+    public <Q, A> Stamped<A> run(Calculation<Q, A> c, Q request) {
         if (request == null) {
             throw new InputProblem(ProblemType.MALFORMED_BODY, "the request body is empty", List.of(new FieldError("", "a JSON object is required")));
         }
         return answer(c, request);
     }
 
-    /** Answers a request given as a JSON tree (batch rows, stamp verification), strictly read. */
-    public ObjectNode runTree(String name, JsonNode body) {
+    /** Answers a request given as a JSON tree (batch rows of a JSON array, stamp verification), strictly read. */
+    public Stamped<?> runTree(String name, JsonNode body) {
         return readAndAnswer(calculation(name), body);
     }
 
-    private <Q> ObjectNode readAndAnswer(Calculation<Q> c, JsonNode body) {
+    private <Q, A> Stamped<A> readAndAnswer(Calculation<Q, A> c, JsonNode body) {
         return answer(c, read(c, body));
     }
 
     /** Reads a JSON tree into the calculation's request record with the strict mapper. */
-    public <Q> Q read(Calculation<Q> c, JsonNode body) {
+    public <Q> Q read(Calculation<Q, ?> c, JsonNode body) {
         if (body == null || !body.isObject()) {
             throw InputProblem.invalid("", InputMessages.OBJECT);
         }
@@ -113,9 +116,21 @@ public class CalculationRunner implements DisposableBean {
         }
     }
 
-    private <Q> ObjectNode answer(Calculation<Q> c, Q request) {
+    /**
+     * Reads a request from a token stream (a CSV batch row's cells as JSON tokens) into the
+     * calculation's request record with the strict mapper, exactly as from JSON text.
+     */
+    public <Q> Q read(Calculation<Q, ?> c, JsonParser tokens) {
+        try (tokens) {
+            return readers.computeIfAbsent(c.requestType(), mapper::readerFor).readValue(tokens);
+        } catch (JacksonException e) {
+            throw JacksonProblems.toInputProblem(e);
+        }
+    }
+
+    private <Q, A> Stamped<A> answer(Calculation<Q, A> c, Q request) {
         validate(request);
-        Object answer;
+        A answer;
         Alarm alarm = new Alarm(Thread.currentThread());
         ScheduledFuture<?> scheduled = alarms.schedule(alarm, deadlineMillis, TimeUnit.MILLISECONDS);
         try {
@@ -147,17 +162,10 @@ public class CalculationRunner implements DisposableBean {
             scheduled.cancel(false);
             alarm.disarm();
         }
-        ObjectNode tree = mapper.valueToTree(answer);
-        List<String> nonFinite = new ArrayList<>();
-        replaceNonFinite(tree, "", nonFinite);
-        if (!nonFinite.isEmpty()) {
-            ArrayNode warnings = tree.has("warnings") ? (ArrayNode) tree.get("warnings") : tree.putArray("warnings");
-            warnings.addObject()
-                    .put("code", "RESULT_NOT_REPRESENTABLE")
-                    .put("message", "no finite value exists for " + String.join(", ", nonFinite)
-                            + " with these inputs; returned as null");
-        }
-        return stamper.stamp(c.name(), tree);
+        // numbers with no finite value are seen as the stamp's canonical bytes are written; only then
+        // is the answer walked for their pointers
+        return stamper.stamp(c.name(), answer, a -> "no finite value exists for "
+                + String.join(", ", NonFiniteFields.of(a)) + " with these inputs; returned as null");
     }
 
     /**
@@ -200,43 +208,6 @@ public class CalculationRunner implements DisposableBean {
             }
             errors.sort(Comparator.comparing(FieldError::pointer).thenComparing(FieldError::detail));
             throw InputProblem.invalid(errors);
-        }
-    }
-
-    private static boolean isNegativeZero(JsonNode v) {
-        return v.isDouble() && Double.doubleToRawLongBits(v.doubleValue()) == Long.MIN_VALUE;
-    }
-
-    private static void replaceNonFinite(JsonNode node, String pointer, List<String> found) {
-        if (node instanceof ObjectNode object) {
-            for (Map.Entry<String, JsonNode> e : new ArrayList<>(object.properties())) {
-                JsonNode v = e.getValue();
-                String p = JsonPointers.child(pointer, e.getKey());
-                if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
-                    object.putNull(e.getKey());
-                    found.add(p);
-                } else if (isNegativeZero(v)) {
-                    object.put(e.getKey(), 0.0); // as the stamp's canonical form writes it: no "-0.0"
-                } else {
-                    replaceNonFinite(v, p, found);
-                }
-            }
-        } else if (node instanceof ArrayNode array) {
-            for (int i = 0; i < array.size(); i++) {
-                JsonNode v = array.get(i);
-                if (v.isNumber() && !Double.isFinite(v.doubleValue())) {
-                    array.set(i, array.nullNode());
-                    found.add(pointer + "/" + i);
-                } else if (isNegativeZero(v)) {
-                    array.set(i, array.numberNode(0.0));
-                } else {
-                    replaceNonFinite(v, pointer + "/" + i, found);
-                }
-            }
-        } else if (node != null && node.isString() && ("NaN".equals(node.stringValue())
-                || "Infinity".equals(node.stringValue()) || "-Infinity".equals(node.stringValue()))) {
-            // Jackson may write non-finite doubles as strings; such values are never valid results.
-            found.add(pointer);
         }
     }
 }

@@ -21,9 +21,9 @@ import org.springframework.stereotype.Component;
  */
 @Component
 class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
-    private final List<Calculation<?>> calculations;
+    private final List<Calculation<?, ?>> calculations;
 
-    ExclusiveBoundsCustomizer(List<Calculation<?>> calculations) {
+    ExclusiveBoundsCustomizer(List<Calculation<?, ?>> calculations) {
         this.calculations = calculations;
     }
 
@@ -34,12 +34,12 @@ class ExclusiveBoundsCustomizer implements OpenApiCustomizer {
         }
         Map<String, Schema> schemas = openApi.getComponents().getSchemas();
         Set<Class<?>> seen = new HashSet<>();
-        for (Calculation<?> c : calculations) {
+        for (Calculation<?, ?> c : calculations) {
             apply(c.requestType(), schemas, seen);
         }
         // the request records (also echoed as an answer's inputs) are never marked nullable
         Set<Class<?>> seenAnswers = new HashSet<>(seen);
-        for (Calculation<?> c : calculations) {
+        for (Calculation<?, ?> c : calculations) {
             for (var m : c.getClass().getMethods()) {
                 if (m.getName().equals("answer") && m.getParameterCount() == 1 && m.getReturnType().isRecord()) {
                     nullableResults(m.getReturnType(), schemas, seenAnswers);

@@ -14,7 +14,7 @@ import utdigit.web.common.VelocitySourceView;
 
 /** Request to core input, core result to answer, for scan coverages. */
 @Component
-class ScanCoverageCalculation implements Calculation<ScanCoverageRequest> {
+class ScanCoverageCalculation implements Calculation<ScanCoverageRequest, ScanCoverageResponse> {
     static final String NAME = "scan-coverages";
 
     @Override
@@ -25,6 +25,11 @@ class ScanCoverageCalculation implements Calculation<ScanCoverageRequest> {
     @Override
     public Class<ScanCoverageRequest> requestType() {
         return ScanCoverageRequest.class;
+    }
+
+    @Override
+    public Class<ScanCoverageResponse> answerType() {
+        return ScanCoverageResponse.class;
     }
 
     @Override

@@ -9,17 +9,19 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Scan coverage", description = "The amplitude lost between scan positions, index lines and sector-scan "
         + "beams, and the largest step for a tolerance")
 class ScanCoverageController {
     private final CalculationRunner runner;
+    private final ScanCoverageCalculation calculation;
 
-    ScanCoverageController(CalculationRunner runner) {
+    ScanCoverageController(CalculationRunner runner, ScanCoverageCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + ScanCoverageCalculation.NAME,
@@ -35,7 +37,7 @@ class ScanCoverageController {
                     + "code edition and procedure decide; results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The coverage",
             content = @Content(schema = @Schema(implementation = ScanCoverageResponse.class)))
-    ObjectNode assess(@RequestBody ScanCoverageRequest request) {
-        return runner.run(ScanCoverageCalculation.NAME, request);
+    Stamped<ScanCoverageResponse> assess(@RequestBody ScanCoverageRequest request) {
+        return runner.run(calculation, request);
     }
 }

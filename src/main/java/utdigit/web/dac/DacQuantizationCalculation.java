@@ -10,7 +10,7 @@ import utdigit.web.common.ToleranceCheck;
 
 /** Request to core input, core result to answer, for DAC quantizations. */
 @Component
-class DacQuantizationCalculation implements Calculation<DacQuantizationRequest> {
+class DacQuantizationCalculation implements Calculation<DacQuantizationRequest, DacQuantizationResponse> {
     static final String NAME = "dac-quantizations";
 
     @Override
@@ -21,6 +21,11 @@ class DacQuantizationCalculation implements Calculation<DacQuantizationRequest> 
     @Override
     public Class<DacQuantizationRequest> requestType() {
         return DacQuantizationRequest.class;
+    }
+
+    @Override
+    public Class<DacQuantizationResponse> answerType() {
+        return DacQuantizationResponse.class;
     }
 
     @Override

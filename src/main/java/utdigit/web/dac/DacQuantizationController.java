@@ -9,17 +9,19 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "DAC and TCG", description = "What a DAC curve's span costs in amplitude resolution, with and without "
         + "time-corrected gain")
 class DacQuantizationController {
     private final CalculationRunner runner;
+    private final DacQuantizationCalculation calculation;
 
-    DacQuantizationController(CalculationRunner runner) {
+    DacQuantizationController(CalculationRunner runner, DacQuantizationCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + DacQuantizationCalculation.NAME,
@@ -36,7 +38,7 @@ class DacQuantizationController {
                     + "results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The assessment",
             content = @Content(schema = @Schema(implementation = DacQuantizationResponse.class)))
-    ObjectNode assess(@RequestBody DacQuantizationRequest request) {
-        return runner.run(DacQuantizationCalculation.NAME, request);
+    Stamped<DacQuantizationResponse> assess(@RequestBody DacQuantizationRequest request) {
+        return runner.run(calculation, request);
     }
 }

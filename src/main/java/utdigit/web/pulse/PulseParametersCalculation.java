@@ -15,7 +15,7 @@ import utdigit.web.common.VelocitySourceView;
 
 /** Request to core input, core result to answer, for pulse parameters. */
 @Component
-class PulseParametersCalculation implements Calculation<PulseParametersRequest> {
+class PulseParametersCalculation implements Calculation<PulseParametersRequest, PulseParametersResponse> {
     static final String NAME = "pulse-parameters";
 
     @Override
@@ -26,6 +26,11 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest> 
     @Override
     public Class<PulseParametersRequest> requestType() {
         return PulseParametersRequest.class;
+    }
+
+    @Override
+    public Class<PulseParametersResponse> answerType() {
+        return PulseParametersResponse.class;
     }
 
     @Override

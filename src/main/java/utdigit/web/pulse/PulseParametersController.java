@@ -9,16 +9,18 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Pulse and beam", description = "Period, wavelength, pulse band and durations, near field, beam spread")
 class PulseParametersController {
     private final CalculationRunner runner;
+    private final PulseParametersCalculation calculation;
 
-    PulseParametersController(CalculationRunner runner) {
+    PulseParametersController(CalculationRunner runner, PulseParametersCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + PulseParametersCalculation.NAME,
@@ -33,7 +35,7 @@ class PulseParametersController {
                     + "governing code decide.")
     @ApiResponse(responseCode = "200", description = "The pulse and beam parameters",
             content = @Content(schema = @Schema(implementation = PulseParametersResponse.class)))
-    ObjectNode compute(@RequestBody PulseParametersRequest request) {
-        return runner.run(PulseParametersCalculation.NAME, request);
+    Stamped<PulseParametersResponse> compute(@RequestBody PulseParametersRequest request) {
+        return runner.run(calculation, request);
     }
 }

@@ -11,7 +11,7 @@ import utdigit.web.common.ResultNotes;
 
 /** Request to core input, core result to answer, for quantization assessments. */
 @Component
-class QuantizationAssessmentCalculation implements Calculation<QuantizationAssessmentRequest> {
+class QuantizationAssessmentCalculation implements Calculation<QuantizationAssessmentRequest, QuantizationAssessmentResponse> {
     static final String NAME = "quantization-assessments";
 
     @Override
@@ -22,6 +22,11 @@ class QuantizationAssessmentCalculation implements Calculation<QuantizationAsses
     @Override
     public Class<QuantizationAssessmentRequest> requestType() {
         return QuantizationAssessmentRequest.class;
+    }
+
+    @Override
+    public Class<QuantizationAssessmentResponse> answerType() {
+        return QuantizationAssessmentResponse.class;
     }
 
     @Override

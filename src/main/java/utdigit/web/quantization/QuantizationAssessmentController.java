@@ -9,16 +9,18 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Quantization", description = "Amplitude digitization: bit depth, LSB, errors in dB")
 class QuantizationAssessmentController {
     private final CalculationRunner runner;
+    private final QuantizationAssessmentCalculation calculation;
 
-    QuantizationAssessmentController(CalculationRunner runner) {
+    QuantizationAssessmentController(CalculationRunner runner, QuantizationAssessmentCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + QuantizationAssessmentCalculation.NAME,
@@ -31,7 +33,7 @@ class QuantizationAssessmentController {
                     + "tolerance; results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The assessment",
             content = @Content(schema = @Schema(implementation = QuantizationAssessmentResponse.class)))
-    ObjectNode assess(@RequestBody QuantizationAssessmentRequest request) {
-        return runner.run(QuantizationAssessmentCalculation.NAME, request);
+    Stamped<QuantizationAssessmentResponse> assess(@RequestBody QuantizationAssessmentRequest request) {
+        return runner.run(calculation, request);
     }
 }

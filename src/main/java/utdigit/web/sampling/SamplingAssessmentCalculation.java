@@ -22,7 +22,7 @@ import utdigit.web.common.VelocitySourceView;
  * is pointed at the inch input.
  */
 @Component
-class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentRequest> {
+class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentRequest, SamplingAssessmentResponse> {
     static final String NAME = "sampling-assessments";
 
     /** Said when a velocity comes without a TFM figure that uses it (as the core says it). */
@@ -37,6 +37,11 @@ class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentReq
     @Override
     public Class<SamplingAssessmentRequest> requestType() {
         return SamplingAssessmentRequest.class;
+    }
+
+    @Override
+    public Class<SamplingAssessmentResponse> answerType() {
+        return SamplingAssessmentResponse.class;
     }
 
     /**

@@ -9,17 +9,19 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Sampling", description = "Sampling adequacy: samples per period, Nyquist, sampled-peak losses, timing, "
         + "required rates, TFM grid")
 class SamplingAssessmentController {
     private final CalculationRunner runner;
+    private final SamplingAssessmentCalculation calculation;
 
-    SamplingAssessmentController(CalculationRunner runner) {
+    SamplingAssessmentController(CalculationRunner runner, SamplingAssessmentCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + SamplingAssessmentCalculation.NAME,
@@ -42,7 +44,7 @@ class SamplingAssessmentController {
                     + "and procedure decide the rate and tolerance; results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The assessment",
             content = @Content(schema = @Schema(implementation = SamplingAssessmentResponse.class)))
-    ObjectNode assess(@RequestBody SamplingAssessmentRequest request) {
-        return runner.run(SamplingAssessmentCalculation.NAME, request);
+    Stamped<SamplingAssessmentResponse> assess(@RequestBody SamplingAssessmentRequest request) {
+        return runner.run(calculation, request);
     }
 }

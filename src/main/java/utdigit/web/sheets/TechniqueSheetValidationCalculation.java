@@ -29,7 +29,7 @@ import utdigit.web.rules.ProfileCatalog;
  * metric computed by the core calculators through {@link SheetEvaluator}, the rules checked.
  */
 @Component
-class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetRequest> {
+class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetRequest, TechniqueSheetValidationResponse> {
     static final String NAME = "technique-sheet-validations";
     static final String DEFAULT_PROFILE = "common-practice";
 
@@ -82,6 +82,11 @@ class TechniqueSheetValidationCalculation implements Calculation<TechniqueSheetR
     @Override
     public Class<TechniqueSheetRequest> requestType() {
         return TechniqueSheetRequest.class;
+    }
+
+    @Override
+    public Class<TechniqueSheetValidationResponse> answerType() {
+        return TechniqueSheetValidationResponse.class;
     }
 
     @Override

@@ -9,16 +9,18 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Technique sheets", description = "Validation of whole technique sheets against requirement profiles")
 class TechniqueSheetValidationController {
     private final CalculationRunner runner;
+    private final TechniqueSheetValidationCalculation calculation;
 
-    TechniqueSheetValidationController(CalculationRunner runner) {
+    TechniqueSheetValidationController(CalculationRunner runner, TechniqueSheetValidationCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + TechniqueSheetValidationCalculation.NAME,
@@ -32,7 +34,7 @@ class TechniqueSheetValidationController {
                     + "results support a qualified examiner, never replace procedure qualification.")
     @ApiResponse(responseCode = "200", description = "The verdict and findings",
             content = @Content(schema = @Schema(implementation = TechniqueSheetValidationResponse.class)))
-    ObjectNode validate(@RequestBody TechniqueSheetRequest request) {
-        return runner.run(TechniqueSheetValidationCalculation.NAME, request);
+    Stamped<TechniqueSheetValidationResponse> validate(@RequestBody TechniqueSheetRequest request) {
+        return runner.run(calculation, request);
     }
 }

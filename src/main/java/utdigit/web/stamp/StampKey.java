@@ -50,13 +50,23 @@ public final class StampKey {
 
     /** Unpadded base64url HMAC-SHA256 of {@code bytes}; only when {@link #configured()}. */
     public String sign(byte[] bytes) {
+        return encode(mac().doFinal(bytes));
+    }
+
+    /** A fresh HMAC-SHA256 with this key, to be fed incrementally; only when {@link #configured()}. */
+    Mac mac() {
         try {
             Mac mac = Mac.getInstance("HmacSHA256");
             mac.init(new SecretKeySpec(key, "HmacSHA256"));
-            return Base64.getUrlEncoder().withoutPadding().encodeToString(mac.doFinal(bytes));
+            return mac;
         } catch (NoSuchAlgorithmException | InvalidKeyException e) {
             throw new IllegalStateException("HmacSHA256 is required of every Java platform", e);
         }
+    }
+
+    /** A signature's text: unpadded base64url. */
+    static String encode(byte[] signature) {
+        return Base64.getUrlEncoder().withoutPadding().encodeToString(signature);
     }
 
     /** Whether {@code signature} is this key's signature of {@code bytes} (constant-time compare). */

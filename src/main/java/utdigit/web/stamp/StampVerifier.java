@@ -6,6 +6,7 @@ import java.util.Set;
 import java.util.TreeSet;
 import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
 import utdigit.web.common.CalculationRunner;
 import utdigit.web.common.InputProblem;
@@ -24,10 +25,12 @@ class StampVerifier {
 
     private final CalculationRunner runner;
     private final Stamper stamper;
+    private final JsonMapper mapper;
 
-    StampVerifier(CalculationRunner runner, Stamper stamper) {
+    StampVerifier(CalculationRunner runner, Stamper stamper, JsonMapper mapper) {
         this.runner = runner;
         this.stamper = stamper;
+        this.mapper = mapper;
     }
 
     StampVerificationResponse verify(JsonNode document) {
@@ -79,7 +82,8 @@ class StampVerifier {
             notes.add("the document has no inputs to recompute from");
         } else {
             try {
-                JsonNode recomputed = runner.runTree(calc.stringValue(), inputs);
+                // compared as written: a received document is a tree by nature
+                JsonNode recomputed = mapper.valueToTree(runner.runTree(calc.stringValue(), inputs));
                 compare("", document, recomputed, differences, true);
             } catch (InputProblem p) {
                 differences.add(new StampVerificationResponse.Difference("/inputs", inputs,

@@ -1,8 +1,14 @@
 package utdigit.web.stamp;
 
+import java.io.OutputStream;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import javax.crypto.Mac;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
@@ -16,12 +22,15 @@ public class Stamper {
 
     private final String serviceVersion;
     private final StampKey key;
+    private final CanonicalWriter canonical;
 
     Stamper(@Value("${utdigit.service-version}") String serviceVersion,
             @Value("${utdigit.stamp.key:}") String keyText,
-            @Value("${utdigit.stamp.key-id:}") String keyId) {
+            @Value("${utdigit.stamp.key-id:}") String keyId,
+            JsonMapper mapper) {
         this.serviceVersion = serviceVersion;
         this.key = StampKey.of(keyText, keyId);
+        this.canonical = new CanonicalWriter(mapper);
     }
 
     public String serviceVersion() {
@@ -32,26 +41,76 @@ public class Stamper {
         return key;
     }
 
-    /** Stamps {@code answer} in place (the stamp is its last member) and returns it. */
-    public ObjectNode stamp(String calculation, ObjectNode answer) {
-        answer.remove(STAMP);
-        ObjectNode stamp = answer.putObject(STAMP);
-        stamp.put("calculation", calculation);
-        stamp.put("service_version", serviceVersion);
-        byte[] canonical = CanonicalJson.bytes(answer);
-        stamp.put("sha256", StampKey.sha256Hex(canonical));
-        if (key.configured()) {
-            stamp.put("signature", key.sign(canonical));
-            stamp.put("key_id", key.keyId());
+    /**
+     * Stamps a typed answer: its canonical bytes (RFC 8785, with the stamp reduced to {calculation,
+     * service_version}) are written once, straight into SHA-256 and, with a key, HMAC-SHA256. Its
+     * numbers are checked as they are written: when one
+     * has no finite value (written as null), {@code notRepresentable} gives the message of the
+     * RESULT_NOT_REPRESENTABLE warning that names them, and the answer is stamped again with it.
+     * Every number is looked at once, in the pass the stamp needs anyway.
+     */
+    public <A> Stamped<A> stamp(String calculation, A answer, java.util.function.Function<A, String> notRepresentable) {
+        NonFiniteSeen seen = new NonFiniteSeen();
+        Stamped<A> stamped = stampOnce(calculation, answer, null, seen);
+        return seen.any ? stampOnce(calculation, answer, notRepresentable.apply(answer)) : stamped;
+    }
+
+    /** Set when a canonical pass met a number with no finite value. */
+    static final class NonFiniteSeen {
+        boolean any;
+    }
+
+    private <A> Stamped<A> stampOnce(String calculation, A answer, String notRepresentable) {
+        return stampOnce(calculation, answer, notRepresentable, new NonFiniteSeen());
+    }
+
+    private <A> Stamped<A> stampOnce(String calculation, A answer, String notRepresentable, NonFiniteSeen seen) {
+        Stamped<A> unsigned = new Stamped<>(answer, calculation, serviceVersion, null, null, null, notRepresentable);
+        MessageDigest sha256 = sha256();
+        Mac mac = key.configured() ? key.mac() : null;
+        canonical.write(unsigned, seen, new OutputStream() {
+            @Override
+            public void write(int b) {
+                sha256.update((byte) b);
+                if (mac != null) {
+                    mac.update((byte) b);
+                }
+            }
+
+            @Override
+            public void write(byte[] b, int off, int len) {
+                sha256.update(b, off, len);
+                if (mac != null) {
+                    mac.update(b, off, len);
+                }
+            }
+        });
+        String sha = HexFormat.of().formatHex(sha256.digest());
+        return mac == null ? new Stamped<>(answer, calculation, serviceVersion, sha, null, null, notRepresentable)
+                : new Stamped<>(answer, calculation, serviceVersion, sha, StampKey.encode(mac.doFinal()), key.keyId(),
+                        notRepresentable);
+    }
+
+    /** The canonical bytes the stamp of {@code answer} covers (for tests and tools). */
+    public static byte[] coveredBytes(JsonMapper mapper, Stamped<?> answer) {
+        java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
+        new CanonicalWriter(mapper).write(answer, new NonFiniteSeen(), out);
+        return out.toByteArray();
+    }
+
+    private static MessageDigest sha256() {
+        try {
+            return MessageDigest.getInstance("SHA-256");
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
         }
-        return answer;
     }
 
     /**
      * The canonical bytes a stamp covers for a document as received: a copy with its stamp reduced
      * to {calculation, service_version}.
      */
-    static byte[] coveredBytes(JsonNode document) {
+    public static byte[] coveredBytes(JsonNode document) {
         ObjectNode copy = (ObjectNode) document.deepCopy();
         JsonNode stamp = copy.get(STAMP);
         ObjectNode reduced = copy.putObject(STAMP);

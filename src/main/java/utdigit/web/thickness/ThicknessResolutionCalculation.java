@@ -21,7 +21,7 @@ import utdigit.web.common.VelocitySourceView;
  * 20 % of the velocity, the range the percent form has) are resolved here.
  */
 @Component
-class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionRequest> {
+class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionRequest, ThicknessResolutionResponse> {
     static final String NAME = "thickness-resolutions";
 
     /** Largest velocity uncertainty accepted, percent of the velocity (the contract's ranges, README and OpenAPI). */
@@ -37,6 +37,11 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
     @Override
     public Class<ThicknessResolutionRequest> requestType() {
         return ThicknessResolutionRequest.class;
+    }
+
+    @Override
+    public Class<ThicknessResolutionResponse> answerType() {
+        return ThicknessResolutionResponse.class;
     }
 
     @Override

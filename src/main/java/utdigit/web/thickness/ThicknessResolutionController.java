@@ -9,16 +9,18 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Thickness", description = "Thickness resolution of one sample and the uncertainty of a wall thickness")
 class ThicknessResolutionController {
     private final CalculationRunner runner;
+    private final ThicknessResolutionCalculation calculation;
 
-    ThicknessResolutionController(CalculationRunner runner) {
+    ThicknessResolutionController(CalculationRunner runner, ThicknessResolutionCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + ThicknessResolutionCalculation.NAME,
@@ -34,7 +36,7 @@ class ThicknessResolutionController {
                     + "decide the tolerance; results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The resolution and uncertainty",
             content = @Content(schema = @Schema(implementation = ThicknessResolutionResponse.class)))
-    ObjectNode resolve(@RequestBody ThicknessResolutionRequest request) {
-        return runner.run(ThicknessResolutionCalculation.NAME, request);
+    Stamped<ThicknessResolutionResponse> resolve(@RequestBody ThicknessResolutionRequest request) {
+        return runner.run(calculation, request);
     }
 }

@@ -18,7 +18,7 @@ import utdigit.web.common.VelocitySourceView;
  * checked here too, so that its absence is reported with the other field errors.
  */
 @Component
-class TimeOfFlightResolutionCalculation implements Calculation<TimeOfFlightResolutionRequest> {
+class TimeOfFlightResolutionCalculation implements Calculation<TimeOfFlightResolutionRequest, TimeOfFlightResolutionResponse> {
     static final String NAME = "time-of-flight-resolutions";
 
     @Override
@@ -29,6 +29,11 @@ class TimeOfFlightResolutionCalculation implements Calculation<TimeOfFlightResol
     @Override
     public Class<TimeOfFlightResolutionRequest> requestType() {
         return TimeOfFlightResolutionRequest.class;
+    }
+
+    @Override
+    public Class<TimeOfFlightResolutionResponse> answerType() {
+        return TimeOfFlightResolutionResponse.class;
     }
 
     @Override

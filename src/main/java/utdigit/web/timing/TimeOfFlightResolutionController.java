@@ -9,17 +9,19 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Time of flight", description = "What one sample of the time base is worth in sound path, depth and "
         + "surface distance; TOFD geometry, depth step and dead zones")
 class TimeOfFlightResolutionController {
     private final CalculationRunner runner;
+    private final TimeOfFlightResolutionCalculation calculation;
 
-    TimeOfFlightResolutionController(CalculationRunner runner) {
+    TimeOfFlightResolutionController(CalculationRunner runner, TimeOfFlightResolutionCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + TimeOfFlightResolutionCalculation.NAME,
@@ -36,7 +38,7 @@ class TimeOfFlightResolutionController {
                     + "tolerance; results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The resolution",
             content = @Content(schema = @Schema(implementation = TimeOfFlightResolutionResponse.class)))
-    ObjectNode resolve(@RequestBody TimeOfFlightResolutionRequest request) {
-        return runner.run(TimeOfFlightResolutionCalculation.NAME, request);
+    Stamped<TimeOfFlightResolutionResponse> resolve(@RequestBody TimeOfFlightResolutionRequest request) {
+        return runner.run(calculation, request);
     }
 }

@@ -13,7 +13,7 @@ import utdigit.web.common.VelocitySourceView;
 
 /** Request to core input, core result to answer, for TOFD set-ups. */
 @Component
-class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
+class TofdSetupCalculation implements Calculation<TofdSetupRequest, TofdSetupResponse> {
     static final String NAME = "tofd-setups";
 
     @Override
@@ -24,6 +24,11 @@ class TofdSetupCalculation implements Calculation<TofdSetupRequest> {
     @Override
     public Class<TofdSetupRequest> requestType() {
         return TofdSetupRequest.class;
+    }
+
+    @Override
+    public Class<TofdSetupResponse> answerType() {
+        return TofdSetupResponse.class;
     }
 
     @Override

@@ -9,17 +9,19 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "TOFD set-up", description = "Lateral-wave and back-wall times, the gate, depth from a measured time "
         + "and its uncertainty")
 class TofdSetupController {
     private final CalculationRunner runner;
+    private final TofdSetupCalculation calculation;
 
-    TofdSetupController(CalculationRunner runner) {
+    TofdSetupController(CalculationRunner runner, TofdSetupCalculation calculation) {
         this.runner = runner;
+        this.calculation = calculation;
     }
 
     @PostMapping(path = "/api/" + TofdSetupCalculation.NAME,
@@ -37,7 +39,7 @@ class TofdSetupController {
                     + "decide; results support a qualified examiner.")
     @ApiResponse(responseCode = "200", description = "The set-up",
             content = @Content(schema = @Schema(implementation = TofdSetupResponse.class)))
-    ObjectNode check(@RequestBody TofdSetupRequest request) {
-        return runner.run(TofdSetupCalculation.NAME, request);
+    Stamped<TofdSetupResponse> check(@RequestBody TofdSetupRequest request) {
+        return runner.run(calculation, request);
     }
 }

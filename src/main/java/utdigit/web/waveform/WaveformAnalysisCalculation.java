@@ -12,7 +12,7 @@ import utdigit.web.common.ToleranceCheck;
 
 /** Request to core input, core result to answer, for waveform analyses. */
 @Component
-class WaveformAnalysisCalculation implements Calculation<WaveformAnalysisRequest> {
+class WaveformAnalysisCalculation implements Calculation<WaveformAnalysisRequest, WaveformAnalysisResponse> {
     static final String NAME = "waveform-analyses";
 
     @Override
@@ -23,6 +23,11 @@ class WaveformAnalysisCalculation implements Calculation<WaveformAnalysisRequest
     @Override
     public Class<WaveformAnalysisRequest> requestType() {
         return WaveformAnalysisRequest.class;
+    }
+
+    @Override
+    public Class<WaveformAnalysisResponse> answerType() {
+        return WaveformAnalysisResponse.class;
     }
 
     /** The core result of a request that passed Bean Validation (the figure's series included). */

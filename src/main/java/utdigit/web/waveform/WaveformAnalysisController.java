@@ -12,7 +12,7 @@ import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
-import tools.jackson.databind.node.ObjectNode;
+import utdigit.web.stamp.Stamped;
 
 @RestController
 @Tag(name = "Waveforms", description = "Measured waveforms: a recorded pulse's spectrum and envelope, and the sampling "
@@ -51,7 +51,7 @@ class WaveformAnalysisController {
     @Operation(summary = "Analyse a recorded pulse and judge sampling on it", description = DESCRIPTION)
     @ApiResponse(responseCode = "200", description = "The analysis",
             content = @Content(schema = @Schema(implementation = WaveformAnalysisResponse.class)))
-    ObjectNode analyse(@RequestBody WaveformAnalysisRequest request) {
+    Stamped<WaveformAnalysisResponse> analyse(@RequestBody WaveformAnalysisRequest request) {
         return reports.json(request);
     }
 
@@ -69,7 +69,7 @@ class WaveformAnalysisController {
     @Operation(summary = "Analyse a recorded pulse given as CSV", description = DESCRIPTION)
     @ApiResponse(responseCode = "200", description = "The analysis",
             content = @Content(schema = @Schema(implementation = WaveformAnalysisResponse.class)))
-    ObjectNode analyseCsv(@io.swagger.v3.oas.annotations.parameters.RequestBody(description = "The record as CSV: 'amplitude', or "
+    Stamped<WaveformAnalysisResponse> analyseCsv(@io.swagger.v3.oas.annotations.parameters.RequestBody(description = "The record as CSV: 'amplitude', or "
             + "'time_<unit>,amplitude'", content = @Content(mediaType = CSV, schema = @Schema(type = "string"),
             examples = @io.swagger.v3.oas.annotations.media.ExampleObject(name = "pulse", value = CSV_EXAMPLE)))
             @RequestBody String body, @Parameter(description = "The other inputs, named as in the JSON "

@@ -2,8 +2,10 @@ package utdigit.web.waveform;
 
 import java.util.Map;
 import org.springframework.stereotype.Component;
-import tools.jackson.databind.node.ObjectNode;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
 import utdigit.web.common.CalculationRunner;
+import utdigit.web.stamp.Stamped;
 
 /**
  * The waveform answers of every body and Accept type, all through the one runner: the JSON answer,
@@ -14,14 +16,16 @@ import utdigit.web.common.CalculationRunner;
 class WaveformReports {
     private final CalculationRunner runner;
     private final WaveformAnalysisCalculation calculation;
+    private final JsonMapper mapper;
 
-    WaveformReports(CalculationRunner runner, WaveformAnalysisCalculation calculation) {
+    WaveformReports(CalculationRunner runner, WaveformAnalysisCalculation calculation, JsonMapper mapper) {
         this.runner = runner;
         this.calculation = calculation;
+        this.mapper = mapper;
     }
 
-    ObjectNode json(WaveformAnalysisRequest request) {
-        return runner.run(WaveformAnalysisCalculation.NAME, request);
+    Stamped<WaveformAnalysisResponse> json(WaveformAnalysisRequest request) {
+        return runner.run(calculation, request);
     }
 
     WaveformAnalysisRequest fromCsv(String body, Map<String, String> parameters) {
@@ -29,7 +33,8 @@ class WaveformReports {
     }
 
     String svg(WaveformAnalysisRequest request) {
-        ObjectNode answer = json(request); // validation, problems and the numbers, as for JSON
+        // validation, problems and the numbers, as for JSON; the caption reads the answer as it is written
+        JsonNode answer = mapper.valueToTree(json(request));
         return WaveformFigure.render(calculation.result(request), answer);
     }
 }
