@@ -22,7 +22,7 @@ import org.springframework.beans.factory.annotation.Autowired;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ObjectNode;
-import utdigit.web.common.CalculationRunner;
+import utdigit.web.pipeline.CalculationRunner;
 import utdigit.web.support.ApiTest;
 
 /**

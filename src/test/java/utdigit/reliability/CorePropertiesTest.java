@@ -23,9 +23,9 @@ import utdigit.core.common.CalculationException;
 import utdigit.core.common.Units;
 import utdigit.core.sampling.SamplingCalculator;
 import utdigit.core.sampling.SamplingInput;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.CalculationRunner;
-import utdigit.web.common.InputProblem;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.pipeline.CalculationRunner;
+import utdigit.web.problem.InputProblem;
 import utdigit.web.support.ApiTest;
 
 /**

@@ -36,7 +36,7 @@ class RestartAndShutdownTest extends ApiTest {
     static final String QUANTIZATION = "/api/quantization-assessments";
 
     @org.springframework.beans.factory.annotation.Autowired
-    utdigit.web.common.CalculationRunner runner;
+    utdigit.web.pipeline.CalculationRunner runner;
 
     /** The example request of every calculation (api-examples/<calculation>.json), and some of ours. */
     List<String[]> requests() throws IOException {

@@ -12,16 +12,16 @@ import utdigit.core.acquisition.AcquisitionInput;
 import utdigit.core.acquisition.AcquisitionResult;
 import utdigit.core.common.CalculationException;
 import utdigit.core.materials.VelocitySource;
-import utdigit.web.common.ToleranceCheck;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.InputProblem;
-import utdigit.web.common.JsonPointers;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.ProblemType;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ToleranceCheck;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.problem.InputProblem;
+import utdigit.web.json.JsonPointers;
+import utdigit.web.units.Mirrors;
+import utdigit.web.problem.ProblemType;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 
 /**
  * Request to core input, core result to answer, for acquisition budgets. The two forms of the gate

@@ -8,9 +8,9 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.acquisition.CaptureMode;
 import utdigit.core.materials.WaveMode;
-import utdigit.web.common.InputMessages;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.json.InputMessages;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /**
  * POST /api/acquisition-budgets. The ranges are the contract's (README "Conventions"); the

@@ -5,11 +5,11 @@ import utdigit.core.arrays.ArrayApertureCalculator;
 import utdigit.core.arrays.ArrayApertureInput;
 import utdigit.core.arrays.ArrayApertureResult;
 import utdigit.core.materials.VelocitySource;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.units.Mirrors;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 
 /** Request to core input, core result to answer, for array apertures. */
 @Component

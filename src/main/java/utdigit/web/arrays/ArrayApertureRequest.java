@@ -7,9 +7,9 @@ import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
-import utdigit.web.common.InputMessages;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.json.InputMessages;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/array-apertures. */
 @Schema(name = "ArrayApertureRequest", description = "A linear array's frequency, pitch and active aperture, and "

@@ -14,8 +14,8 @@ import org.springframework.web.HttpMediaTypeNotSupportedException;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RestController;
-import utdigit.web.common.InputProblem;
-import utdigit.web.common.PayloadTooLargeProblem;
+import utdigit.web.problem.InputProblem;
+import utdigit.web.problem.PayloadTooLargeProblem;
 
 @RestController
 @EnableConfigurationProperties(BatchLimits.class)

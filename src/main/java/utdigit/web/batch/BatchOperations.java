@@ -17,7 +17,7 @@ import org.springdoc.core.customizers.OpenApiCustomizer;
 import org.springframework.core.Ordered;
 import org.springframework.core.annotation.Order;
 import org.springframework.stereotype.Component;
-import utdigit.web.common.CalculationRunner;
+import utdigit.web.pipeline.CalculationRunner;
 
 /**
  * Documents each calculation's batch as its own operation, {@code POST /api/<name>/batch}, so a

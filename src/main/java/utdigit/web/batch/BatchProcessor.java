@@ -25,13 +25,13 @@ import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.dataformat.csv.CsvMapper;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.CalculationRunner;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.InputProblem;
-import utdigit.web.common.Problems;
-import utdigit.web.common.RecordMembers;
-import utdigit.web.common.ProblemType;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.pipeline.CalculationRunner;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.InputProblem;
+import utdigit.web.problem.Problems;
+import utdigit.web.json.RecordMembers;
+import utdigit.web.problem.ProblemType;
 import utdigit.web.metrics.ServiceMetrics;
 import utdigit.web.stamp.Stamped;
 
@@ -329,7 +329,7 @@ class BatchProcessor implements DisposableBean {
     private static final String ID = "sheet_id";
 
     private static String printable(Object id) {
-        return id instanceof String s ? utdigit.web.common.IJson.printable(s) : null;
+        return id instanceof String s ? utdigit.web.stamp.IJson.printable(s) : null;
     }
 
     /** A row whose request was read: OK with its answer, or INVALID with its problem. */

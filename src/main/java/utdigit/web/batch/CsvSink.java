@@ -14,8 +14,8 @@ import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.dataformat.csv.CsvMapper;
 import tools.jackson.dataformat.csv.CsvSchema;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.RecordMembers;
+import utdigit.web.problem.FieldError;
+import utdigit.web.json.RecordMembers;
 import utdigit.web.stamp.Stamped;
 
 /**

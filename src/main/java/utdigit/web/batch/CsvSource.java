@@ -8,10 +8,10 @@ import tools.jackson.databind.MappingIterator;
 import tools.jackson.databind.util.TokenBuffer;
 import tools.jackson.dataformat.csv.CsvMapper;
 import tools.jackson.dataformat.csv.CsvReadFeature;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.IJson;
-import utdigit.web.common.JsonPointers;
-import utdigit.web.common.ProblemType;
+import utdigit.web.problem.FieldError;
+import utdigit.web.stamp.IJson;
+import utdigit.web.json.JsonPointers;
+import utdigit.web.problem.ProblemType;
 
 /**
  * Rows of a text/csv body (RFC 4180: a header row of field names, dotted for nested sections such

@@ -13,8 +13,8 @@ import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.ProblemType;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.ProblemType;
 
 /**
  * Rows of an application/json body: one JSON array of request objects, read element by element.

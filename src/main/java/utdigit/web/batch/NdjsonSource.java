@@ -6,8 +6,8 @@ import java.io.UncheckedIOException;
 import java.util.List;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.json.JsonMapper;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.ProblemType;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.ProblemType;
 
 /**
  * Rows of an application/x-ndjson body: one JSON object per line (LF or CRLF); blank lines are not

@@ -8,7 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import utdigit.core.sheets.SheetMetrics;
-import utdigit.web.common.ContractNaming;
+import utdigit.web.json.ContractNaming;
 
 /**
  * The flat, dotted view of a request or answer record that CSV needs: each leaf property by its

@@ -3,8 +3,8 @@ package utdigit.web.batch;
 import java.util.List;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.util.TokenBuffer;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.ProblemType;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.ProblemType;
 
 /**
  * One input row: its 1-based number and its request, as a JSON tree (a JSON array element, read

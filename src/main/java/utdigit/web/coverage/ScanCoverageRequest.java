@@ -4,8 +4,8 @@ import io.swagger.v3.oas.annotations.media.Schema;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import utdigit.core.materials.WaveMode;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/scan-coverages. */
 @Schema(name = "ScanCoverageRequest", description = "The beam width at the reflector's depth, and the steps of the "

@@ -1,12 +1,12 @@
 package utdigit.web.coverage;
 
 import io.swagger.v3.oas.annotations.media.Schema;
-import utdigit.web.common.ToleranceCheck;
+import utdigit.web.pipeline.ToleranceCheck;
 import java.util.List;
 import java.util.Optional;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ResultNotes.WarningView;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/scan-coverages. */
 @Schema(name = "ScanCoverage", description = "The amplitude a reflector midway between two scan positions loses, "

@@ -4,9 +4,9 @@ import org.springframework.stereotype.Component;
 import utdigit.core.dac.DacQuantizationCalculator;
 import utdigit.core.dac.DacQuantizationInput;
 import utdigit.core.dac.DacQuantizationResult;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.ToleranceCheck;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.pipeline.ToleranceCheck;
 
 /** Request to core input, core result to answer, for DAC quantizations. */
 @Component

@@ -9,7 +9,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.quantization.CodeMapping;
 import utdigit.core.quantization.DigitizedSignal;
 import utdigit.core.quantization.Quantizer;
-import utdigit.web.common.InputMessages;
+import utdigit.web.json.InputMessages;
 
 /** POST /api/dac-quantizations. */
 @Schema(name = "DacQuantizationRequest", description = "The converter's bit depth and code mapping, a DAC curve's "

@@ -1,11 +1,11 @@
 package utdigit.web.dac;
 
 import io.swagger.v3.oas.annotations.media.Schema;
-import utdigit.web.common.ToleranceCheck;
+import utdigit.web.pipeline.ToleranceCheck;
 import java.util.List;
 import java.util.Optional;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ResultNotes.WarningView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ResultNotes.WarningView;
 
 /** The answer of POST /api/dac-quantizations. */
 @Schema(name = "DacQuantization", description = "What a DAC curve's span costs in amplitude resolution: the lowest "

@@ -12,9 +12,9 @@ import org.springframework.web.bind.annotation.RestController;
 import utdigit.core.materials.Material;
 import utdigit.core.materials.MaterialCatalog;
 import utdigit.core.materials.WaterVelocity;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.InputProblem;
-import utdigit.web.common.NotFoundProblem;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.InputProblem;
+import utdigit.web.problem.NotFoundProblem;
 
 @RestController
 @RequestMapping(path = "/api/materials", produces = MediaType.APPLICATION_JSON_VALUE)
@@ -50,7 +50,7 @@ class MaterialController {
         }
         double t = temperatureC == null ? WaterVelocity.DEFAULT_TEMPERATURE_C : temperatureC;
         if (!(t >= WaterVelocity.MIN_TEMPERATURE_C && t <= WaterVelocity.MAX_TEMPERATURE_C)) {
-            throw new InputProblem(utdigit.web.common.ProblemType.INVALID_INPUT,
+            throw new InputProblem(utdigit.web.problem.ProblemType.INVALID_INPUT,
                     "temperature_c must be within 0 to 95 C",
                     java.util.List.of(new FieldError("temperature_c", "must be within 0 to 95 C")));
         }

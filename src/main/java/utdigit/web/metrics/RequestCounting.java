@@ -9,7 +9,7 @@ import java.util.Map;
 import org.springframework.stereotype.Component;
 import org.springframework.web.filter.OncePerRequestFilter;
 import org.springframework.web.servlet.HandlerMapping;
-import utdigit.web.common.CalculationRunner;
+import utdigit.web.pipeline.CalculationRunner;
 
 /**
  * Counts every request under /api/ once it is answered ({@link ServiceMetrics#REQUESTS}): the

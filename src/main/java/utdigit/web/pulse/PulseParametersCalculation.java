@@ -5,13 +5,13 @@ import utdigit.core.materials.VelocitySource;
 import utdigit.core.pulse.PulseCalculator;
 import utdigit.core.pulse.PulseInput;
 import utdigit.core.pulse.PulseResult;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.JsonPointers;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.json.JsonPointers;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 
 /** Request to core input, core result to answer, for pulse parameters. */
 @Component

@@ -6,9 +6,9 @@ import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.pulse.CentreFrequencyConvention;
-import utdigit.web.common.InputMessages;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.json.InputMessages;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/pulse-parameters. */
 @Schema(name = "PulseParametersRequest", description = "A probe and the part's velocity. Give the velocity once: "

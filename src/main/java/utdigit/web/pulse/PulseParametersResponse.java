@@ -3,9 +3,9 @@ package utdigit.web.pulse;
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Optional;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ResultNotes.WarningView;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/pulse-parameters. */
 @Schema(name = "PulseParameters", description = "Period, wavelength, the Gaussian pulse model's band and durations, "

@@ -5,9 +5,9 @@ import org.springframework.stereotype.Component;
 import utdigit.core.quantization.QuantizationCalculator;
 import utdigit.core.quantization.QuantizationInput;
 import utdigit.core.quantization.QuantizationResult;
-import utdigit.web.common.ToleranceCheck;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.ResultNotes;
+import utdigit.web.pipeline.ToleranceCheck;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.pipeline.ResultNotes;
 
 /** Request to core input, core result to answer, for quantization assessments. */
 @Component

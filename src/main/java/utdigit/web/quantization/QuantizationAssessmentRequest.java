@@ -9,7 +9,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.quantization.CodeMapping;
 import utdigit.core.quantization.DigitizedSignal;
 import utdigit.core.quantization.Quantizer;
-import utdigit.web.common.InputMessages;
+import utdigit.web.json.InputMessages;
 
 /** POST /api/quantization-assessments. */
 @Schema(name = "QuantizationAssessmentRequest", description = "The converter's bit depth and how its codes map "

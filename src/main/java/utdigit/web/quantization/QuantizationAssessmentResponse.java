@@ -3,9 +3,9 @@ package utdigit.web.quantization;
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Optional;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ToleranceCheck;
-import utdigit.web.common.ResultNotes.WarningView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ToleranceCheck;
+import utdigit.web.pipeline.ResultNotes.WarningView;
 
 /** The answer of POST /api/quantization-assessments. */
 @Schema(name = "QuantizationAssessment", description = "Amplitude resolution of the converter in %FSH and dB. "

@@ -9,7 +9,7 @@ import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
 import utdigit.core.common.Sources;
-import utdigit.web.common.NotFoundProblem;
+import utdigit.web.problem.NotFoundProblem;
 
 @RestController
 @RequestMapping(path = "/api/references", produces = MediaType.APPLICATION_JSON_VALUE)

@@ -13,7 +13,7 @@ import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RestController;
 import utdigit.core.rules.RequirementProfile;
 import utdigit.core.rules.Rule;
-import utdigit.web.common.NotFoundProblem;
+import utdigit.web.problem.NotFoundProblem;
 import utdigit.web.rules.ProfileViews.ProfileList;
 import utdigit.web.rules.ProfileViews.ProfileRuleView;
 import utdigit.web.rules.ProfileViews.ProfileView;

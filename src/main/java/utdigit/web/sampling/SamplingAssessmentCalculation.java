@@ -8,12 +8,12 @@ import utdigit.core.materials.VelocitySource;
 import utdigit.core.sampling.SamplingCalculator;
 import utdigit.core.sampling.SamplingInput;
 import utdigit.core.sampling.SamplingResult;
-import utdigit.web.common.ToleranceCheck;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ToleranceCheck;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.units.Mirrors;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 
 /**
  * Request to core input, core result to answer, for sampling assessments. The inch mirrors of the

@@ -12,9 +12,9 @@ import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.PeakReading;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.TfmImage;
-import utdigit.web.common.InputMessages;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.json.InputMessages;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/sampling-assessments. */
 @Schema(name = "SamplingAssessmentRequest", description = "A digitizer's sampling frequency and a probe's nominal "

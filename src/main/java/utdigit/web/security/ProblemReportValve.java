@@ -8,8 +8,8 @@ import org.apache.catalina.connector.Response;
 import org.apache.catalina.valves.ErrorReportValve;
 import org.springframework.security.web.header.HeaderWriter;
 import tools.jackson.databind.json.JsonMapper;
-import utdigit.web.common.Problems;
-import utdigit.web.common.ProblemType;
+import utdigit.web.problem.Problems;
+import utdigit.web.problem.ProblemType;
 
 /**
  * Tomcat's own error answers (a request refused before it reaches the application: an invalid

@@ -28,7 +28,9 @@ import org.springframework.security.web.AuthenticationEntryPoint;
 import org.springframework.security.web.SecurityFilterChain;
 import org.springframework.security.web.firewall.RequestRejectedHandler;
 import org.springframework.util.StringUtils;
-import utdigit.web.common.ProblemType;
+import utdigit.web.problem.ProblemType;
+import utdigit.web.limits.ProblemResponses;
+import utdigit.web.limits.RequestBodyFilter;
 
 /**
  * Optional authentication. Off by default: every endpoint is open and Spring Security is not

@@ -1,7 +1,6 @@
 /**
- * What protects the service as a whole, ahead of every feature: security headers on every answer,
- * request bodies read before any controller (capped, with a deadline, without holding a worker
- * thread while a slow client trickles), connections closed without draining a body answered early,
- * and optional JWT bearer authentication of /api.
+ * What protects every answer: security headers (Spring Security's header writers, also on the
+ * container's own refusals) and optional JWT bearer authentication of /api, with Spring Security
+ * installed only when a JWT issuer or key is configured.
  */
 package utdigit.web.security;

@@ -7,9 +7,9 @@ import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import utdigit.core.dac.TcgMode;
 import utdigit.core.sheets.SheetSetup;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** The set-up section of a technique sheet: coverage, array, DAC/TCG, the TOFD gate and an angle beam's wedge. */
 @Schema(name = "SheetSetup", description = "Scan coverage (with acquisition.scan_increment), the array's pitch and "

@@ -19,7 +19,7 @@ import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.TfmImage;
 import utdigit.core.sheets.SheetTechnique;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/technique-sheet-validations: a technique sheet and the profile to check it against. */
 @Schema(name = "TechniqueSheet", description = "A technique sheet. Every section and field is optional: the service "

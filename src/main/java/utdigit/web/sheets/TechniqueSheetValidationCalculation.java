@@ -14,14 +14,14 @@ import utdigit.core.sheets.SheetMetrics;
 import utdigit.core.sheets.SheetInput;
 import utdigit.core.sheets.SheetSetup;
 import utdigit.core.sheets.SheetResult;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.ContractNaming;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.InputProblem;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.json.ContractNaming;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.problem.InputProblem;
+import utdigit.web.units.Mirrors;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 import utdigit.web.rules.ProfileCatalog;
 
 /**

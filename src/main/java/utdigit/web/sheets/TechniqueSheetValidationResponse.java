@@ -8,9 +8,9 @@ import java.util.Map;
 import utdigit.core.rules.Comparison;
 import utdigit.core.rules.VerificationStatus;
 import utdigit.core.rules.Verdict;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ResultNotes.WarningView;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/technique-sheet-validations. */
 @Schema(name = "TechniqueSheetValidation", description = "The sheet's verdict: FAIL when a feasibility check of "

@@ -9,7 +9,6 @@ import java.util.List;
 import java.util.Map;
 import tools.jackson.core.io.NumberOutput;
 import tools.jackson.databind.JsonNode;
-import utdigit.web.common.IJson;
 
 /**
  * The JSON Canonicalization Scheme of RFC 8785 (JCS) over a Jackson tree: object members sorted

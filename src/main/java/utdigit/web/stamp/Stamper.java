@@ -18,7 +18,7 @@ import tools.jackson.databind.node.ObjectNode;
  */
 @Component
 public class Stamper {
-    static final String STAMP = "stamp";
+    public static final String STAMP = "stamp";
 
     private final String serviceVersion;
     private final StampKey key;
@@ -37,7 +37,7 @@ public class Stamper {
         return serviceVersion;
     }
 
-    StampKey key() {
+    public StampKey key() {
         return key;
     }
 

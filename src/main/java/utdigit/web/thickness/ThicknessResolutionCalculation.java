@@ -7,13 +7,13 @@ import utdigit.core.materials.VelocitySource;
 import utdigit.core.thickness.ThicknessCalculator;
 import utdigit.core.thickness.ThicknessInput;
 import utdigit.core.thickness.ThicknessResult;
-import utdigit.web.common.ToleranceCheck;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.JsonPointers;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ToleranceCheck;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.json.JsonPointers;
+import utdigit.web.units.Mirrors;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 
 /**
  * Request to core input, core result to answer, for thickness resolutions. The mm/in mirrors, the

@@ -9,7 +9,7 @@ import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
-import utdigit.web.common.CalculationRunner;
+import utdigit.web.pipeline.CalculationRunner;
 import utdigit.web.stamp.Stamped;
 
 @RestController

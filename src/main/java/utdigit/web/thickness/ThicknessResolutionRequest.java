@@ -8,9 +8,9 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.thickness.Measurement;
-import utdigit.web.common.InputMessages;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.json.InputMessages;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/thickness-resolutions. */
 @Schema(name = "ThicknessResolutionRequest", description = "The digitizer's rate, the part's velocity and its "

@@ -3,10 +3,10 @@ package utdigit.web.thickness;
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Optional;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ToleranceCheck;
-import utdigit.web.common.ResultNotes.WarningView;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ToleranceCheck;
+import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/thickness-resolutions. */
 @Schema(name = "ThicknessResolution", description = "How finely one sample of the stored time base resolves the "

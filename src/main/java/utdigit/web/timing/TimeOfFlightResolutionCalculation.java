@@ -6,11 +6,11 @@ import utdigit.core.timing.Technique;
 import utdigit.core.timing.TimeOfFlightCalculator;
 import utdigit.core.timing.TimeOfFlightInput;
 import utdigit.core.timing.TimeOfFlightResult;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.units.Mirrors;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 
 /**
  * Request to core input, core result to answer, for time-of-flight resolutions. The mm/in mirrors

@@ -9,9 +9,9 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.timing.Technique;
 import utdigit.core.timing.TimeReference;
-import utdigit.web.common.InputMessages;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.json.InputMessages;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/time-of-flight-resolutions. */
 @Schema(name = "TimeOfFlightResolutionRequest", description = "The digitizer's rate and the part's velocity, with "

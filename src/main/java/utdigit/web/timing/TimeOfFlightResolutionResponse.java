@@ -3,9 +3,9 @@ package utdigit.web.timing;
 import io.swagger.v3.oas.annotations.media.Schema;
 import java.util.List;
 import java.util.Optional;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ResultNotes.WarningView;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/time-of-flight-resolutions. */
 @Schema(name = "TimeOfFlightResolution", description = "What one sample of the stored time base is worth in time "

@@ -5,11 +5,11 @@ import utdigit.core.materials.VelocitySource;
 import utdigit.core.timing.TofdSetupCalculator;
 import utdigit.core.timing.TofdSetupInput;
 import utdigit.core.timing.TofdSetupResult;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.FieldErrors;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.VelocitySourceView;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.FieldErrors;
+import utdigit.web.units.Mirrors;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.units.VelocitySourceView;
 
 /** Request to core input, core result to answer, for TOFD set-ups. */
 @Component

@@ -7,8 +7,8 @@ import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.timing.TimeReference;
-import utdigit.web.common.Mirrors;
-import utdigit.web.common.VelocityFields;
+import utdigit.web.units.Mirrors;
+import utdigit.web.units.VelocityFields;
 
 /** POST /api/tofd-setups. */
 @Schema(name = "TofdSetupRequest", description = "A TOFD set-up: the part's velocity (of the wave mode used: "

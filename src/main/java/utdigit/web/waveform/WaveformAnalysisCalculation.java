@@ -5,10 +5,10 @@ import org.springframework.stereotype.Component;
 import utdigit.core.waveform.WaveformAnalyzer;
 import utdigit.core.waveform.WaveformInput;
 import utdigit.core.waveform.WaveformResult;
-import utdigit.web.common.Calculation;
-import utdigit.web.common.InputProblem;
-import utdigit.web.common.ResultNotes;
-import utdigit.web.common.ToleranceCheck;
+import utdigit.web.pipeline.Calculation;
+import utdigit.web.problem.InputProblem;
+import utdigit.web.pipeline.ResultNotes;
+import utdigit.web.pipeline.ToleranceCheck;
 
 /** Request to core input, core result to answer, for waveform analyses. */
 @Component

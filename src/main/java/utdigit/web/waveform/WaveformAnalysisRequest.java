@@ -13,7 +13,7 @@ import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.PeakReading;
 import utdigit.core.waveform.WaveformInput;
-import utdigit.web.common.InputMessages;
+import utdigit.web.json.InputMessages;
 
 /** POST /api/waveform-analyses. */
 @Schema(name = "WaveformAnalysisRequest", description = "A recorded pulse (its samples, equally spaced, and the rate "

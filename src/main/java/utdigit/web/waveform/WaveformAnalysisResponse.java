@@ -1,12 +1,12 @@
 package utdigit.web.waveform;
 
 import io.swagger.v3.oas.annotations.media.Schema;
-import utdigit.web.common.ToleranceCheck;
+import utdigit.web.pipeline.ToleranceCheck;
 import java.util.List;
 import java.util.Optional;
 import utdigit.core.waveform.WaveformResult.SpectrumWindow;
-import utdigit.web.common.ResultNotes.ReferenceView;
-import utdigit.web.common.ResultNotes.WarningView;
+import utdigit.web.pipeline.ResultNotes.ReferenceView;
+import utdigit.web.pipeline.ResultNotes.WarningView;
 
 /** The answer of POST /api/waveform-analyses. */
 @Schema(name = "WaveformAnalysis", description = "A recorded pulse's measured spectrum and envelope, the record's own "

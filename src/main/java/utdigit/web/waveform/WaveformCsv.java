@@ -7,8 +7,8 @@ import java.util.Map;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
-import utdigit.web.common.FieldError;
-import utdigit.web.common.InputProblem;
+import utdigit.web.problem.FieldError;
+import utdigit.web.problem.InputProblem;
 
 /**
  * A text/csv record: a header row, then one row per sample; either one column of amplitudes

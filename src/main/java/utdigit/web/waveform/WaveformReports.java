@@ -4,7 +4,7 @@ import java.util.Map;
 import org.springframework.stereotype.Component;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
-import utdigit.web.common.CalculationRunner;
+import utdigit.web.pipeline.CalculationRunner;
 import utdigit.web.stamp.Stamped;
 
 /**

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
+import utdigit.web.units.Mirrors;
 
 /**
  * The inch mirrors of length results and the inch values beside the lengths a message quotes: 25.4 mm

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
+import utdigit.web.pipeline.NonFiniteFields;
 
 /**
  * The pointers of numbers with no finite value, read from a typed answer: in the order the answer

@@ -1,8 +1,0 @@
-package utdigit.web.common;
-
-/** A GET for an id that does not exist; answered as a 404 problem. */
-public final class NotFoundProblem extends RuntimeException {
-    public NotFoundProblem(String detail) {
-        super(detail, null, false, false);
-    }
-}
