@@ -16,10 +16,13 @@ import javax.crypto.spec.SecretKeySpec;
 public final class StampKey {
     private final byte[] key;
     private final String keyId;
+    /** HMAC-SHA256 with the key set, copied for each answer; only read after construction. */
+    private final Mac macPrototype;
 
     private StampKey(byte[] key, String keyId) {
         this.key = key;
         this.keyId = keyId;
+        this.macPrototype = key == null ? null : newMac();
     }
 
     /** A key from its text (UTF-8 bytes) and id; an empty or null text means "no key". */
@@ -53,8 +56,19 @@ public final class StampKey {
         return encode(mac().doFinal(bytes));
     }
 
-    /** A fresh HMAC-SHA256 with this key, to be fed incrementally; only when {@link #configured()}. */
+    /**
+     * A fresh HMAC-SHA256 with this key, to be fed incrementally; only when {@link #configured()}.
+     * A copy of one made once: no provider look-up and key set-up per answer.
+     */
     Mac mac() {
+        try {
+            return (Mac) macPrototype.clone();
+        } catch (CloneNotSupportedException e) {
+            return newMac();
+        }
+    }
+
+    private Mac newMac() {
         try {
             Mac mac = Mac.getInstance("HmacSHA256");
             mac.init(new SecretKeySpec(key, "HmacSHA256"));

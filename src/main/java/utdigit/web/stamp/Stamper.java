@@ -19,6 +19,8 @@ import tools.jackson.databind.node.ObjectNode;
 @Component
 public class Stamper {
     public static final String STAMP = "stamp";
+    private static final MessageDigest SHA256 = newSha256();
+    private static final HexFormat HEX = HexFormat.of();
 
     private final String serviceVersion;
     private final StampKey key;
@@ -85,7 +87,7 @@ public class Stamper {
                 }
             }
         });
-        String sha = HexFormat.of().formatHex(sha256.digest());
+        String sha = HEX.formatHex(sha256.digest());
         return mac == null ? new Stamped<>(answer, calculation, serviceVersion, sha, null, null, notRepresentable)
                 : new Stamped<>(answer, calculation, serviceVersion, sha, StampKey.encode(mac.doFinal()), key.keyId(),
                         notRepresentable);
@@ -98,7 +100,19 @@ public class Stamper {
         return out.toByteArray();
     }
 
+    /**
+     * A fresh SHA-256: a copy of one looked up once (the provider look-up of getInstance was 1 % of
+     * a light request's CPU in a JFR profile, src/docs/performance.md).
+     */
     private static MessageDigest sha256() {
+        try {
+            return (MessageDigest) SHA256.clone();
+        } catch (CloneNotSupportedException e) {
+            return newSha256();
+        }
+    }
+
+    private static MessageDigest newSha256() {
         try {
             return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
