@@ -51,9 +51,9 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
         boolean warn = value.notRepresentable() != null;
         // members the answer record does not have: the stamp, and the warnings when one must be added;
         // in the canonical form each goes before the first member whose name sorts after it (else last)
-        int stampAt = canonical ? layout.sortedBefore(Stamper.STAMP) : layout.members.length;
+        int stampAt = canonical ? layout.stampSorted : layout.members.length;
         int warningsAt = !warn || layout.warnings >= 0 ? -1
-                : canonical ? layout.sortedBefore(WARNINGS) : layout.members.length;
+                : canonical ? layout.warningsSorted : layout.members.length;
         JsonGenerator out = canonical ? gen : new FiniteNumbers(gen);
         gen.writeStartObject(value);
         try {
@@ -86,8 +86,16 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
         gen.writeEndObject();
     }
 
-    /** The members of an answer serializer in the order it writes them, their names, and where warnings is. */
-    private record Layout(PropertyWriter[] members, String[] names, int warnings) {
+    /**
+     * The members of an answer serializer in the order it writes them, their names, where warnings
+     * is, and (members sorted by name) where the stamp and an added warnings member go: worked out
+     * once per answer type, not per answer.
+     */
+    private record Layout(PropertyWriter[] members, String[] names, int warnings, int stampSorted, int warningsSorted) {
+        Layout(PropertyWriter[] members, String[] names, int warnings) {
+            this(members, names, warnings, sortedBefore(names, Stamper.STAMP), sortedBefore(names, WARNINGS));
+        }
+
         static Layout of(ValueSerializer<?> serializer) {
             PropertyWriter[] members = StampedSerializer.members(serializer);
             String[] names = new String[members.length];
@@ -102,7 +110,7 @@ final class StampedSerializer extends StdSerializer<Stamped<?>> {
         }
 
         /** The index of the first member whose name sorts after {@code name} (members sorted by name). */
-        int sortedBefore(String name) {
+        static int sortedBefore(String[] names, String name) {
             for (int i = 0; i < names.length; i++) {
                 if (name.compareTo(names[i]) < 0) {
                     return i;
