@@ -24,11 +24,7 @@ public class ServiceMetrics {
     public static final String BATCH_ROWS = "utdigit.batch.rows";
 
     private final MeterRegistry registry;
-    private final Map<RequestKey, Counter> requests = new ConcurrentHashMap<>();
     private final Map<String, Counter> counters = new ConcurrentHashMap<>();
-
-    /** The tags of one request counter: looked up per request without building a string. */
-    private record RequestKey(String endpoint, String method, int status) {}
 
     ServiceMetrics(MeterRegistry registry) {
         this.registry = registry;
@@ -36,15 +32,11 @@ public class ServiceMetrics {
 
     /** Counts one answered API request. */
     public void request(String endpoint, String method, int status) {
-        RequestKey key = new RequestKey(endpoint, method, status);
-        Counter counter = requests.get(key);
-        if (counter == null) {
-            counter = requests.computeIfAbsent(key, k -> Counter.builder(REQUESTS)
-                    .description("API requests answered, by endpoint, method and HTTP status")
-                    .tag("endpoint", endpoint).tag("method", method).tag("status", Integer.toString(status))
-                    .register(registry));
-        }
-        counter.increment();
+        String key = REQUESTS + ' ' + endpoint + ' ' + method + ' ' + status;
+        counters.computeIfAbsent(key, k -> Counter.builder(REQUESTS)
+                .description("API requests answered, by endpoint, method and HTTP status")
+                .tag("endpoint", endpoint).tag("method", method).tag("status", Integer.toString(status))
+                .register(registry)).increment();
     }
 
     /** Counts one batch row written to the answer stream. */
