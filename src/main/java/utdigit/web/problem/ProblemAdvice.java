@@ -154,8 +154,10 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
                 List.of(new FieldError(name, "is missing or invalid")), request);
     }
 
+    /** The media types named in one order (Spring's list follows a hash order that changes between starts). */
     private static String supported(List<MediaType> types, String prefix, String separator) {
-        return types.isEmpty() ? "" : prefix + String.join(separator, types.stream().map(MediaType::toString).toList());
+        return types.isEmpty() ? "" : prefix + String.join(separator,
+                types.stream().map(MediaType::toString).sorted().toList());
     }
 
     /** Whether {@code e} is the connection to the client failing under a write (reset, broken pipe, aborted). */
