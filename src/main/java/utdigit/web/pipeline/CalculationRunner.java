@@ -24,6 +24,7 @@ import utdigit.core.common.CalculationException;
 import utdigit.core.common.SearchBudget;
 import utdigit.web.stamp.Stamped;
 import utdigit.web.stamp.Stamper;
+import utdigit.web.units.Mirrors;
 import utdigit.web.problem.FieldError;
 import utdigit.web.json.InputMessages;
 import utdigit.web.problem.InputProblem;
@@ -154,11 +155,13 @@ public class CalculationRunner implements DisposableBean {
                     + "reached its work bound for these inputs; check the units and magnitudes of the inputs",
                     List.of(new FieldError("", "the search reached its work bound")));
         } catch (CalculationException e) {
+            // The core quotes lengths in mm; the problem gives the inch value beside each, as warnings do.
+            String message = Mirrors.withInches(e.getMessage());
             List<FieldError> errors = new ArrayList<>();
             for (String field : e.fields()) {
-                errors.add(new FieldError(c.pointer(field, request), e.getMessage()));
+                errors.add(new FieldError(c.pointer(field, request), message));
             }
-            throw new InputProblem(ProblemAdvice.typeOf(e), e.getMessage(), errors);
+            throw new InputProblem(ProblemAdvice.typeOf(e), message, errors);
         } catch (ArithmeticException | IllegalArgumentException e) {
             // Inputs valid one by one can still lie where a formula has no finite answer (a diameter or a
             // tolerance of the smallest positive double): a typed refusal, never a 500. Logged to be fixed.

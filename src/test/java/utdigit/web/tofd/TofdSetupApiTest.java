@@ -1,6 +1,7 @@
 package utdigit.web.tofd;
 
 import static org.hamcrest.Matchers.closeTo;
+import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.hasItem;
 import static org.hamcrest.Matchers.hasKey;
@@ -57,7 +58,10 @@ class TofdSetupApiTest extends ApiTest {
         assertInvalid(PATH, "{\"velocity_m_per_s\": 6000, \"probe_centre_separation_mm\": 60, \"thickness_mm\": 40, "
                 + "\"time_reference\": \"LATERAL_WAVE\"}", "/time_reference");
         post(PATH, "{\"velocity_m_per_s\": 6000, \"probe_centre_separation_mm\": 60, \"thickness_mm\": 40, "
-                + "\"depth_mm\": 41}").statusCode(422).body("errors.pointer", hasItem("/depth_mm"));
+                + "\"depth_mm\": 41}").statusCode(422).body("errors.pointer", hasItem("/depth_mm"))
+                // the problem quotes each length with its inch value: 41 / 25.4 = 1.614 in, 40 / 25.4 = 1.575 in
+                // (25.4 mm per inch exactly, NIST SP 811)
+                .body("detail", containsString("41 mm (1.614 in)")).body("detail", containsString("40 mm (1.575 in)"));
         post(PATH, "{\"velocity_m_per_s\": 6000, \"probe_centre_separation_mm\": 60, \"thickness_mm\": 40, "
                 + "\"measured_time_us\": 9}").statusCode(422).body("errors.pointer", hasItem("/measured_time_us"));
     }
