@@ -148,7 +148,7 @@ class ServiceClientIT {
         // The demo shop's sheet BPF-W-PAUT-03: 61 focal laws at 6000 Hz and 1 mm increments allow
         // 6000 / 61 x 1 = 98.4 mm/s; the sheet plans 150 mm/s.
         TechniqueSheet sheet = new TechniqueSheet().sheetId("BPF-W-PAUT-03").revision("A")
-                .technique(TechniqueSheet.TechniqueEnum.PHASED_ARRAY).profileIds(java.util.List.of("common-practice"))
+                .technique(TechniqueSheet.TechniqueEnum.PHASED_ARRAY)
                 .probe(new SheetProbe().frequencyMhz(5.0).bandwidthPercent(65.0).elementCount(32))
                 .material(new SheetMaterial().material("carbon-steel").waveMode(SheetMaterial.WaveModeEnum.SHEAR)
                         .thicknessMm(32.0).refractedAngleDeg(55.0))
@@ -162,6 +162,9 @@ class ServiceClientIT {
         assertThat(answer.getVerdict()).isEqualTo(TechniqueSheetValidation.VerdictEnum.FAIL);
         assertThat(answer.getValues().get("max_scan_speed_mm_per_s").doubleValue()).isCloseTo(6000.0 / 61, within(1e-9));
         assertThat(answer.getStamp().getCalculation()).isEqualTo("technique-sheet-validations");
+        // No profile_ids set: the generated model leaves the list out (containerDefaultToNull), and the
+        // sheet is checked against the default profile.
+        assertThat(answer.getProfiles()).extracting(p -> p.getId()).containsExactly("common-practice");
     }
 
     @Test
