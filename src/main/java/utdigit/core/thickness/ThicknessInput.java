@@ -45,20 +45,6 @@ public record ThicknessInput(
         return new Builder(samplingFrequencyMhz, velocityMPerS, nominalThicknessMm);
     }
 
-    /** A builder that starts from this input's values. */
-    public Builder toBuilder() {
-        return new Builder(samplingFrequencyMhz, velocityMPerS, nominalThicknessMm)
-                .decimationFactor(decimationFactor)
-                .velocityUncertaintyMPerS(velocityUncertaintyMPerS)
-                .velocityUncertaintyPercent(velocityUncertaintyPercent)
-                .measurement(measurement)
-                .echoSpacing(echoSpacing)
-                .requiredResolutionMm(requiredResolutionMm)
-                .coverageFactor(coverageFactor)
-                .frequencyMhz(frequencyMhz)
-                .bandwidthPercent(bandwidthPercent);
-    }
-
     /** Collects optional inputs; null leaves an input "not given". */
     public static final class Builder {
         private final double samplingFrequencyMhz;
