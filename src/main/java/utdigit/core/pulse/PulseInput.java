@@ -6,8 +6,7 @@ import utdigit.core.common.Checks;
 /**
  * The inputs of the pulse-parameters calculation (POST /api/pulse-parameters), normalised by the
  * caller: lengths in mm, velocities in m/s, frequencies in MHz, angles in degrees. Every optional
- * input is a nullable boxed value, null meaning "not given"; create with {@link #of} and the
- * {@code with...} methods.
+ * input is a nullable boxed value, null meaning "not given"; build with {@link #builder}.
  *
  * @param frequencyMhz nominal probe frequency f, MHz, > 0
  * @param velocityMPerS the part's velocity of the chosen wave mode v, m/s, > 0 (resolved by the

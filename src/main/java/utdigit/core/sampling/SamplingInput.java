@@ -8,7 +8,7 @@ import utdigit.core.pulse.CentreFrequencyConvention;
  * The inputs of the sampling assessment (POST /api/sampling-assessments), normalised by the caller:
  * frequencies in MHz, lengths in mm, velocities in m/s. Every optional input and option is a
  * nullable boxed value, null meaning "not given" (the calculator applies the contract's defaults);
- * create with {@link #of} and the {@code with...} methods. Each value is checked on its own here;
+ * build with {@link #builder}. Each value is checked on its own here;
  * combinations are checked by {@link SamplingCalculator}.
  *
  * @param samplingFrequencyMhz the converter's (raw) sampling frequency fs, MHz, > 0
