@@ -45,7 +45,7 @@ public record ThicknessInput(
         return new Builder(samplingFrequencyMhz, velocityMPerS, nominalThicknessMm);
     }
 
-    /** Collects optional inputs; null leaves an input "not given". */
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
     public static final class Builder {
         private final double samplingFrequencyMhz;
         private final double velocityMPerS;

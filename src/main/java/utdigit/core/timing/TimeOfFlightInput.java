@@ -58,7 +58,7 @@ public record TimeOfFlightInput(
                 .timeReference(timeReference);
     }
 
-    /** Collects optional inputs; null leaves an input "not given". */
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
     public static final class Builder {
         private final double samplingFrequencyMhz;
         private final double velocityMPerS;
