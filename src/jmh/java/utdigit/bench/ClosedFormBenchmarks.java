@@ -54,23 +54,24 @@ public class ClosedFormBenchmarks {
     @Setup
     public void setUp() {
         // 5 MHz, 60 % probe, 10 mm element on steel through a 20 mm rexolite-like wedge at 40 deg.
-        pulse = PulseInput.of(5.0, 5920.0)
-                .withBandwidthPercent(60.0)
-                .withElementDiameterMm(10.0)
-                .withDistanceMm(50.0)
-                .withWedgePathMm(20.0)
-                .withWedgeVelocityMPerS(2330.0)
-                .withIncidentAngleDeg(40.0);
+        pulse = PulseInput.builder(5.0, 5920.0)
+                .bandwidthPercent(60.0)
+                .elementDiameterMm(10.0)
+                .distanceMm(50.0)
+                .wedgePathMm(20.0)
+                .wedgeVelocityMPerS(2330.0)
+                .incidentAngleDeg(40.0).build();
         // No bandwidth: the sine bound only, with a tolerance (required rate) and a TFM grid.
-        samplingClosedForm = SamplingInput.of(100.0, 5.0)
-                .withAmplitudeToleranceDb(1.0)
-                .withTfmGridSpacingMm(0.1)
-                .withVelocityMPerS(5920.0);
-        quantization = QuantizationInput.ofBitDepth(12)
-                .withSignalHeightPercentFsh(80.0)
-                .withAmplitudeToleranceDb(1.0)
-                .withEvaluation(80.0, -6.0)
-                .withAveraging(4);
+        samplingClosedForm = SamplingInput.builder(100.0, 5.0)
+                .amplitudeToleranceDb(1.0)
+                .tfmGridSpacingMm(0.1)
+                .velocityMPerS(5920.0).build();
+        quantization = QuantizationInput.builder(12)
+                .signalHeightPercentFsh(80.0)
+                .amplitudeToleranceDb(1.0)
+                .referenceHeightPercentFsh(80.0)
+                .evaluationLevelDb(-6.0)
+                .averaging(4).build();
         pulseEcho = TimeOfFlightInput.builder(100.0, 3255.0)
                 .technique(Technique.PULSE_ECHO)
                 .refractedAngleDeg(60.0)
@@ -99,8 +100,9 @@ public class ClosedFormBenchmarks {
 
         pulseRequired = PulseInput.of(5.0, 5920.0);
         samplingRequired = SamplingInput.of(100.0, 5.0);
-        quantizationRequired = QuantizationInput.ofBitDepth(12);
-        tofdRequired = TimeOfFlightInput.tofd(100.0, 5920.0, 80.0);
+        quantizationRequired = QuantizationInput.of(12);
+        tofdRequired = TimeOfFlightInput.builder(100.0, 5920.0).technique(Technique.TOFD).probeCentreSeparationMm(80.0)
+                .build();
         thicknessRequired = ThicknessInput.of(100.0, 5920.0, 10.0);
         acquisitionRequired = AcquisitionInput.builder(100.0, 12, 1.0, 1000.0).gateLengthUs(20.0).build();
     }

@@ -35,8 +35,8 @@ public class PulseSearchBenchmarks {
 
     @Setup
     public void setUp() {
-        search = SamplingInput.of(25.0, 5.0).withBandwidthPercent(bandwidthPercent);
-        searchAndInverse = search.withAmplitudeToleranceDb(1.0);
+        search = SamplingInput.builder(25.0, 5.0).bandwidthPercent(bandwidthPercent).build();
+        searchAndInverse = search.toBuilder().amplitudeToleranceDb(1.0).build();
         pulse = GaussianPulse.of(5.0, bandwidthPercent / 100.0);
     }
 

@@ -36,13 +36,14 @@ public class SetupCalculatorBenchmarks {
 
     @Setup
     public void setUp() {
-        coverage = ScanCoverageInput.ofProbe(5.0, 5920.0, 10.0, 60.0).withScanIncrementMm(1.0).withIndexStepMm(4.0)
-                .withAngularStepDeg(1.0).withAmplitudeToleranceDb(1.0);
-        array = ArrayApertureInput.of(5.0, 5920.0, 0.6).withActiveElements(16).withElementLengthMm(10.0)
-                .withMaxSteeringAngleDeg(45.0);
-        tofd = TofdSetupInput.of(5920.0, 70.0, 30.0).withGate(10.0, 16.5).withPulseDurationUs(0.4)
-                .withMeasuredTimeUs(13.9).withSampling(100.0, null, null).withSeparationUncertaintyMm(0.5);
-        dac = DacQuantizationInput.of(8, 30.0, 80.0).withAmplitudeToleranceDb(1.0);
+        coverage = ScanCoverageInput.builder().frequencyMhz(5.0).velocityMPerS(5920.0).elementDiameterMm(10.0)
+                .soundPathMm(60.0).scanIncrementMm(1.0).indexStepMm(4.0)
+                .angularStepDeg(1.0).amplitudeToleranceDb(1.0).build();
+        array = ArrayApertureInput.builder(5.0, 5920.0, 0.6).activeElements(16).elementLengthMm(10.0)
+                .maxSteeringAngleDeg(45.0).build();
+        tofd = TofdSetupInput.builder(5920.0, 70.0, 30.0).gateStartUs(10.0).gateEndUs(16.5).pulseDurationUs(0.4)
+                .measuredTimeUs(13.9).samplingFrequencyMhz(100.0).probeCentreSeparationUncertaintyMm(0.5).build();
+        dac = DacQuantizationInput.builder(8, 30.0, 80.0).amplitudeToleranceDb(1.0).build();
     }
 
     @Benchmark

@@ -37,8 +37,9 @@ public class WaveformBenchmarks {
         for (int i = 0; i < samples; i++) {
             x[i] = g.amplitude((i - samples / 2.0 - 0.3) / 100.0);
         }
-        analysis = WaveformInput.of(x, 100.0).withTarget(25.0, null, null, null, null);
-        analysisWithTolerance = WaveformInput.of(x, 100.0).withTarget(25.0, null, null, null, 1.0);
+        analysis = WaveformInput.builder(x, 100.0).samplingFrequencyMhz(25.0).build();
+        analysisWithTolerance = WaveformInput.builder(x, 100.0).samplingFrequencyMhz(25.0).amplitudeToleranceDb(1.0)
+                .build();
     }
 
     /** Spectrum, envelope and the loss at the target rate. */

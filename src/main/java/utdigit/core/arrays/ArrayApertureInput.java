@@ -26,28 +26,50 @@ public record ArrayApertureInput(
         Double elementLengthMm,
         Double maxSteeringAngleDeg) {
 
-    /** Pitch only: the grating-lobe check at zero steering. */
-    public static ArrayApertureInput of(double frequencyMhz, double velocityMPerS, double elementPitchMm) {
-        return new ArrayApertureInput(frequencyMhz, velocityMPerS, elementPitchMm, null, null, null, null);
+    /** A builder with the three required inputs; every other input starts as "not given". */
+    public static Builder builder(double frequencyMhz, double velocityMPerS, double elementPitchMm) {
+        return new Builder(frequencyMhz, velocityMPerS, elementPitchMm);
     }
 
-    public ArrayApertureInput withActiveElements(Integer n) {
-        return new ArrayApertureInput(frequencyMhz, velocityMPerS, elementPitchMm, n, activeApertureMm,
-                elementLengthMm, maxSteeringAngleDeg);
-    }
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private final double frequencyMhz;
+        private final double velocityMPerS;
+        private final double elementPitchMm;
+        private Integer activeElements;
+        private Double activeApertureMm;
+        private Double elementLengthMm;
+        private Double maxSteeringAngleDeg;
 
-    public ArrayApertureInput withActiveApertureMm(Double lengthMm) {
-        return new ArrayApertureInput(frequencyMhz, velocityMPerS, elementPitchMm, activeElements, lengthMm,
-                elementLengthMm, maxSteeringAngleDeg);
-    }
+        private Builder(double frequencyMhz, double velocityMPerS, double elementPitchMm) {
+            this.frequencyMhz = frequencyMhz;
+            this.velocityMPerS = velocityMPerS;
+            this.elementPitchMm = elementPitchMm;
+        }
 
-    public ArrayApertureInput withElementLengthMm(Double lengthMm) {
-        return new ArrayApertureInput(frequencyMhz, velocityMPerS, elementPitchMm, activeElements, activeApertureMm,
-                lengthMm, maxSteeringAngleDeg);
-    }
+        public Builder activeElements(Integer value) {
+            this.activeElements = value;
+            return this;
+        }
 
-    public ArrayApertureInput withMaxSteeringAngleDeg(Double angleDeg) {
-        return new ArrayApertureInput(frequencyMhz, velocityMPerS, elementPitchMm, activeElements, activeApertureMm,
-                elementLengthMm, angleDeg);
+        public Builder activeApertureMm(Double value) {
+            this.activeApertureMm = value;
+            return this;
+        }
+
+        public Builder elementLengthMm(Double value) {
+            this.elementLengthMm = value;
+            return this;
+        }
+
+        public Builder maxSteeringAngleDeg(Double value) {
+            this.maxSteeringAngleDeg = value;
+            return this;
+        }
+
+        public ArrayApertureInput build() {
+            return new ArrayApertureInput(frequencyMhz, velocityMPerS, elementPitchMm, activeElements,
+                    activeApertureMm, elementLengthMm, maxSteeringAngleDeg);
+        }
     }
 }

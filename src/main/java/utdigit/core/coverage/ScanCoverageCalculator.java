@@ -152,9 +152,9 @@ public final class ScanCoverageCalculator {
     private static Optional<Double> probeBeamWidthMm(ScanCoverageInput in, List<Warning> warnings,
                                                      List<Reference> references) {
         double soundPathMm = Checks.positive("sound_path", in.soundPathMm());
-        PulseResult pulse = PulseCalculator.compute(PulseInput.of(in.frequencyMhz(), in.velocityMPerS())
-                .withElementDiameterMm(Checks.positive("element_diameter", in.elementDiameterMm()))
-                .withDistanceMm(soundPathMm));
+        PulseResult pulse = PulseCalculator.compute(PulseInput.builder(in.frequencyMhz(), in.velocityMPerS())
+                .elementDiameterMm(Checks.positive("element_diameter", in.elementDiameterMm()))
+                .distanceMm(soundPathMm).build());
         references.add(Reference.of("beam width of a round probe", Sources.PISTON_DIRECTIVITY));
         double nearFieldMm = pulse.nearFieldLengthMm();
         if (soundPathMm < nearFieldMm) {

@@ -29,40 +29,74 @@ public record ScanCoverageInput(
         Double angularStepDeg,
         Double amplitudeToleranceDb) {
 
-    /** A given beam width, no step yet. */
-    public static ScanCoverageInput ofBeamWidth(double beamWidth6dbMm) {
-        return new ScanCoverageInput(beamWidth6dbMm, null, null, null, null, null, null, null, null);
+    /** A builder with every input "not given" (the calculator checks which combination is given). */
+    public static Builder builder() {
+        return new Builder();
     }
 
-    /** A round probe's beam at a sound path, no step yet. */
-    public static ScanCoverageInput ofProbe(double frequencyMhz, double velocityMPerS, double elementDiameterMm,
-                                            double soundPathMm) {
-        return new ScanCoverageInput(null, frequencyMhz, velocityMPerS, elementDiameterMm, soundPathMm, null, null,
-                null, null);
-    }
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private Double beamWidth6dbMm;
+        private Double frequencyMhz;
+        private Double velocityMPerS;
+        private Double elementDiameterMm;
+        private Double soundPathMm;
+        private Double scanIncrementMm;
+        private Double indexStepMm;
+        private Double angularStepDeg;
+        private Double amplitudeToleranceDb;
 
-    public ScanCoverageInput withSoundPathMm(Double v) {
-        return new ScanCoverageInput(beamWidth6dbMm, frequencyMhz, velocityMPerS, elementDiameterMm, v,
-                scanIncrementMm, indexStepMm, angularStepDeg, amplitudeToleranceDb);
-    }
+        private Builder() {
+        }
 
-    public ScanCoverageInput withScanIncrementMm(Double v) {
-        return new ScanCoverageInput(beamWidth6dbMm, frequencyMhz, velocityMPerS, elementDiameterMm, soundPathMm,
-                v, indexStepMm, angularStepDeg, amplitudeToleranceDb);
-    }
+        public Builder beamWidth6dbMm(Double value) {
+            this.beamWidth6dbMm = value;
+            return this;
+        }
 
-    public ScanCoverageInput withIndexStepMm(Double v) {
-        return new ScanCoverageInput(beamWidth6dbMm, frequencyMhz, velocityMPerS, elementDiameterMm, soundPathMm,
-                scanIncrementMm, v, angularStepDeg, amplitudeToleranceDb);
-    }
+        public Builder frequencyMhz(Double value) {
+            this.frequencyMhz = value;
+            return this;
+        }
 
-    public ScanCoverageInput withAngularStepDeg(Double v) {
-        return new ScanCoverageInput(beamWidth6dbMm, frequencyMhz, velocityMPerS, elementDiameterMm, soundPathMm,
-                scanIncrementMm, indexStepMm, v, amplitudeToleranceDb);
-    }
+        public Builder velocityMPerS(Double value) {
+            this.velocityMPerS = value;
+            return this;
+        }
 
-    public ScanCoverageInput withAmplitudeToleranceDb(Double v) {
-        return new ScanCoverageInput(beamWidth6dbMm, frequencyMhz, velocityMPerS, elementDiameterMm, soundPathMm,
-                scanIncrementMm, indexStepMm, angularStepDeg, v);
+        public Builder elementDiameterMm(Double value) {
+            this.elementDiameterMm = value;
+            return this;
+        }
+
+        public Builder soundPathMm(Double value) {
+            this.soundPathMm = value;
+            return this;
+        }
+
+        public Builder scanIncrementMm(Double value) {
+            this.scanIncrementMm = value;
+            return this;
+        }
+
+        public Builder indexStepMm(Double value) {
+            this.indexStepMm = value;
+            return this;
+        }
+
+        public Builder angularStepDeg(Double value) {
+            this.angularStepDeg = value;
+            return this;
+        }
+
+        public Builder amplitudeToleranceDb(Double value) {
+            this.amplitudeToleranceDb = value;
+            return this;
+        }
+
+        public ScanCoverageInput build() {
+            return new ScanCoverageInput(beamWidth6dbMm, frequencyMhz, velocityMPerS, elementDiameterMm,
+                    soundPathMm, scanIncrementMm, indexStepMm, angularStepDeg, amplitudeToleranceDb);
+        }
     }
 }

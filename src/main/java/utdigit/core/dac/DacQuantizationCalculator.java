@@ -52,12 +52,14 @@ public final class DacQuantizationCalculator {
         double referencePercentFsh = Checks.positive("reference_height_percent_fsh", in.referenceHeightPercentFsh());
         Double toleranceDb = in.amplitudeToleranceDb();
 
-        QuantizationResult plain = QuantizationCalculator.compute(new QuantizationInput(in.bitDepth(),
-                in.digitizedSignal(), in.quantizer(), in.codeMapping(), null, referencePercentFsh, toleranceDb,
-                referencePercentFsh, -spanDb, null));
-        QuantizationResult digital = QuantizationCalculator.compute(new QuantizationInput(in.bitDepth(),
-                in.digitizedSignal(), in.quantizer(), in.codeMapping(), spanDb, referencePercentFsh, null, null, null,
-                null));
+        QuantizationResult plain = QuantizationCalculator.compute(quantization(in)
+                .signalHeightPercentFsh(referencePercentFsh)
+                .amplitudeToleranceDb(toleranceDb)
+                .referenceHeightPercentFsh(referencePercentFsh)
+                .evaluationLevelDb(-spanDb).build());
+        QuantizationResult digital = QuantizationCalculator.compute(quantization(in)
+                .digitalGainDb(spanDb)
+                .signalHeightPercentFsh(referencePercentFsh).build());
 
         List<Warning> warnings = new ArrayList<>();
         List<Reference> references = new ArrayList<>(plain.references());
@@ -92,6 +94,14 @@ public final class DacQuantizationCalculator {
         return new DacQuantizationResult(plain.digitizedSignal(), plain.quantizer(), plain.codeMapping(),
                 plain.lsbPercentFsh(), lowest, uncorrected, analog, digital.lsbPercentFsh(), soft, minimum, maxSpan,
                 uncorrectedOk, analogOk, softOk, warnings, references);
+    }
+
+    /** A quantization input with the DAC input's converter and options. */
+    private static QuantizationInput.Builder quantization(DacQuantizationInput in) {
+        return QuantizationInput.builder(in.bitDepth())
+                .digitizedSignal(in.digitizedSignal())
+                .quantizer(in.quantizer())
+                .codeMapping(in.codeMapping());
     }
 
     private static void zeroWarning(Optional<Double> error, String field, double heightPercentFsh,

@@ -22,17 +22,55 @@ public record DacQuantizationInput(
         Quantizer quantizer,
         CodeMapping codeMapping) {
 
+    /** The required inputs alone, every option at its default. */
     public static DacQuantizationInput of(int bitDepth, double dacSpanDb, double referenceHeightPercentFsh) {
-        return new DacQuantizationInput(bitDepth, dacSpanDb, referenceHeightPercentFsh, null, null, null, null);
+        return builder(bitDepth, dacSpanDb, referenceHeightPercentFsh).build();
     }
 
-    public DacQuantizationInput withAmplitudeToleranceDb(Double v) {
-        return new DacQuantizationInput(bitDepth, dacSpanDb, referenceHeightPercentFsh, v, digitizedSignal, quantizer,
-                codeMapping);
+    /** A builder with the three required inputs; every other input starts as "not given". */
+    public static Builder builder(int bitDepth, double dacSpanDb, double referenceHeightPercentFsh) {
+        return new Builder(bitDepth, dacSpanDb, referenceHeightPercentFsh);
     }
 
-    public DacQuantizationInput withOptions(DigitizedSignal signal, Quantizer q, CodeMapping mapping) {
-        return new DacQuantizationInput(bitDepth, dacSpanDb, referenceHeightPercentFsh, amplitudeToleranceDb, signal,
-                q, mapping);
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private final int bitDepth;
+        private final double dacSpanDb;
+        private final double referenceHeightPercentFsh;
+        private Double amplitudeToleranceDb;
+        private DigitizedSignal digitizedSignal;
+        private Quantizer quantizer;
+        private CodeMapping codeMapping;
+
+        private Builder(int bitDepth, double dacSpanDb, double referenceHeightPercentFsh) {
+            this.bitDepth = bitDepth;
+            this.dacSpanDb = dacSpanDb;
+            this.referenceHeightPercentFsh = referenceHeightPercentFsh;
+        }
+
+        public Builder amplitudeToleranceDb(Double value) {
+            this.amplitudeToleranceDb = value;
+            return this;
+        }
+
+        public Builder digitizedSignal(DigitizedSignal value) {
+            this.digitizedSignal = value;
+            return this;
+        }
+
+        public Builder quantizer(Quantizer value) {
+            this.quantizer = value;
+            return this;
+        }
+
+        public Builder codeMapping(CodeMapping value) {
+            this.codeMapping = value;
+            return this;
+        }
+
+        public DacQuantizationInput build() {
+            return new DacQuantizationInput(bitDepth, dacSpanDb, referenceHeightPercentFsh,
+                    amplitudeToleranceDb, digitizedSignal, quantizer, codeMapping);
+        }
     }
 }

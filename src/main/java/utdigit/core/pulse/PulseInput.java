@@ -6,8 +6,7 @@ import utdigit.core.common.Checks;
 /**
  * The inputs of the pulse-parameters calculation (POST /api/pulse-parameters), normalised by the
  * caller: lengths in mm, velocities in m/s, frequencies in MHz, angles in degrees. Every optional
- * input is a nullable boxed value, null meaning "not given"; create with {@link #of} and the
- * {@code with...} methods.
+ * input is a nullable boxed value, null meaning "not given"; build with {@link #builder}.
  *
  * @param frequencyMhz nominal probe frequency f, MHz, > 0
  * @param velocityMPerS the part's velocity of the chosen wave mode v, m/s, > 0 (resolved by the
@@ -67,54 +66,81 @@ public record PulseInput(
 
     /** The required inputs alone: period and wavelength. */
     public static PulseInput of(double frequencyMhz, double velocityMPerS) {
-        return new PulseInput(frequencyMhz, velocityMPerS, null, null, null, null, null, null, null);
+        return builder(frequencyMhz, velocityMPerS).build();
     }
 
-    /** With a -6 dB bandwidth in percent and the default convention (ARITHMETIC). */
-    public PulseInput withBandwidthPercent(Double percent) {
-        return new PulseInput(frequencyMhz, velocityMPerS, percent, centreFrequencyConvention,
-                elementDiameterMm, distanceMm, wedgePathMm, wedgeVelocityMPerS, incidentAngleDeg);
+    /** A builder with the two required inputs; every other input starts as "not given". */
+    public static Builder builder(double frequencyMhz, double velocityMPerS) {
+        return new Builder(frequencyMhz, velocityMPerS);
     }
 
-    /** With a -6 dB bandwidth in percent and an explicit centre-frequency convention. */
-    public PulseInput withBandwidthPercent(Double percent, CentreFrequencyConvention convention) {
-        return withBandwidthPercent(percent).withCentreFrequencyConvention(convention);
+    /** A builder that starts from this input's values. */
+    public Builder toBuilder() {
+        return new Builder(frequencyMhz, velocityMPerS)
+                .bandwidthPercent(bandwidthPercent)
+                .centreFrequencyConvention(centreFrequencyConvention)
+                .elementDiameterMm(elementDiameterMm)
+                .distanceMm(distanceMm)
+                .wedgePathMm(wedgePathMm)
+                .wedgeVelocityMPerS(wedgeVelocityMPerS)
+                .incidentAngleDeg(incidentAngleDeg);
     }
 
-    /** With a centre-frequency convention (applies only with a bandwidth). */
-    public PulseInput withCentreFrequencyConvention(CentreFrequencyConvention convention) {
-        return new PulseInput(frequencyMhz, velocityMPerS, bandwidthPercent, convention,
-                elementDiameterMm, distanceMm, wedgePathMm, wedgeVelocityMPerS, incidentAngleDeg);
-    }
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private final double frequencyMhz;
+        private final double velocityMPerS;
+        private Double bandwidthPercent;
+        private CentreFrequencyConvention centreFrequencyConvention;
+        private Double elementDiameterMm;
+        private Double distanceMm;
+        private Double wedgePathMm;
+        private Double wedgeVelocityMPerS;
+        private Double incidentAngleDeg;
 
-    /** With the diameter of the circular element, mm. */
-    public PulseInput withElementDiameterMm(Double diameterMm) {
-        return new PulseInput(frequencyMhz, velocityMPerS, bandwidthPercent, centreFrequencyConvention,
-                diameterMm, distanceMm, wedgePathMm, wedgeVelocityMPerS, incidentAngleDeg);
-    }
+        private Builder(double frequencyMhz, double velocityMPerS) {
+            this.frequencyMhz = frequencyMhz;
+            this.velocityMPerS = velocityMPerS;
+        }
 
-    /** With the distance in the part for the beam diameter, mm. */
-    public PulseInput withDistanceMm(Double distance) {
-        return new PulseInput(frequencyMhz, velocityMPerS, bandwidthPercent, centreFrequencyConvention,
-                elementDiameterMm, distance, wedgePathMm, wedgeVelocityMPerS, incidentAngleDeg);
-    }
+        public Builder bandwidthPercent(Double value) {
+            this.bandwidthPercent = value;
+            return this;
+        }
 
-    /** With the sound path in a wedge or delay line, mm. */
-    public PulseInput withWedgePathMm(Double pathMm) {
-        return new PulseInput(frequencyMhz, velocityMPerS, bandwidthPercent, centreFrequencyConvention,
-                elementDiameterMm, distanceMm, pathMm, wedgeVelocityMPerS, incidentAngleDeg);
-    }
+        public Builder centreFrequencyConvention(CentreFrequencyConvention value) {
+            this.centreFrequencyConvention = value;
+            return this;
+        }
 
-    /** With the wedge's velocity, m/s. */
-    public PulseInput withWedgeVelocityMPerS(Double velocity) {
-        return new PulseInput(frequencyMhz, velocityMPerS, bandwidthPercent, centreFrequencyConvention,
-                elementDiameterMm, distanceMm, wedgePathMm, velocity, incidentAngleDeg);
-    }
+        public Builder elementDiameterMm(Double value) {
+            this.elementDiameterMm = value;
+            return this;
+        }
 
-    /** With the incident angle in the wedge, degrees. */
-    public PulseInput withIncidentAngleDeg(Double angleDeg) {
-        return new PulseInput(frequencyMhz, velocityMPerS, bandwidthPercent, centreFrequencyConvention,
-                elementDiameterMm, distanceMm, wedgePathMm, wedgeVelocityMPerS, angleDeg);
-    }
+        public Builder distanceMm(Double value) {
+            this.distanceMm = value;
+            return this;
+        }
 
+        public Builder wedgePathMm(Double value) {
+            this.wedgePathMm = value;
+            return this;
+        }
+
+        public Builder wedgeVelocityMPerS(Double value) {
+            this.wedgeVelocityMPerS = value;
+            return this;
+        }
+
+        public Builder incidentAngleDeg(Double value) {
+            this.incidentAngleDeg = value;
+            return this;
+        }
+
+        public PulseInput build() {
+            return new PulseInput(frequencyMhz, velocityMPerS, bandwidthPercent, centreFrequencyConvention,
+                    elementDiameterMm, distanceMm, wedgePathMm, wedgeVelocityMPerS, incidentAngleDeg);
+        }
+    }
 }

@@ -33,49 +33,95 @@ public record QuantizationInput(
         Integer averaging) {
 
     /** Only the bit depth; every option at its default, no optional input. */
-    public static QuantizationInput ofBitDepth(int bitDepth) {
-        return new QuantizationInput(bitDepth, null, null, null, null, null, null, null, null, null);
+    public static QuantizationInput of(int bitDepth) {
+        return builder(bitDepth).build();
     }
 
-    public QuantizationInput withDigitizedSignal(DigitizedSignal value) {
-        return new QuantizationInput(bitDepth, value, quantizer, codeMapping, digitalGainDb,
-                signalHeightPercentFsh, amplitudeToleranceDb, referenceHeightPercentFsh, evaluationLevelDb, averaging);
+    /** A builder with the required input; every other input starts as "not given". */
+    public static Builder builder(int bitDepth) {
+        return new Builder(bitDepth);
     }
 
-    public QuantizationInput withQuantizer(Quantizer value) {
-        return new QuantizationInput(bitDepth, digitizedSignal, value, codeMapping, digitalGainDb,
-                signalHeightPercentFsh, amplitudeToleranceDb, referenceHeightPercentFsh, evaluationLevelDb, averaging);
+    /** A builder that starts from this input's values. */
+    public Builder toBuilder() {
+        return new Builder(bitDepth)
+                .digitizedSignal(digitizedSignal)
+                .quantizer(quantizer)
+                .codeMapping(codeMapping)
+                .digitalGainDb(digitalGainDb)
+                .signalHeightPercentFsh(signalHeightPercentFsh)
+                .amplitudeToleranceDb(amplitudeToleranceDb)
+                .referenceHeightPercentFsh(referenceHeightPercentFsh)
+                .evaluationLevelDb(evaluationLevelDb)
+                .averaging(averaging);
     }
 
-    public QuantizationInput withCodeMapping(CodeMapping value) {
-        return new QuantizationInput(bitDepth, digitizedSignal, quantizer, value, digitalGainDb,
-                signalHeightPercentFsh, amplitudeToleranceDb, referenceHeightPercentFsh, evaluationLevelDb, averaging);
-    }
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private final int bitDepth;
+        private DigitizedSignal digitizedSignal;
+        private Quantizer quantizer;
+        private CodeMapping codeMapping;
+        private Double digitalGainDb;
+        private Double signalHeightPercentFsh;
+        private Double amplitudeToleranceDb;
+        private Double referenceHeightPercentFsh;
+        private Double evaluationLevelDb;
+        private Integer averaging;
 
-    public QuantizationInput withDigitalGainDb(Double value) {
-        return new QuantizationInput(bitDepth, digitizedSignal, quantizer, codeMapping, value,
-                signalHeightPercentFsh, amplitudeToleranceDb, referenceHeightPercentFsh, evaluationLevelDb, averaging);
-    }
+        private Builder(int bitDepth) {
+            this.bitDepth = bitDepth;
+        }
 
-    public QuantizationInput withSignalHeightPercentFsh(Double value) {
-        return new QuantizationInput(bitDepth, digitizedSignal, quantizer, codeMapping, digitalGainDb,
-                value, amplitudeToleranceDb, referenceHeightPercentFsh, evaluationLevelDb, averaging);
-    }
+        public Builder digitizedSignal(DigitizedSignal value) {
+            this.digitizedSignal = value;
+            return this;
+        }
 
-    public QuantizationInput withAmplitudeToleranceDb(Double value) {
-        return new QuantizationInput(bitDepth, digitizedSignal, quantizer, codeMapping, digitalGainDb,
-                signalHeightPercentFsh, value, referenceHeightPercentFsh, evaluationLevelDb, averaging);
-    }
+        public Builder quantizer(Quantizer value) {
+            this.quantizer = value;
+            return this;
+        }
 
-    /** The reference height and the evaluation level, which only go together. */
-    public QuantizationInput withEvaluation(Double referenceHeightPercentFshValue, Double evaluationLevelDbValue) {
-        return new QuantizationInput(bitDepth, digitizedSignal, quantizer, codeMapping, digitalGainDb,
-                signalHeightPercentFsh, amplitudeToleranceDb, referenceHeightPercentFshValue, evaluationLevelDbValue,
-                averaging);
-    }
+        public Builder codeMapping(CodeMapping value) {
+            this.codeMapping = value;
+            return this;
+        }
 
-    public QuantizationInput withAveraging(Integer value) {
-        return new QuantizationInput(bitDepth, digitizedSignal, quantizer, codeMapping, digitalGainDb,
-                signalHeightPercentFsh, amplitudeToleranceDb, referenceHeightPercentFsh, evaluationLevelDb, value);
+        public Builder digitalGainDb(Double value) {
+            this.digitalGainDb = value;
+            return this;
+        }
+
+        public Builder signalHeightPercentFsh(Double value) {
+            this.signalHeightPercentFsh = value;
+            return this;
+        }
+
+        public Builder amplitudeToleranceDb(Double value) {
+            this.amplitudeToleranceDb = value;
+            return this;
+        }
+
+        public Builder referenceHeightPercentFsh(Double value) {
+            this.referenceHeightPercentFsh = value;
+            return this;
+        }
+
+        public Builder evaluationLevelDb(Double value) {
+            this.evaluationLevelDb = value;
+            return this;
+        }
+
+        public Builder averaging(Integer value) {
+            this.averaging = value;
+            return this;
+        }
+
+        public QuantizationInput build() {
+            return new QuantizationInput(bitDepth, digitizedSignal, quantizer, codeMapping, digitalGainDb,
+                    signalHeightPercentFsh, amplitudeToleranceDb, referenceHeightPercentFsh, evaluationLevelDb,
+                    averaging);
+        }
     }
 }

@@ -8,7 +8,7 @@ import utdigit.core.pulse.CentreFrequencyConvention;
  * The inputs of the sampling assessment (POST /api/sampling-assessments), normalised by the caller:
  * frequencies in MHz, lengths in mm, velocities in m/s. Every optional input and option is a
  * nullable boxed value, null meaning "not given" (the calculator applies the contract's defaults);
- * create with {@link #of} and the {@code with...} methods. Each value is checked on its own here;
+ * build with {@link #builder}. Each value is checked on its own here;
  * combinations are checked by {@link SamplingCalculator}.
  *
  * @param samplingFrequencyMhz the converter's (raw) sampling frequency fs, MHz, > 0
@@ -69,83 +69,126 @@ public record SamplingInput(
 
     /** The required inputs alone, every option at its default. */
     public static SamplingInput of(double samplingFrequencyMhz, double frequencyMhz) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz,
-                null, null, null, null, null, null, null, null, null, null, null, null, null);
+        return builder(samplingFrequencyMhz, frequencyMhz).build();
     }
 
-    /** With decimation by {@code factor} in {@code mode}. */
-    public SamplingInput withDecimation(Integer factor, DecimationMode mode) {
-        return withDecimationFactor(factor).withDecimationMode(mode);
+    /** A builder with the two required inputs; every other input starts as "not given". */
+    public static Builder builder(double samplingFrequencyMhz, double frequencyMhz) {
+        return new Builder(samplingFrequencyMhz, frequencyMhz);
     }
 
-    /** With the TFM lateral figure's three inputs: step dx, aperture A and depth z, mm. */
-    public SamplingInput withTfmLateral(Double lateralGridSpacingMm, Double apertureMm, Double depthMm) {
-        return withTfmLateralGridSpacingMm(lateralGridSpacingMm).withTfmApertureMm(apertureMm).withTfmDepthMm(depthMm);
+    /** A builder that starts from this input's values. */
+    public Builder toBuilder() {
+        return new Builder(samplingFrequencyMhz, frequencyMhz)
+                .decimationFactor(decimationFactor)
+                .decimationMode(decimationMode)
+                .bandwidthPercent(bandwidthPercent)
+                .centreFrequencyConvention(centreFrequencyConvention)
+                .signal(signal)
+                .peakReading(peakReading)
+                .amplitudeToleranceDb(amplitudeToleranceDb)
+                .tfmGridSpacingMm(tfmGridSpacingMm)
+                .velocityMPerS(velocityMPerS)
+                .tfmImage(tfmImage)
+                .tfmLateralGridSpacingMm(tfmLateralGridSpacingMm)
+                .tfmApertureMm(tfmApertureMm)
+                .tfmDepthMm(tfmDepthMm);
     }
 
-    /** With the decimation factor m (integer >= 1). */
-    public SamplingInput withDecimationFactor(Integer value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, value, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private final double samplingFrequencyMhz;
+        private final double frequencyMhz;
+        private Integer decimationFactor;
+        private DecimationMode decimationMode;
+        private Double bandwidthPercent;
+        private CentreFrequencyConvention centreFrequencyConvention;
+        private SampledSignal signal;
+        private PeakReading peakReading;
+        private Double amplitudeToleranceDb;
+        private Double tfmGridSpacingMm;
+        private Double velocityMPerS;
+        private TfmImage tfmImage;
+        private Double tfmLateralGridSpacingMm;
+        private Double tfmApertureMm;
+        private Double tfmDepthMm;
 
-    /** With how the m samples are reduced to one. */
-    public SamplingInput withDecimationMode(DecimationMode value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, value, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        private Builder(double samplingFrequencyMhz, double frequencyMhz) {
+            this.samplingFrequencyMhz = samplingFrequencyMhz;
+            this.frequencyMhz = frequencyMhz;
+        }
 
-    /** With the -6 dB fractional bandwidth, percent, in (0, 200). */
-    public SamplingInput withBandwidthPercent(Double value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, value, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder decimationFactor(Integer value) {
+            this.decimationFactor = value;
+            return this;
+        }
 
-    /** With the centre-frequency convention (only with a bandwidth). */
-    public SamplingInput withCentreFrequencyConvention(CentreFrequencyConvention value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, value, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder decimationMode(DecimationMode value) {
+            this.decimationMode = value;
+            return this;
+        }
 
-    /** With what is sampled, RF or ENVELOPE. */
-    public SamplingInput withSignal(SampledSignal value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, value, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder bandwidthPercent(Double value) {
+            this.bandwidthPercent = value;
+            return this;
+        }
 
-    /** With how an RF peak is read (only with RF). */
-    public SamplingInput withPeakReading(PeakReading value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, value, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder centreFrequencyConvention(CentreFrequencyConvention value) {
+            this.centreFrequencyConvention = value;
+            return this;
+        }
 
-    /** With the amplitude tolerance X, dB, > 0. */
-    public SamplingInput withAmplitudeToleranceDb(Double value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, value, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder signal(SampledSignal value) {
+            this.signal = value;
+            return this;
+        }
 
-    /** With the TFM grid's depth step dz, mm, > 0. */
-    public SamplingInput withTfmGridSpacingMm(Double value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, value, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder peakReading(PeakReading value) {
+            this.peakReading = value;
+            return this;
+        }
 
-    /** With the part's velocity, m/s (only with TFM figures). */
-    public SamplingInput withVelocityMPerS(Double value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, value, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder amplitudeToleranceDb(Double value) {
+            this.amplitudeToleranceDb = value;
+            return this;
+        }
 
-    /** With RF or ENVELOPE image (only with a grid spacing). */
-    public SamplingInput withTfmImage(TfmImage value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, value, tfmLateralGridSpacingMm, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder tfmGridSpacingMm(Double value) {
+            this.tfmGridSpacingMm = value;
+            return this;
+        }
 
-    /** With the TFM grid's lateral step dx, mm, > 0. */
-    public SamplingInput withTfmLateralGridSpacingMm(Double value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, value, tfmApertureMm, tfmDepthMm);
-    }
+        public Builder velocityMPerS(Double value) {
+            this.velocityMPerS = value;
+            return this;
+        }
 
-    /** With the active aperture A, mm, > 0. */
-    public SamplingInput withTfmApertureMm(Double value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, value, tfmDepthMm);
-    }
+        public Builder tfmImage(TfmImage value) {
+            this.tfmImage = value;
+            return this;
+        }
 
-    /** With the depth z of the lateral figure, mm, > 0. */
-    public SamplingInput withTfmDepthMm(Double value) {
-        return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode, bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb, tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm, value);
+        public Builder tfmLateralGridSpacingMm(Double value) {
+            this.tfmLateralGridSpacingMm = value;
+            return this;
+        }
+
+        public Builder tfmApertureMm(Double value) {
+            this.tfmApertureMm = value;
+            return this;
+        }
+
+        public Builder tfmDepthMm(Double value) {
+            this.tfmDepthMm = value;
+            return this;
+        }
+
+        public SamplingInput build() {
+            return new SamplingInput(samplingFrequencyMhz, frequencyMhz, decimationFactor, decimationMode,
+                    bandwidthPercent, centreFrequencyConvention, signal, peakReading, amplitudeToleranceDb,
+                    tfmGridSpacingMm, velocityMPerS, tfmImage, tfmLateralGridSpacingMm, tfmApertureMm,
+                    tfmDepthMm);
+        }
     }
 
     private static void positiveIfGiven(String role, Double value) {

@@ -103,10 +103,10 @@ public final class SheetEvaluator {
         // An angle beam's wedge (both inputs) adds the incidence-plane figures (none past the critical angle).
         boolean angleBeam = sheet.setup().angleBeam();
         PulseResult pulse = f == null || c == null ? null : v.feasible("pulse", () -> PulseCalculator.compute(
-                PulseInput.of(f, c).withBandwidthPercent(probe.bandwidthPercent())
-                        .withElementDiameterMm(probe.elementDiameterMm())
-                        .withWedgeVelocityMPerS(angleBeam ? sheet.setup().wedgeVelocityMPerS() : null)
-                        .withIncidentAngleDeg(angleBeam ? sheet.setup().incidentAngleDeg() : null)));
+                PulseInput.builder(f, c).bandwidthPercent(probe.bandwidthPercent())
+                        .elementDiameterMm(probe.elementDiameterMm())
+                        .wedgeVelocityMPerS(angleBeam ? sheet.setup().wedgeVelocityMPerS() : null)
+                        .incidentAngleDeg(angleBeam ? sheet.setup().incidentAngleDeg() : null).build()));
         if (pulse != null) {
             PulseResult r = pulse;
             v.put("period_us", r.periodUs());
@@ -126,11 +126,17 @@ public final class SheetEvaluator {
         boolean hasGrid = tfm.gridSpacingMm() != null && c != null;
         boolean hasLateral = tfm.lateralGridSpacingMm() != null && tfm.apertureMm() != null && tfm.depthMm() != null;
         SamplingResult sampling = fs == null || f == null ? null : v.feasible("sampling", () -> SamplingCalculator
-                .compute(new SamplingInput(fs, f, dig.decimationFactor(),
-                        dig.decimationMode(), probe.bandwidthPercent(), null, dig.signal(), null, null,
-                        hasGrid ? tfm.gridSpacingMm() : null, hasGrid ? c : null, hasGrid ? tfm.image() : null,
-                        hasLateral ? tfm.lateralGridSpacingMm() : null, hasLateral ? tfm.apertureMm() : null,
-                        hasLateral ? tfm.depthMm() : null)));
+                .compute(SamplingInput.builder(fs, f)
+                        .decimationFactor(dig.decimationFactor())
+                        .decimationMode(dig.decimationMode())
+                        .bandwidthPercent(probe.bandwidthPercent())
+                        .signal(dig.signal())
+                        .tfmGridSpacingMm(hasGrid ? tfm.gridSpacingMm() : null)
+                        .velocityMPerS(hasGrid ? c : null)
+                        .tfmImage(hasGrid ? tfm.image() : null)
+                        .tfmLateralGridSpacingMm(hasLateral ? tfm.lateralGridSpacingMm() : null)
+                        .tfmApertureMm(hasLateral ? tfm.apertureMm() : null)
+                        .tfmDepthMm(hasLateral ? tfm.depthMm() : null).build()));
         if (sampling != null) {
             SamplingResult r = sampling;
             v.put("effective_sampling_frequency_mhz", r.effectiveSamplingFrequencyMhz());
@@ -150,10 +156,13 @@ public final class SheetEvaluator {
         }
         boolean hasEvaluation = eval.referenceHeightPercentFsh() != null && eval.evaluationLevelDb() != null;
         QuantizationResult quantization = dig.bitDepth() == null ? null : v.feasible("quantization",
-                () -> QuantizationCalculator.compute(new QuantizationInput(dig.bitDepth(),
-                        dig.digitizedSignal(), dig.quantizer(), dig.codeMapping(), null, null,
-                        eval.amplitudeToleranceDb(), hasEvaluation ? eval.referenceHeightPercentFsh() : null,
-                        hasEvaluation ? eval.evaluationLevelDb() : null, null)));
+                () -> QuantizationCalculator.compute(QuantizationInput.builder(dig.bitDepth())
+                        .digitizedSignal(dig.digitizedSignal())
+                        .quantizer(dig.quantizer())
+                        .codeMapping(dig.codeMapping())
+                        .amplitudeToleranceDb(eval.amplitudeToleranceDb())
+                        .referenceHeightPercentFsh(hasEvaluation ? eval.referenceHeightPercentFsh() : null)
+                        .evaluationLevelDb(hasEvaluation ? eval.evaluationLevelDb() : null).build()));
         if (quantization != null) {
             QuantizationResult r = quantization;
             v.put("levels", (double) r.levels());

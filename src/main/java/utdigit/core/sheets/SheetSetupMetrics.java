@@ -101,10 +101,15 @@ public final class SheetSetupMetrics {
         boolean probeBeam = s.beamWidth6dbMm() == null && f != null && c != null && probe.elementDiameterMm() != null
                 && s.soundPathMm() != null;
         if (anyStep && (s.beamWidth6dbMm() != null || probeBeam)) {
-            ScanCoverageResult r = ScanCoverageCalculator.compute(new ScanCoverageInput(s.beamWidth6dbMm(),
-                    probeBeam ? f : null, probeBeam ? c : null, probeBeam ? probe.elementDiameterMm() : null,
-                    s.soundPathMm(), increment, s.indexStepMm(),
-                    s.soundPathMm() == null ? null : s.angularStepDeg(), null));
+            ScanCoverageResult r = ScanCoverageCalculator.compute(ScanCoverageInput.builder()
+                    .beamWidth6dbMm(s.beamWidth6dbMm())
+                    .frequencyMhz(probeBeam ? f : null)
+                    .velocityMPerS(probeBeam ? c : null)
+                    .elementDiameterMm(probeBeam ? probe.elementDiameterMm() : null)
+                    .soundPathMm(s.soundPathMm())
+                    .scanIncrementMm(increment)
+                    .indexStepMm(s.indexStepMm())
+                    .angularStepDeg(s.soundPathMm() == null ? null : s.angularStepDeg()).build());
             if (probeBeam) {
                 put(values, "beam_width_6db_mm", r.beamWidth6dbMm());
             }
@@ -116,9 +121,10 @@ public final class SheetSetupMetrics {
 
         Double steeringVelocity = s.steeringVelocityMPerS() != null ? s.steeringVelocityMPerS() : c;
         if (s.elementPitchMm() != null && f != null && steeringVelocity != null) {
-            ArrayApertureResult r = ArrayApertureCalculator.compute(new ArrayApertureInput(f, steeringVelocity,
-                    s.elementPitchMm(),
-                    s.activeElements(), null, null, s.maxSteeringAngleDeg()));
+            ArrayApertureResult r = ArrayApertureCalculator.compute(ArrayApertureInput.builder(f, steeringVelocity,
+                            s.elementPitchMm())
+                    .activeElements(s.activeElements())
+                    .maxSteeringAngleDeg(s.maxSteeringAngleDeg()).build());
             put(values, "aperture_near_field_length_mm", r.nearFieldLengthMm());
             put(values, "aperture_beam_spread_6db_deg", r.beamSpread6dbDeg());
             put(values, "max_grating_lobe_free_pitch_mm", r.maxGratingLobeFreePitchMm());
@@ -129,8 +135,11 @@ public final class SheetSetupMetrics {
         Double reference = sheet.evaluation().referenceHeightPercentFsh();
         if (s.dacSpanDb() != null && bits != null && reference != null) {
             SheetInput.Digitization d = sheet.digitization();
-            DacQuantizationResult r = DacQuantizationCalculator.compute(new DacQuantizationInput(bits, s.dacSpanDb(),
-                    reference, null, d.digitizedSignal(), d.quantizer(), d.codeMapping()));
+            DacQuantizationResult r = DacQuantizationCalculator.compute(DacQuantizationInput.builder(bits,
+                            s.dacSpanDb(), reference)
+                    .digitizedSignal(d.digitizedSignal())
+                    .quantizer(d.quantizer())
+                    .codeMapping(d.codeMapping()).build());
             put(values, "lowest_reference_height_percent_fsh", r.lowestReferenceHeightPercentFsh());
             Optional<Double> error = s.tcg() == TcgMode.ANALOG ? r.analogTcgErrorUnderDb()
                     : s.tcg() == TcgMode.DIGITAL ? r.digitalTcgErrorUnderDb() : r.uncorrectedErrorUnderDb();
@@ -144,11 +153,12 @@ public final class SheetSetupMetrics {
             boolean gate = s.gateStartUs() != null && s.gateEndUs() != null && s.gateEndUs() > s.gateStartUs();
             Double depth = sheet.tofd().depthOfInterestMm();
             boolean atDepth = depth != null && depth <= thickness && sheet.digitization().samplingFrequencyMhz() != null;
-            TofdSetupInput in = TofdSetupInput.of(c, pcs, thickness)
-                    .withGate(gate ? s.gateStartUs() : null, gate ? s.gateEndUs() : null)
-                    .withDepthMm(atDepth ? depth : null)
-                    .withSampling(atDepth ? sheet.digitization().samplingFrequencyMhz() : null,
-                            atDepth ? sheet.digitization().decimationFactor() : null, null);
+            TofdSetupInput in = TofdSetupInput.builder(c, pcs, thickness)
+                    .gateStartUs(gate ? s.gateStartUs() : null)
+                    .gateEndUs(gate ? s.gateEndUs() : null)
+                    .depthMm(atDepth ? depth : null)
+                    .samplingFrequencyMhz(atDepth ? sheet.digitization().samplingFrequencyMhz() : null)
+                    .decimationFactor(atDepth ? sheet.digitization().decimationFactor() : null).build();
             TofdSetupResult r = TofdSetupCalculator.compute(in);
             put(values, "backwall_time_us", r.backwallTimeUs());
             put(values, "gate_start_margin_us", r.gateStartMarginUs());

@@ -45,21 +45,7 @@ public record ThicknessInput(
         return new Builder(samplingFrequencyMhz, velocityMPerS, nominalThicknessMm);
     }
 
-    /** A builder that starts from this input's values. */
-    public Builder toBuilder() {
-        return new Builder(samplingFrequencyMhz, velocityMPerS, nominalThicknessMm)
-                .decimationFactor(decimationFactor)
-                .velocityUncertaintyMPerS(velocityUncertaintyMPerS)
-                .velocityUncertaintyPercent(velocityUncertaintyPercent)
-                .measurement(measurement)
-                .echoSpacing(echoSpacing)
-                .requiredResolutionMm(requiredResolutionMm)
-                .coverageFactor(coverageFactor)
-                .frequencyMhz(frequencyMhz)
-                .bandwidthPercent(bandwidthPercent);
-    }
-
-    /** Collects optional inputs; null leaves an input "not given". */
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
     public static final class Builder {
         private final double samplingFrequencyMhz;
         private final double velocityMPerS;

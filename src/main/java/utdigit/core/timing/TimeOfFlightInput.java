@@ -33,18 +33,9 @@ public record TimeOfFlightInput(
         Double bandwidthPercent,
         TimeReference timeReference) {
 
-    /** Pulse-echo (straight beam) at the raw rate {@code samplingFrequencyMhz}, all options default. */
-    public static TimeOfFlightInput pulseEcho(double samplingFrequencyMhz, double velocityMPerS) {
+    /** The required inputs alone: pulse-echo (straight beam) at the raw rate, all options default. */
+    public static TimeOfFlightInput of(double samplingFrequencyMhz, double velocityMPerS) {
         return builder(samplingFrequencyMhz, velocityMPerS).build();
-    }
-
-    /** TOFD with the full probe centre separation 2S, all options default. */
-    public static TimeOfFlightInput tofd(
-            double samplingFrequencyMhz, double velocityMPerS, double probeCentreSeparationMm) {
-        return builder(samplingFrequencyMhz, velocityMPerS)
-                .technique(Technique.TOFD)
-                .probeCentreSeparationMm(probeCentreSeparationMm)
-                .build();
     }
 
     /** A builder with the two required inputs; every other input starts as "not given". */
@@ -67,7 +58,7 @@ public record TimeOfFlightInput(
                 .timeReference(timeReference);
     }
 
-    /** Collects optional inputs; null leaves an input "not given". */
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
     public static final class Builder {
         private final double samplingFrequencyMhz;
         private final double velocityMPerS;

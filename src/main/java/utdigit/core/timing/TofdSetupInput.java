@@ -37,49 +37,105 @@ public record TofdSetupInput(
 
     /** The geometry alone. */
     public static TofdSetupInput of(double velocityMPerS, double probeCentreSeparationMm, double thicknessMm) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, null, null, null, null, null,
-                null, null, null, null, null);
+        return builder(velocityMPerS, probeCentreSeparationMm, thicknessMm).build();
     }
 
-    public TofdSetupInput withGate(Double startUs, Double endUs) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, startUs, endUs,
-                pulseDurationUs, depthMm, measuredTimeUs, samplingFrequencyMhz, decimationFactor, timeReference,
-                probeCentreSeparationUncertaintyMm, coverageFactor);
+    /** A builder with the three required inputs; every other input starts as "not given". */
+    public static Builder builder(double velocityMPerS, double probeCentreSeparationMm, double thicknessMm) {
+        return new Builder(velocityMPerS, probeCentreSeparationMm, thicknessMm);
     }
 
-    public TofdSetupInput withPulseDurationUs(Double v) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, gateStartUs, gateEndUs, v,
-                depthMm, measuredTimeUs, samplingFrequencyMhz, decimationFactor, timeReference,
-                probeCentreSeparationUncertaintyMm, coverageFactor);
+    /** A builder that starts from this input's values. */
+    public Builder toBuilder() {
+        return new Builder(velocityMPerS, probeCentreSeparationMm, thicknessMm)
+                .gateStartUs(gateStartUs)
+                .gateEndUs(gateEndUs)
+                .pulseDurationUs(pulseDurationUs)
+                .depthMm(depthMm)
+                .measuredTimeUs(measuredTimeUs)
+                .samplingFrequencyMhz(samplingFrequencyMhz)
+                .decimationFactor(decimationFactor)
+                .timeReference(timeReference)
+                .probeCentreSeparationUncertaintyMm(probeCentreSeparationUncertaintyMm)
+                .coverageFactor(coverageFactor);
     }
 
-    public TofdSetupInput withDepthMm(Double v) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, gateStartUs, gateEndUs,
-                pulseDurationUs, v, measuredTimeUs, samplingFrequencyMhz, decimationFactor, timeReference,
-                probeCentreSeparationUncertaintyMm, coverageFactor);
-    }
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private final double velocityMPerS;
+        private final double probeCentreSeparationMm;
+        private final double thicknessMm;
+        private Double gateStartUs;
+        private Double gateEndUs;
+        private Double pulseDurationUs;
+        private Double depthMm;
+        private Double measuredTimeUs;
+        private Double samplingFrequencyMhz;
+        private Integer decimationFactor;
+        private TimeReference timeReference;
+        private Double probeCentreSeparationUncertaintyMm;
+        private Double coverageFactor;
 
-    public TofdSetupInput withMeasuredTimeUs(Double v) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, gateStartUs, gateEndUs,
-                pulseDurationUs, depthMm, v, samplingFrequencyMhz, decimationFactor, timeReference,
-                probeCentreSeparationUncertaintyMm, coverageFactor);
-    }
+        private Builder(double velocityMPerS, double probeCentreSeparationMm, double thicknessMm) {
+            this.velocityMPerS = velocityMPerS;
+            this.probeCentreSeparationMm = probeCentreSeparationMm;
+            this.thicknessMm = thicknessMm;
+        }
 
-    public TofdSetupInput withSampling(Double frequencyMhz, Integer decimation, TimeReference reference) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, gateStartUs, gateEndUs,
-                pulseDurationUs, depthMm, measuredTimeUs, frequencyMhz, decimation, reference,
-                probeCentreSeparationUncertaintyMm, coverageFactor);
-    }
+        public Builder gateStartUs(Double value) {
+            this.gateStartUs = value;
+            return this;
+        }
 
-    public TofdSetupInput withSeparationUncertaintyMm(Double v) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, gateStartUs, gateEndUs,
-                pulseDurationUs, depthMm, measuredTimeUs, samplingFrequencyMhz, decimationFactor, timeReference, v,
-                coverageFactor);
-    }
+        public Builder gateEndUs(Double value) {
+            this.gateEndUs = value;
+            return this;
+        }
 
-    public TofdSetupInput withCoverageFactor(Double v) {
-        return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, gateStartUs, gateEndUs,
-                pulseDurationUs, depthMm, measuredTimeUs, samplingFrequencyMhz, decimationFactor, timeReference,
-                probeCentreSeparationUncertaintyMm, v);
+        public Builder pulseDurationUs(Double value) {
+            this.pulseDurationUs = value;
+            return this;
+        }
+
+        public Builder depthMm(Double value) {
+            this.depthMm = value;
+            return this;
+        }
+
+        public Builder measuredTimeUs(Double value) {
+            this.measuredTimeUs = value;
+            return this;
+        }
+
+        public Builder samplingFrequencyMhz(Double value) {
+            this.samplingFrequencyMhz = value;
+            return this;
+        }
+
+        public Builder decimationFactor(Integer value) {
+            this.decimationFactor = value;
+            return this;
+        }
+
+        public Builder timeReference(TimeReference value) {
+            this.timeReference = value;
+            return this;
+        }
+
+        public Builder probeCentreSeparationUncertaintyMm(Double value) {
+            this.probeCentreSeparationUncertaintyMm = value;
+            return this;
+        }
+
+        public Builder coverageFactor(Double value) {
+            this.coverageFactor = value;
+            return this;
+        }
+
+        public TofdSetupInput build() {
+            return new TofdSetupInput(velocityMPerS, probeCentreSeparationMm, thicknessMm, gateStartUs,
+                    gateEndUs, pulseDurationUs, depthMm, measuredTimeUs, samplingFrequencyMhz, decimationFactor,
+                    timeReference, probeCentreSeparationUncertaintyMm, coverageFactor);
+        }
     }
 }

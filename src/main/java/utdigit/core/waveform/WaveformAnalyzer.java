@@ -283,12 +283,14 @@ public final class WaveformAnalyzer {
             Optional<Double> modelRequired = in.amplitudeToleranceDb() == null ? null : Optional.empty();
             if (pulse != null) {
                 boolean searchable = bandwidthPercent >= SamplingCalculator.MIN_BANDWIDTH_PERCENT_FOR_PULSE_RATE;
-                SamplingResult s = SamplingCalculator.compute(SamplingInput.of(in.samplingFrequencyMhz(), centreMhz)
-                        .withDecimation(m, mode)
-                        .withBandwidthPercent(bandwidthPercent)
-                        .withCentreFrequencyConvention(convention)
-                        .withPeakReading(reading)
-                        .withAmplitudeToleranceDb(searchable ? in.amplitudeToleranceDb() : null));
+                SamplingResult s = SamplingCalculator.compute(SamplingInput
+                        .builder(in.samplingFrequencyMhz(), centreMhz)
+                        .decimationFactor(m)
+                        .decimationMode(mode)
+                        .bandwidthPercent(bandwidthPercent)
+                        .centreFrequencyConvention(convention)
+                        .peakReading(reading)
+                        .amplitudeToleranceDb(searchable ? in.amplitudeToleranceDb() : null).build());
                 modelLoss = s.pulseAmplitudeLossDb();
                 modelAbove = Optional.ofNullable(s.energyAboveNyquistFraction());
                 if (in.amplitudeToleranceDb() != null) {

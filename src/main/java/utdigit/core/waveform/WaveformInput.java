@@ -62,20 +62,64 @@ public record WaveformInput(
 
     /** A record alone, every option at its default, no target. */
     public static WaveformInput of(double[] samples, double recordSamplingFrequencyMhz) {
-        return new WaveformInput(samples, recordSamplingFrequencyMhz, null, null, null, null, null, null);
+        return builder(samples, recordSamplingFrequencyMhz).build();
     }
 
-    /** With a target rate and its options. */
-    public WaveformInput withTarget(Double samplingFrequencyMhz, Integer decimationFactor, DecimationMode mode,
-                                    PeakReading reading, Double amplitudeToleranceDb) {
-        return new WaveformInput(samples, recordSamplingFrequencyMhz, centreFrequencyConvention, samplingFrequencyMhz,
-                decimationFactor, mode, reading, amplitudeToleranceDb);
+    /** A builder with the two required inputs; every other input starts as "not given". */
+    public static Builder builder(double[] samples, double recordSamplingFrequencyMhz) {
+        return new Builder(samples, recordSamplingFrequencyMhz);
     }
 
-    /** With the centre-frequency convention. */
-    public WaveformInput withCentreFrequencyConvention(CentreFrequencyConvention convention) {
-        return new WaveformInput(samples, recordSamplingFrequencyMhz, convention, samplingFrequencyMhz,
-                decimationFactor, decimationMode, peakReading, amplitudeToleranceDb);
+    /** Collects the optional inputs; null leaves an input "not given". Not thread-safe. */
+    public static final class Builder {
+        private final double[] samples;
+        private final double recordSamplingFrequencyMhz;
+        private CentreFrequencyConvention centreFrequencyConvention;
+        private Double samplingFrequencyMhz;
+        private Integer decimationFactor;
+        private DecimationMode decimationMode;
+        private PeakReading peakReading;
+        private Double amplitudeToleranceDb;
+
+        private Builder(double[] samples, double recordSamplingFrequencyMhz) {
+            this.samples = samples;
+            this.recordSamplingFrequencyMhz = recordSamplingFrequencyMhz;
+        }
+
+        public Builder centreFrequencyConvention(CentreFrequencyConvention value) {
+            this.centreFrequencyConvention = value;
+            return this;
+        }
+
+        public Builder samplingFrequencyMhz(Double value) {
+            this.samplingFrequencyMhz = value;
+            return this;
+        }
+
+        public Builder decimationFactor(Integer value) {
+            this.decimationFactor = value;
+            return this;
+        }
+
+        public Builder decimationMode(DecimationMode value) {
+            this.decimationMode = value;
+            return this;
+        }
+
+        public Builder peakReading(PeakReading value) {
+            this.peakReading = value;
+            return this;
+        }
+
+        public Builder amplitudeToleranceDb(Double value) {
+            this.amplitudeToleranceDb = value;
+            return this;
+        }
+
+        public WaveformInput build() {
+            return new WaveformInput(samples, recordSamplingFrequencyMhz, centreFrequencyConvention,
+                    samplingFrequencyMhz, decimationFactor, decimationMode, peakReading, amplitudeToleranceDb);
+        }
     }
 
     /** A copy of the samples. */

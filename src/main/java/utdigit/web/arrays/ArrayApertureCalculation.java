@@ -39,8 +39,12 @@ class ArrayApertureCalculation implements Calculation<ArrayApertureRequest, Arra
         Double lengthMm = Mirrors.lengthMm(errors, "element_length", q.elementLengthMm(), q.elementLengthIn(), false);
         VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         errors.throwIfAny();
-        ArrayApertureResult r = ArrayApertureCalculator.compute(new ArrayApertureInput(q.frequencyMhz(),
-                velocity.velocityMPerS(), pitchMm, q.activeElements(), apertureMm, lengthMm, q.maxSteeringAngleDeg()));
+        ArrayApertureResult r = ArrayApertureCalculator.compute(ArrayApertureInput.builder(q.frequencyMhz(),
+                        velocity.velocityMPerS(), pitchMm)
+                .activeElements(q.activeElements())
+                .activeApertureMm(apertureMm)
+                .elementLengthMm(lengthMm)
+                .maxSteeringAngleDeg(q.maxSteeringAngleDeg()).build());
         ArrayApertureRequest inputs = new ArrayApertureRequest(q.frequencyMhz(), velocity.velocityMPerS(), null, null,
                 null, null, pitchMm, null, q.activeElements(), apertureMm, null, lengthMm, null,
                 r.maxSteeringAngleDeg());

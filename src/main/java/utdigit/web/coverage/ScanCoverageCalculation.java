@@ -43,8 +43,16 @@ class ScanCoverageCalculation implements Calculation<ScanCoverageRequest, ScanCo
         VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, false));
         errors.throwIfAny();
         Double velocityMPerS = velocity == null ? null : velocity.velocityMPerS();
-        ScanCoverageResult r = ScanCoverageCalculator.compute(new ScanCoverageInput(widthMm, q.frequencyMhz(),
-                velocityMPerS, diameterMm, pathMm, incrementMm, indexMm, q.angularStepDeg(), q.amplitudeToleranceDb()));
+        ScanCoverageResult r = ScanCoverageCalculator.compute(ScanCoverageInput.builder()
+                .beamWidth6dbMm(widthMm)
+                .frequencyMhz(q.frequencyMhz())
+                .velocityMPerS(velocityMPerS)
+                .elementDiameterMm(diameterMm)
+                .soundPathMm(pathMm)
+                .scanIncrementMm(incrementMm)
+                .indexStepMm(indexMm)
+                .angularStepDeg(q.angularStepDeg())
+                .amplitudeToleranceDb(q.amplitudeToleranceDb()).build());
         ScanCoverageRequest inputs = new ScanCoverageRequest(widthMm, null, q.frequencyMhz(), velocityMPerS, null, null,
                 null, null, diameterMm, null, pathMm, null, incrementMm, null, indexMm, null, q.angularStepDeg(),
                 q.amplitudeToleranceDb());

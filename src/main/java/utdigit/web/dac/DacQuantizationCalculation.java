@@ -30,9 +30,12 @@ class DacQuantizationCalculation implements Calculation<DacQuantizationRequest, 
 
     @Override
     public DacQuantizationResponse answer(DacQuantizationRequest q) {
-        DacQuantizationResult r = DacQuantizationCalculator.compute(new DacQuantizationInput(q.bitDepth(),
-                q.dacSpanDb(), q.referenceHeightPercentFsh(), q.amplitudeToleranceDb(), q.digitizedSignal(),
-                q.quantizer(), q.codeMapping()));
+        DacQuantizationResult r = DacQuantizationCalculator.compute(DacQuantizationInput.builder(q.bitDepth(),
+                        q.dacSpanDb(), q.referenceHeightPercentFsh())
+                .amplitudeToleranceDb(q.amplitudeToleranceDb())
+                .digitizedSignal(q.digitizedSignal())
+                .quantizer(q.quantizer())
+                .codeMapping(q.codeMapping()).build());
         DacQuantizationRequest inputs = new DacQuantizationRequest(q.bitDepth(), q.dacSpanDb(),
                 q.referenceHeightPercentFsh(), q.amplitudeToleranceDb(), r.digitizedSignal(), r.quantizer(),
                 r.codeMapping());

@@ -59,9 +59,14 @@ class PulseParametersCalculation implements Calculation<PulseParametersRequest, 
         // inapplicable-input), not a field error of this layer (which would answer invalid-input).
         errors.throwIfAny();
 
-        PulseResult r = PulseCalculator.compute(new PulseInput(q.frequencyMhz(), velocity.velocityMPerS(),
-                q.bandwidthPercent(), q.centreFrequencyConvention(), diameterMm, distanceMm, wedgePathMm,
-                wedgeVelocityMPerS, q.incidentAngleDeg()));
+        PulseResult r = PulseCalculator.compute(PulseInput.builder(q.frequencyMhz(), velocity.velocityMPerS())
+                .bandwidthPercent(q.bandwidthPercent())
+                .centreFrequencyConvention(q.centreFrequencyConvention())
+                .elementDiameterMm(diameterMm)
+                .distanceMm(distanceMm)
+                .wedgePathMm(wedgePathMm)
+                .wedgeVelocityMPerS(wedgeVelocityMPerS)
+                .incidentAngleDeg(q.incidentAngleDeg()).build());
 
         PulseParametersRequest inputs = new PulseParametersRequest(q.frequencyMhz(), velocity.velocityMPerS(),
                 null, null, null, null, q.bandwidthPercent(),

@@ -31,9 +31,16 @@ class QuantizationAssessmentCalculation implements Calculation<QuantizationAsses
 
     @Override
     public QuantizationAssessmentResponse answer(QuantizationAssessmentRequest q) {
-        QuantizationResult r = QuantizationCalculator.compute(new QuantizationInput(q.bitDepth(),
-                q.digitizedSignal(), q.quantizer(), q.codeMapping(), q.digitalGainDb(), q.signalHeightPercentFsh(),
-                q.amplitudeToleranceDb(), q.referenceHeightPercentFsh(), q.evaluationLevelDb(), q.averaging()));
+        QuantizationResult r = QuantizationCalculator.compute(QuantizationInput.builder(q.bitDepth())
+                .digitizedSignal(q.digitizedSignal())
+                .quantizer(q.quantizer())
+                .codeMapping(q.codeMapping())
+                .digitalGainDb(q.digitalGainDb())
+                .signalHeightPercentFsh(q.signalHeightPercentFsh())
+                .amplitudeToleranceDb(q.amplitudeToleranceDb())
+                .referenceHeightPercentFsh(q.referenceHeightPercentFsh())
+                .evaluationLevelDb(q.evaluationLevelDb())
+                .averaging(q.averaging()).build());
         QuantizationAssessmentRequest inputs = new QuantizationAssessmentRequest(q.bitDepth(), r.digitizedSignal(),
                 r.quantizer(), r.codeMapping(), r.digitalGainDb(), q.signalHeightPercentFsh(),
                 q.amplitudeToleranceDb(), q.referenceHeightPercentFsh(), q.evaluationLevelDb(), q.averaging());

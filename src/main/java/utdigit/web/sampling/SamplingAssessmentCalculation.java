@@ -83,17 +83,20 @@ class SamplingAssessmentCalculation implements Calculation<SamplingAssessmentReq
         errors.throwIfAny();
         Double velocityMPerS = velocity == null ? null : velocity.velocityMPerS();
 
-        SamplingResult r = SamplingCalculator.compute(SamplingInput.of(q.samplingFrequencyMhz(), q.frequencyMhz())
-                .withDecimation(q.decimationFactor(), q.decimationMode())
-                .withBandwidthPercent(q.bandwidthPercent())
-                .withCentreFrequencyConvention(q.centreFrequencyConvention())
-                .withSignal(q.signal())
-                .withPeakReading(q.peakReading())
-                .withAmplitudeToleranceDb(q.amplitudeToleranceDb())
-                .withTfmGridSpacingMm(gridMm)
-                .withVelocityMPerS(velocityMPerS)
-                .withTfmImage(q.tfmImage())
-                .withTfmLateral(lateralMm, apertureMm, depthMm));
+        SamplingResult r = SamplingCalculator.compute(SamplingInput.builder(q.samplingFrequencyMhz(), q.frequencyMhz())
+                .decimationFactor(q.decimationFactor())
+                .decimationMode(q.decimationMode())
+                .bandwidthPercent(q.bandwidthPercent())
+                .centreFrequencyConvention(q.centreFrequencyConvention())
+                .signal(q.signal())
+                .peakReading(q.peakReading())
+                .amplitudeToleranceDb(q.amplitudeToleranceDb())
+                .tfmGridSpacingMm(gridMm)
+                .velocityMPerS(velocityMPerS)
+                .tfmImage(q.tfmImage())
+                .tfmLateralGridSpacingMm(lateralMm)
+                .tfmApertureMm(apertureMm)
+                .tfmDepthMm(depthMm).build());
 
         SamplingAssessmentRequest inputs = new SamplingAssessmentRequest(q.samplingFrequencyMhz(), q.frequencyMhz(),
                 r.decimationFactor(), r.decimationMode(), q.bandwidthPercent(), r.centreFrequencyConvention(),

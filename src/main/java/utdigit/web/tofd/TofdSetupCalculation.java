@@ -41,10 +41,18 @@ class TofdSetupCalculation implements Calculation<TofdSetupRequest, TofdSetupRes
         Double separationUncertaintyMm = separationUncertaintyMm(errors, q);
         VelocitySource velocity = errors.orLater(() -> Mirrors.velocity(errors, q, true));
         errors.throwIfAny();
-        TofdSetupResult r = TofdSetupCalculator.compute(new TofdSetupInput(velocity.velocityMPerS(), separationMm,
-                thicknessMm, q.gateStartUs(), q.gateEndUs(), q.pulseDurationUs(), depthMm, q.measuredTimeUs(),
-                q.samplingFrequencyMhz(), q.decimationFactor(), q.timeReference(), separationUncertaintyMm,
-                q.coverageFactor()));
+        TofdSetupResult r = TofdSetupCalculator.compute(TofdSetupInput.builder(velocity.velocityMPerS(), separationMm,
+                        thicknessMm)
+                .gateStartUs(q.gateStartUs())
+                .gateEndUs(q.gateEndUs())
+                .pulseDurationUs(q.pulseDurationUs())
+                .depthMm(depthMm)
+                .measuredTimeUs(q.measuredTimeUs())
+                .samplingFrequencyMhz(q.samplingFrequencyMhz())
+                .decimationFactor(q.decimationFactor())
+                .timeReference(q.timeReference())
+                .probeCentreSeparationUncertaintyMm(separationUncertaintyMm)
+                .coverageFactor(q.coverageFactor()).build());
         boolean sampled = q.samplingFrequencyMhz() != null;
         boolean atDepth = depthMm != null || q.measuredTimeUs() != null;
         boolean uncertain = atDepth && (sampled || separationUncertaintyMm != null);

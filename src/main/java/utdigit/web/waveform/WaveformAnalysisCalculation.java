@@ -41,10 +41,13 @@ class WaveformAnalysisCalculation implements Calculation<WaveformAnalysisRequest
             }
             values[i] = v;
         }
-        return WaveformAnalyzer.analyse(WaveformInput.of(values, q.recordSamplingFrequencyMhz())
-                .withCentreFrequencyConvention(q.centreFrequencyConvention())
-                .withTarget(q.samplingFrequencyMhz(), q.decimationFactor(), q.decimationMode(), q.peakReading(),
-                        q.amplitudeToleranceDb()));
+        return WaveformAnalyzer.analyse(WaveformInput.builder(values, q.recordSamplingFrequencyMhz())
+                .centreFrequencyConvention(q.centreFrequencyConvention())
+                .samplingFrequencyMhz(q.samplingFrequencyMhz())
+                .decimationFactor(q.decimationFactor())
+                .decimationMode(q.decimationMode())
+                .peakReading(q.peakReading())
+                .amplitudeToleranceDb(q.amplitudeToleranceDb()).build());
     }
 
     @Override

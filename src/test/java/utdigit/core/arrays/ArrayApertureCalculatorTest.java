@@ -50,7 +50,7 @@ class ArrayApertureCalculatorTest {
     void nearFieldAndBeamSpreadOfAHandWorkedAperture() {
         // Our own case: 5 MHz in steel 5920 m/s, lambda = 5.92 / 5 = 1.184 mm; 16 elements at 0.6 mm: L = 9.6 mm.
         ArrayApertureResult r = ArrayApertureCalculator.compute(
-                ArrayApertureInput.of(5.0, 5920.0, 0.6).withActiveElements(16).withElementLengthMm(10.0));
+                ArrayApertureInput.builder(5.0, 5920.0, 0.6).activeElements(16).elementLengthMm(10.0).build());
         double lambda = 1.184;
         assertThat(r.wavelengthMm()).isCloseTo(lambda, within(1e-12));
         assertThat(r.activeApertureMm()).isCloseTo(9.6, within(1e-12));
@@ -68,7 +68,7 @@ class ArrayApertureCalculatorTest {
     void anApertureShorterThanTheWavelengthHasNoBeamSpreadAngle() {
         // 1 MHz in steel: lambda = 5.92 mm; aperture 2 x 1 mm = 2 mm: k lambda / L > 1 for every level.
         ArrayApertureResult r = ArrayApertureCalculator.compute(
-                ArrayApertureInput.of(1.0, 5920.0, 1.0).withActiveElements(2));
+                ArrayApertureInput.builder(1.0, 5920.0, 1.0).activeElements(2).build());
         assertThat(r.beamSpread6dbDeg()).isEmpty();
         assertThat(r.beamSpreadNullDeg()).isEmpty();
         assertThat(r.hasWarning(ArrayApertureCalculator.NO_BEAM_SPREAD_6DB)).isTrue();
@@ -105,7 +105,7 @@ class ArrayApertureCalculatorTest {
         // 5 MHz, 5920 m/s, steering up to 45 deg: the largest pitch is lambda / (1 + sin 45).
         double lambda = 1.184;
         ArrayApertureResult r = ArrayApertureCalculator.compute(
-                ArrayApertureInput.of(5.0, 5920.0, 0.6).withMaxSteeringAngleDeg(45.0));
+                ArrayApertureInput.builder(5.0, 5920.0, 0.6).maxSteeringAngleDeg(45.0).build());
         double maxPitch = lambda / (1 + Math.sin(Math.toRadians(45)));
         assertThat(r.maxGratingLobeFreePitchMm()).isCloseTo(maxPitch, within(1e-12));
         assertThat(r.gratingLobeFree()).isTrue();
@@ -115,7 +115,7 @@ class ArrayApertureCalculatorTest {
         assertThat(largestSecondaryPeak(0.9 * maxPitch, lambda, 45.0, 32)).isLessThan(0.5);
         assertThat(largestSecondaryPeak(1.1 * maxPitch, lambda, 45.0, 32)).isGreaterThan(0.99);
         ArrayApertureResult coarse = ArrayApertureCalculator.compute(
-                ArrayApertureInput.of(5.0, 5920.0, 1.1 * maxPitch).withMaxSteeringAngleDeg(45.0));
+                ArrayApertureInput.builder(5.0, 5920.0, 1.1 * maxPitch).maxSteeringAngleDeg(45.0).build());
         assertThat(coarse.gratingLobeFree()).isFalse();
         assertThat(coarse.hasWarning(ArrayApertureCalculator.GRATING_LOBE)).isTrue();
     }
@@ -123,11 +123,11 @@ class ArrayApertureCalculatorTest {
     @Test
     void bothApertureFormsAreRefusedAndAnApertureBelowOnePitchIsImpossible() {
         assertThatThrownBy(() -> ArrayApertureCalculator.compute(
-                ArrayApertureInput.of(5.0, 5920.0, 0.6).withActiveElements(16).withActiveApertureMm(9.6)))
+                ArrayApertureInput.builder(5.0, 5920.0, 0.6).activeElements(16).activeApertureMm(9.6).build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.error()).isEqualTo(CalculationError.NOT_APPLICABLE));
         assertThatThrownBy(() -> ArrayApertureCalculator.compute(
-                ArrayApertureInput.of(5.0, 5920.0, 0.6).withActiveApertureMm(0.5)))
+                ArrayApertureInput.builder(5.0, 5920.0, 0.6).activeApertureMm(0.5).build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.error()).isEqualTo(CalculationError.IMPOSSIBLE_COMBINATION));
     }

@@ -29,8 +29,8 @@ class ScanCoverageCalculatorTest {
 
     @Test
     void stepLossesMatchABruteForceScanOfReflectorPositions() {
-        ScanCoverageResult r = ScanCoverageCalculator.compute(ScanCoverageInput.ofBeamWidth(8.0)
-                .withScanIncrementMm(2.0).withIndexStepMm(5.0).withSoundPathMm(50.0).withAngularStepDeg(1.0));
+        ScanCoverageResult r = ScanCoverageCalculator.compute(ScanCoverageInput.builder().beamWidth6dbMm(8.0)
+                .scanIncrementMm(2.0).indexStepMm(5.0).soundPathMm(50.0).angularStepDeg(1.0).build());
         assertThat(r.beamWidth6dbMm()).hasValue(8.0);
         assertThat(r.scanIncrementLossDb().orElseThrow()).isCloseTo(bruteForceLossDb(2.0, 8.0), within(1e-9));
         assertThat(r.indexStepLossDb().orElseThrow()).isCloseTo(bruteForceLossDb(5.0, 8.0), within(1e-9));
@@ -42,8 +42,8 @@ class ScanCoverageCalculatorTest {
 
     @Test
     void theLargestStepForATolerancesLosesExactlyTheTolerance() {
-        ScanCoverageResult r = ScanCoverageCalculator.compute(ScanCoverageInput.ofBeamWidth(8.0)
-                .withScanIncrementMm(2.0).withIndexStepMm(5.0).withSoundPathMm(50.0).withAmplitudeToleranceDb(1.0));
+        ScanCoverageResult r = ScanCoverageCalculator.compute(ScanCoverageInput.builder().beamWidth6dbMm(8.0)
+                .scanIncrementMm(2.0).indexStepMm(5.0).soundPathMm(50.0).amplitudeToleranceDb(1.0).build());
         double maxStep = r.maxStepMm().orElseThrow();
         // The brute-force loss at the largest step is the tolerance; 1 % more step is over it.
         assertThat(bruteForceLossDb(maxStep, 8.0)).isCloseTo(1.0, within(1e-6));
@@ -72,7 +72,8 @@ class ScanCoverageCalculatorTest {
         double width = 2 * 200 * Math.tan(Math.asin(k * lambda / 10.0));
         double step = width / 2;
         ScanCoverageResult r = ScanCoverageCalculator.compute(
-                ScanCoverageInput.ofProbe(5.0, 5920.0, 10.0, 200.0).withScanIncrementMm(step));
+                ScanCoverageInput.builder().frequencyMhz(5.0).velocityMPerS(5920.0).elementDiameterMm(10.0)
+                        .soundPathMm(200.0).scanIncrementMm(step).build());
         assertThat(r.beamWidth6dbMm().orElseThrow()).isCloseTo(width, within(1e-9));
         // The Gaussian model (1.5 dB at half the width) against the real two-way piston directivity
         // (2 J1(x)/x)^2 (Commons Math BesselJ) at the reflector midway, step/2 off the axis at 200 mm:
@@ -88,7 +89,8 @@ class ScanCoverageCalculatorTest {
     void insideTheNearFieldTheBeamWidthIsNotKnown() {
         // Near field 10^2 / (4 x 1.184) = 21.1 mm; 15 mm lies inside it.
         ScanCoverageResult r = ScanCoverageCalculator.compute(
-                ScanCoverageInput.ofProbe(5.0, 5920.0, 10.0, 15.0).withScanIncrementMm(1.0).withAmplitudeToleranceDb(1.0));
+                ScanCoverageInput.builder().frequencyMhz(5.0).velocityMPerS(5920.0).elementDiameterMm(10.0)
+                        .soundPathMm(15.0).scanIncrementMm(1.0).amplitudeToleranceDb(1.0).build());
         assertThat(r.beamWidth6dbMm()).isEmpty();
         assertThat(r.scanIncrementLossDb()).isEmpty();
         assertThat(r.maxStepMm()).isEmpty();
@@ -98,11 +100,12 @@ class ScanCoverageCalculatorTest {
 
     @Test
     void aBeamWidthGivenTwiceOrAnAngularStepWithoutSoundPathIsRefused() {
-        assertThatThrownBy(() -> ScanCoverageCalculator.compute(new ScanCoverageInput(8.0, 5.0, null, null, null,
-                null, null, null, null)))
+        assertThatThrownBy(() -> ScanCoverageCalculator.compute(
+                ScanCoverageInput.builder().beamWidth6dbMm(8.0).frequencyMhz(5.0).build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.error()).isEqualTo(CalculationError.NOT_APPLICABLE));
-        assertThatThrownBy(() -> ScanCoverageCalculator.compute(ScanCoverageInput.ofBeamWidth(8.0).withAngularStepDeg(1.0)))
+        assertThatThrownBy(() -> ScanCoverageCalculator.compute(ScanCoverageInput.builder().beamWidth6dbMm(8.0)
+                .angularStepDeg(1.0).build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.fields()).containsExactly("angular_step_deg"));
     }

@@ -21,7 +21,7 @@ class DacQuantizationCalculatorTest {
     void thirtyDbOfDacAtEightBitsThreeSetUps() {
         // Our own case: highest DAC point at 80 %FSH, the curve spans 30 dB, tolerance 1 dB.
         DacQuantizationResult r = DacQuantizationCalculator.compute(
-                DacQuantizationInput.of(8, 30.0, 80.0).withAmplitudeToleranceDb(1.0));
+                DacQuantizationInput.builder(8, 30.0, 80.0).amplitudeToleranceDb(1.0).build());
         double lowest = 80.0 * Math.pow(10, -30.0 / 20);
         assertThat(r.lsbPercentFsh()).isCloseTo(LSB, within(1e-15));
         assertThat(r.lowestReferenceHeightPercentFsh()).isCloseTo(lowest, within(1e-12));
@@ -54,7 +54,7 @@ class DacQuantizationCalculatorTest {
             }
         }
         DacQuantizationResult r = DacQuantizationCalculator.compute(
-                DacQuantizationInput.of(8, 10.0, 80.0).withAmplitudeToleranceDb(0.5));
+                DacQuantizationInput.builder(8, 10.0, 80.0).amplitudeToleranceDb(0.5).build());
         assertThat(r.maxUncorrectedSpanDb().orElseThrow()).isCloseTo(lo, within(1e-9));
         assertThat(r.uncorrectedWithinTolerance()).isTrue();
     }
@@ -62,9 +62,11 @@ class DacQuantizationCalculatorTest {
     @Test
     void aLowestPointBelowHalfAnLsbReadsAsZero() {
         // 4-bit RECTIFIED, MAX_CODE: LSB = 100 / 15 %FSH; 80 %FSH - 40 dB = 0.8 %FSH < LSB/2 = 3.33 %FSH.
-        DacQuantizationResult r = DacQuantizationCalculator.compute(DacQuantizationInput.of(4, 40.0, 80.0)
-                .withAmplitudeToleranceDb(2.0)
-                .withOptions(DigitizedSignal.RECTIFIED, Quantizer.ROUNDING, CodeMapping.MAX_CODE));
+        DacQuantizationResult r = DacQuantizationCalculator.compute(DacQuantizationInput.builder(4, 40.0, 80.0)
+                .amplitudeToleranceDb(2.0)
+                .digitizedSignal(DigitizedSignal.RECTIFIED)
+                .quantizer(Quantizer.ROUNDING)
+                .codeMapping(CodeMapping.MAX_CODE).build());
         assertThat(r.lsbPercentFsh()).isCloseTo(100.0 / 15, within(1e-12));
         assertThat(r.uncorrectedErrorUnderDb()).isEmpty();
         assertThat(r.digitalTcgErrorUnderDb()).isEmpty();

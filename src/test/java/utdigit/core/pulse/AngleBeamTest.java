@@ -24,8 +24,8 @@ class AngleBeamTest {
             Math.toDegrees(Math.asin(Math.sin(Math.toRadians(45.0)) * WEDGE_M_PER_S / STEEL_SHEAR_M_PER_S));
 
     private static PulseInput angleBeam() {
-        return PulseInput.of(5.0, STEEL_SHEAR_M_PER_S).withElementDiameterMm(10.0)
-                .withWedgeVelocityMPerS(WEDGE_M_PER_S).withIncidentAngleDeg(INCIDENT_FOR_45_DEG);
+        return PulseInput.builder(5.0, STEEL_SHEAR_M_PER_S).elementDiameterMm(10.0)
+                .wedgeVelocityMPerS(WEDGE_M_PER_S).incidentAngleDeg(INCIDENT_FOR_45_DEG).build();
     }
 
     /**
@@ -83,11 +83,11 @@ class AngleBeamTest {
     void wedgePathInTheIncidencePlane() {
         // near field of D in the wedge's material: D^2 f / (4 v_w)
         double wedgeNearFieldMm = 100.0 * 5.0 / (4 * WEDGE_M_PER_S / 1000.0);
-        PulseResult r = PulseCalculator.compute(angleBeam().withWedgePathMm(wedgeNearFieldMm));
+        PulseResult r = PulseCalculator.compute(angleBeam().toBuilder().wedgePathMm(wedgeNearFieldMm).build());
         assertThat(r.nearFieldInPartMm()).isCloseTo(0.0, within(1e-9));
         assertThat(r.incidencePlane().nearFieldInPartMm().orElseThrow()).isCloseTo(0.0, within(1e-9));
         // half of it leaves half of each plane's near field
-        PulseResult half = PulseCalculator.compute(angleBeam().withWedgePathMm(wedgeNearFieldMm / 2));
+        PulseResult half = PulseCalculator.compute(angleBeam().toBuilder().wedgePathMm(wedgeNearFieldMm / 2).build());
         assertThat(half.incidencePlane().nearFieldInPartMm().orElseThrow())
                 .isCloseTo(half.incidencePlane().nearFieldLengthMm().orElseThrow() / 2, within(1e-9));
     }
@@ -95,10 +95,10 @@ class AngleBeamTest {
     @Test
     @DisplayName("beam width in the incidence plane: null inside that plane's near field, 2 z tan(theta) beyond it")
     void beamWidthInTheIncidencePlane() {
-        PulseResult inside = PulseCalculator.compute(angleBeam().withDistanceMm(10.0));
+        PulseResult inside = PulseCalculator.compute(angleBeam().toBuilder().distanceMm(10.0).build());
         assertThat(inside.incidencePlane().beamDiameter6dbMm()).isEmpty();
         assertThat(PulseCalculatorTest.codes(inside)).contains(PulseCalculator.DISTANCE_IN_INCIDENCE_PLANE_NEAR_FIELD);
-        PulseResult beyond = PulseCalculator.compute(angleBeam().withDistanceMm(60.0));
+        PulseResult beyond = PulseCalculator.compute(angleBeam().toBuilder().distanceMm(60.0).build());
         double theta = Math.toRadians(beyond.incidencePlane().beamSpread6dbDeg().orElseThrow());
         assertThat(beyond.incidencePlane().beamDiameter6dbMm().orElseThrow())
                 .isCloseTo(2 * 60.0 * Math.tan(theta), within(1e-9));
@@ -108,8 +108,8 @@ class AngleBeamTest {
     @DisplayName("past the critical angle every incidence-plane figure is null, with the critical-angle warning; "
             + "at normal incidence the incidence plane is the perpendicular one")
     void pastTheCriticalAngleAndNormalIncidence() {
-        PulseResult past = PulseCalculator.compute(PulseInput.of(5.0, STEEL_SHEAR_M_PER_S).withElementDiameterMm(10.0)
-                .withWedgeVelocityMPerS(WEDGE_M_PER_S).withIncidentAngleDeg(60.0).withDistanceMm(50.0));
+        PulseResult past = PulseCalculator.compute(PulseInput.builder(5.0, STEEL_SHEAR_M_PER_S).elementDiameterMm(10.0)
+                .wedgeVelocityMPerS(WEDGE_M_PER_S).incidentAngleDeg(60.0).distanceMm(50.0).build());
         PulseResult.IncidencePlane plane = past.incidencePlane();
         assertThat(List.of(plane.apertureMm(), plane.nearFieldLengthMm(), plane.beamSpread6dbDeg(),
                 plane.beamSpread20dbDeg(), plane.beamDiameter6dbMm())).allSatisfy(o -> assertThat(o).isEmpty());
@@ -117,8 +117,8 @@ class AngleBeamTest {
         assertThat(PulseCalculatorTest.codes(past)).contains("PAST_CRITICAL_ANGLE");
         assertThat(past.warnings()).anySatisfy(w -> assertThat(w.message()).contains("incidence_plane_"));
 
-        PulseResult normal = PulseCalculator.compute(PulseInput.of(5.0, 5920.0).withElementDiameterMm(10.0)
-                .withWedgeVelocityMPerS(WEDGE_M_PER_S).withIncidentAngleDeg(0.0));
+        PulseResult normal = PulseCalculator.compute(PulseInput.builder(5.0, 5920.0).elementDiameterMm(10.0)
+                .wedgeVelocityMPerS(WEDGE_M_PER_S).incidentAngleDeg(0.0).build());
         assertThat(normal.incidencePlane().nearFieldLengthMm().orElseThrow()).isEqualTo(normal.nearFieldLengthMm());
         assertThat(normal.incidencePlane().beamSpread6dbDeg()).isEqualTo(normal.beamSpread6dbDeg());
     }
@@ -126,7 +126,8 @@ class AngleBeamTest {
     @Test
     @DisplayName("without an incident angle there are no incidence-plane figures (omitted)")
     void noAngleNoIncidencePlane() {
-        assertThat(PulseCalculator.compute(PulseInput.of(5.0, 5920.0).withElementDiameterMm(10.0)).incidencePlane())
+        assertThat(PulseCalculator.compute(PulseInput.builder(5.0, 5920.0).elementDiameterMm(10.0)
+                .build()).incidencePlane())
                 .isNull();
     }
 }

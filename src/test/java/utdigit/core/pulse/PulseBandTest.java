@@ -54,8 +54,8 @@ class PulseBandTest {
     }
 
     static PulseResult arithmetic(double frequencyMhz, double bandwidthPercent) {
-        return PulseCalculator.compute(PulseInput.of(frequencyMhz, STEEL_LONGITUDINAL_M_PER_S)
-                .withBandwidthPercent(bandwidthPercent));
+        return PulseCalculator.compute(PulseInput.builder(frequencyMhz, STEEL_LONGITUDINAL_M_PER_S)
+                .bandwidthPercent(bandwidthPercent).build());
     }
 
     @ParameterizedTest(name = "{0} MHz, {1} %")
@@ -128,8 +128,9 @@ class PulseBandTest {
     @DisplayName("GEOMETRIC edges are the band of an FFT of the model pulse used for the durations, within 0.1 %")
     void geometricEdgesMatchFftOfTheModelPulse(double fcMhz, double bandwidthPercent) {
         double bw = bandwidthPercent / 100.0;
-        PulseResult r = PulseCalculator.compute(PulseInput.of(fcMhz, STEEL_LONGITUDINAL_M_PER_S)
-                .withBandwidthPercent(bandwidthPercent, CentreFrequencyConvention.GEOMETRIC));
+        PulseResult r = PulseCalculator.compute(PulseInput.builder(fcMhz, STEEL_LONGITUDINAL_M_PER_S)
+                .bandwidthPercent(bandwidthPercent)
+                .centreFrequencyConvention(CentreFrequencyConvention.GEOMETRIC).build());
         GaussianPulse model = CentreFrequencyConvention.GEOMETRIC.pulseModel(fcMhz, bw);
         NumericalPulse.Spectrum spectrum = NumericalPulse.spectrum(model::amplitude);
 

@@ -75,12 +75,12 @@ class PulseCalculatorTest {
     @Test
     @DisplayName("every input gives every result, each formula with its reference")
     void everyInputGivesEveryResult() {
-        PulseResult r = compute(FIVE_MHZ_STEEL.withBandwidthPercent(60.0)
-                .withElementDiameterMm(10.0)
-                .withDistanceMm(60.0)
-                .withWedgePathMm(10.0)
-                .withWedgeVelocityMPerS(WEDGE_M_PER_S)
-                .withIncidentAngleDeg(15.0));
+        PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(60.0)
+                .elementDiameterMm(10.0)
+                .distanceMm(60.0)
+                .wedgePathMm(10.0)
+                .wedgeVelocityMPerS(WEDGE_M_PER_S)
+                .incidentAngleDeg(15.0).build());
         assertThat(r.centreFrequencyConvention()).isEqualTo(CentreFrequencyConvention.ARITHMETIC);
         assertThat(List.of(r.lowerFrequencyMhz(), r.upperFrequencyMhz(), r.upperFrequency20dbMhz(),
                 r.upperFrequency40dbMhz(), r.pulseDuration6dbUs(), r.pulseDuration20dbUs(), r.cycles6db(),
@@ -103,9 +103,10 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("a bandwidth without a convention uses ARITHMETIC (the contract's default) and says so")
         void bandwidthWithoutConventionUsesArithmetic() {
-            assertThat(compute(FIVE_MHZ_STEEL.withBandwidthPercent(60.0)).centreFrequencyConvention())
+            assertThat(compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(60.0).build()).centreFrequencyConvention())
                     .isEqualTo(CentreFrequencyConvention.ARITHMETIC);
-            assertThat(compute(FIVE_MHZ_STEEL.withBandwidthPercent(60.0, CentreFrequencyConvention.GEOMETRIC))
+            assertThat(compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(60.0)
+                    .centreFrequencyConvention(CentreFrequencyConvention.GEOMETRIC).build())
                     .centreFrequencyConvention()).isEqualTo(CentreFrequencyConvention.GEOMETRIC);
         }
 
@@ -115,8 +116,9 @@ class PulseCalculatorTest {
             qt().withFixedSeed(SEED).withExamples(2000)
                     .forAll(doubles().between(0.1, 50.0), doubles().between(1.0, 199.0))
                     .checkAssert((fcMhz, bandwidthPercent) -> {
-                        PulseResult r = compute(PulseInput.of(fcMhz, STEEL_LONGITUDINAL_M_PER_S)
-                                .withBandwidthPercent(bandwidthPercent, CentreFrequencyConvention.GEOMETRIC));
+                        PulseResult r = compute(PulseInput.builder(fcMhz, STEEL_LONGITUDINAL_M_PER_S)
+                                .bandwidthPercent(bandwidthPercent)
+                                .centreFrequencyConvention(CentreFrequencyConvention.GEOMETRIC).build());
                         double fl = r.lowerFrequencyMhz();
                         double fu = r.upperFrequencyMhz();
                         assertThat(Math.sqrt(fl * fu)).isCloseTo(fcMhz, within(fcMhz * ALLOWED_RELATIVE_ERROR));
@@ -132,8 +134,8 @@ class PulseCalculatorTest {
             qt().withFixedSeed(SEED).withExamples(2000)
                     .forAll(doubles().between(0.1, 50.0), doubles().between(1.0, 199.0))
                     .checkAssert((fcMhz, bandwidthPercent) -> {
-                        PulseResult r = compute(PulseInput.of(fcMhz, STEEL_LONGITUDINAL_M_PER_S)
-                                .withBandwidthPercent(bandwidthPercent));
+                        PulseResult r = compute(PulseInput.builder(fcMhz, STEEL_LONGITUDINAL_M_PER_S)
+                                .bandwidthPercent(bandwidthPercent).build());
                         double fl = r.lowerFrequencyMhz();
                         double fu = r.upperFrequencyMhz();
                         assertThat((fl + fu) / 2).isCloseTo(fcMhz, within(fcMhz * ALLOWED_RELATIVE_ERROR));
@@ -145,7 +147,8 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("GEOMETRIC, hand-worked: 5 MHz, 60 %: B = 3 MHz, fl,u = (-/+3 + sqrt(9 + 100))/2 = 3.720 and 6.720 MHz")
         void geometricHandWorkedExample() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withBandwidthPercent(60.0, CentreFrequencyConvention.GEOMETRIC));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(60.0)
+                    .centreFrequencyConvention(CentreFrequencyConvention.GEOMETRIC).build());
             assertThat(r.lowerFrequencyMhz()).isCloseTo((-3 + Math.sqrt(109)) / 2, within(1e-12));
             assertThat(r.upperFrequencyMhz()).isCloseTo((3 + Math.sqrt(109)) / 2, within(1e-12));
             assertThat(r.lowerFrequencyMhz()).isCloseTo(3.720, within(0.0005));
@@ -157,7 +160,7 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("spatial pulse length is v tau(-6 dB) and axial resolution half of it (common practice, no published source)")
         void spatialPulseLengthAndAxialResolution() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withBandwidthPercent(60.0));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(60.0).build());
             // tau(-6 dB) = 2 x 0.1465871197758856 us: scipy.signal.gausspulse('cutoff', 5, 0.6, -6, -6)
             double tauUs = 2 * 0.1465871197758856;
             assertThat(r.pulseDuration6dbUs()).isCloseTo(tauUs, within(tauUs * ALLOWED_RELATIVE_ERROR));
@@ -169,7 +172,7 @@ class PulseCalculatorTest {
         @CsvSource({"77, 40, true", "78, 40, false", "109, 20, true", "110, 20, false"})
         @DisplayName("a lower edge exists exactly while fc - (bw fc/2) sqrt(L/6) > 0, i.e. bw < 2/sqrt(L/6) (model)")
         void lowerEdgeExistsWhileAboveZeroHertz(double bandwidthPercent, int levelDb, boolean exists) {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withBandwidthPercent(bandwidthPercent));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(bandwidthPercent).build());
             var edge = levelDb == 40 ? r.lowerFrequency40dbMhz() : r.lowerFrequency20dbMhz();
             assertThat(bandwidthPercent / 100.0 < 2 / Math.sqrt(levelDb / 6.0)).isEqualTo(exists);
             assertThat(edge.isPresent()).isEqualTo(exists);
@@ -179,7 +182,7 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("the warning for a missing lower edge names the field")
         void missingLowerEdgeWarningNamesTheField() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withBandwidthPercent(80.0));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(80.0).build());
             assertThat(r.lowerFrequency40dbMhz()).isEmpty();
             assertThat(r.warnings()).filteredOn(w -> w.code().equals("NO_LOWER_FREQUENCY_40DB"))
                     .singleElement()
@@ -189,9 +192,9 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("bandwidth above 100 % warns (negative-frequency image, src/docs/methods.md); 100 % does not")
         void bandwidthAboveHundredPercentWarns() {
-            assertThat(codes(compute(FIVE_MHZ_STEEL.withBandwidthPercent(100.0))))
+            assertThat(codes(compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(100.0).build())))
                     .doesNotContain("BANDWIDTH_ABOVE_100_PERCENT");
-            PulseResult r = compute(FIVE_MHZ_STEEL.withBandwidthPercent(100.5));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(100.5).build());
             assertThat(codes(r)).contains("BANDWIDTH_ABOVE_100_PERCENT");
             assertThat(r.warnings()).filteredOn(w -> w.code().equals("BANDWIDTH_ABOVE_100_PERCENT"))
                     .singleElement()
@@ -208,7 +211,7 @@ class PulseCalculatorTest {
         void elementOfOneWavelengthHasNoExactNearField() {
             // (D^2 - lambda^2)/(4 lambda) is 0 at D = lambda: the face itself, not a maximum in front of it.
             // 1 MHz in 1000 m/s: lambda = 1 mm exactly.
-            PulseResult r = compute(PulseInput.of(1.0, 1000.0).withElementDiameterMm(1.0));
+            PulseResult r = compute(PulseInput.builder(1.0, 1000.0).elementDiameterMm(1.0).build());
             assertThat(r.wavelengthMm()).isEqualTo(1.0);
             assertThat(r.nearFieldLengthExactMm()).isEmpty();
             assertThat(codes(r)).contains("NO_EXACT_NEAR_FIELD");
@@ -219,7 +222,7 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("beam-spread angles lie where the pulse-echo directivity (Commons Math BesselJ) is at -6 dB, -20 dB and the first null")
         void beamSpreadAnglesAreAtTheirLevels() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0).build());
             assertThat(twoWayDirectivityAt(r.beamSpread6dbDeg().orElseThrow(), 10.0, WAVELENGTH_MM))
                     .isCloseTo(Math.pow(10, -6.0 / 20), within(1e-12));
             assertThat(twoWayDirectivityAt(r.beamSpread20dbDeg().orElseThrow(), 10.0, WAVELENGTH_MM))
@@ -237,7 +240,7 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("an element between 0.87 and 1.22 wavelengths has -6 and -20 dB angles but no first null: empty with a warning")
         void smallElementHasNoFirstNull() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(1.3));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(1.3).build());
             assertThat(r.beamSpread6dbDeg()).isPresent();
             assertThat(r.beamSpread20dbDeg()).isPresent();
             assertThat(r.beamSpreadNullDeg()).isEmpty();
@@ -249,7 +252,7 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("an element below half a wavelength has no angle, no exact near field and no beam diameter: empty with warnings")
         void tinyElementHasNoBeamAngles() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(0.5).withDistanceMm(20.0));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(0.5).distanceMm(20.0).build());
             assertThat(r.nearFieldLengthMm()).isCloseTo(0.25 / (4 * WAVELENGTH_MM), within(1e-12));
             assertThat(r.nearFieldLengthExactMm()).isEmpty();
             assertThat(r.beamSpread6dbDeg()).isEmpty();
@@ -263,7 +266,7 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("beam diameter is 2 z tan(theta -6 dB) in the far field, without a warning")
         void beamDiameterInFarField() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withDistanceMm(60.0));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0).distanceMm(60.0).build());
             double thetaRad = Math.toRadians(r.beamSpread6dbDeg().orElseThrow());
             assertThat(r.beamDiameter6dbMm().orElseThrow()).isCloseTo(2 * 60.0 * Math.tan(thetaRad), within(1e-12));
             assertThat(r.warnings()).isEmpty();
@@ -274,7 +277,7 @@ class PulseCalculatorTest {
         void distanceInsideNearFieldHasNoBeamDiameter() {
             // The far-field cone would give 2 x 10 x tan(3.49 deg) = 1.22 mm at 10 mm, an eighth of the element:
             // inside the near field the beam is of the order of the element's diameter (Krautkraemer, from memory).
-            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withDistanceMm(10.0));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0).distanceMm(10.0).build());
             assertThat(r.nearFieldLengthMm()).isGreaterThan(10.0);
             assertThat(r.beamDiameter6dbMm()).isEmpty();
             assertThat(codes(r)).containsExactly("DISTANCE_IN_NEAR_FIELD");
@@ -284,10 +287,10 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("just inside the near field the beam diameter is null too; at the near-field end it exists")
         void distanceInsideNearFieldWarns() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withDistanceMm(15.0));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0).distanceMm(15.0).build());
             assertThat(r.beamDiameter6dbMm()).isEmpty();
-            PulseResult atEnd = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0)
-                    .withDistanceMm(100.0 / (4 * WAVELENGTH_MM)));
+            PulseResult atEnd = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0)
+                    .distanceMm(100.0 / (4 * WAVELENGTH_MM)).build());
             assertThat(atEnd.beamDiameter6dbMm()).isPresent();
             assertThat(codes(r)).containsExactly("DISTANCE_IN_NEAR_FIELD");
             assertThat(r.warnings().get(0).message()).contains("distance_mm");
@@ -296,14 +299,14 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("behind a wedge the distance is compared with the near field left in the part")
         void distanceBehindWedgeIsComparedWithNearFieldInPart() {
-            PulseInput wedge = FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withWedgePathMm(10.0)
-                    .withWedgeVelocityMPerS(WEDGE_M_PER_S);
+            PulseInput wedge = FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0).wedgePathMm(10.0)
+                    .wedgeVelocityMPerS(WEDGE_M_PER_S).build();
             // N = 21.11 mm, N in part = 21.11 - 10 x 2730/5920 = 16.50 mm
-            PulseResult beyond = compute(wedge.withDistanceMm(18.0));
+            PulseResult beyond = compute(wedge.toBuilder().distanceMm(18.0).build());
             assertThat(beyond.nearFieldInPartMm()).isCloseTo(100.0 / (4 * WAVELENGTH_MM) - 10.0 * 2730 / 5920,
                     within(1e-12));
             assertThat(beyond.warnings()).isEmpty();
-            PulseResult inside = compute(wedge.withDistanceMm(15.0));
+            PulseResult inside = compute(wedge.toBuilder().distanceMm(15.0).build());
             assertThat(codes(inside)).containsExactly("DISTANCE_IN_NEAR_FIELD");
             assertThat(inside.warnings().get(0).message()).contains("left in the part");
         }
@@ -311,8 +314,8 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("a wedge longer than the near field leaves a negative near field in the part, with a warning")
         void longWedgeLeavesOnlyFarField() {
-            PulseResult r = compute(FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withWedgePathMm(50.0)
-                    .withWedgeVelocityMPerS(WEDGE_M_PER_S));
+            PulseResult r = compute(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0).wedgePathMm(50.0)
+                    .wedgeVelocityMPerS(WEDGE_M_PER_S).build());
             assertThat(r.nearFieldInPartMm()).isNegative();
             assertThat(codes(r)).containsExactly("PART_IN_FAR_FIELD_ONLY");
         }
@@ -323,8 +326,8 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("refracted angle by Snell's law with the part's velocity of the chosen mode (steel shear 3255 m/s)")
         void refractedAngleUsesPartVelocity() {
-            PulseResult r = compute(PulseInput.of(5.0, STEEL_SHEAR_M_PER_S).withWedgeVelocityMPerS(WEDGE_M_PER_S)
-                    .withIncidentAngleDeg(36.0));
+            PulseResult r = compute(PulseInput.builder(5.0, STEEL_SHEAR_M_PER_S).wedgeVelocityMPerS(WEDGE_M_PER_S)
+                    .incidentAngleDeg(36.0).build());
             double expected = Math.toDegrees(Math.asin(Math.sin(Math.toRadians(36.0)) * 3255.0 / 2730.0));
             assertThat(r.refractedAngleDeg().orElseThrow()).isCloseTo(expected, within(1e-9));
             assertThat(r.warnings()).isEmpty();
@@ -334,8 +337,8 @@ class PulseCalculatorTest {
         @Test
         @DisplayName("past the critical angle (asin(2730/3255) = 57.0 deg) the refracted angle is empty, with a warning naming it")
         void pastCriticalAngleIsEmptyWithWarning() {
-            PulseResult r = compute(PulseInput.of(5.0, STEEL_SHEAR_M_PER_S).withWedgeVelocityMPerS(WEDGE_M_PER_S)
-                    .withIncidentAngleDeg(60.0));
+            PulseResult r = compute(PulseInput.builder(5.0, STEEL_SHEAR_M_PER_S).wedgeVelocityMPerS(WEDGE_M_PER_S)
+                    .incidentAngleDeg(60.0).build());
             assertThat(r.refractedAngleDeg()).isEmpty();
             assertThat(codes(r)).containsExactly("PAST_CRITICAL_ANGLE");
             assertThat(r.warnings().get(0).message()).contains("incident_angle_deg", "critical angle 57 deg");
@@ -356,34 +359,37 @@ class PulseCalculatorTest {
 
         @Test
         void conventionWithoutBandwidthIsNotApplicable() {
-            assertNotApplicable(FIVE_MHZ_STEEL.withCentreFrequencyConvention(CentreFrequencyConvention.GEOMETRIC),
+            assertNotApplicable(FIVE_MHZ_STEEL.toBuilder()
+                    .centreFrequencyConvention(CentreFrequencyConvention.GEOMETRIC).build(),
                     "centre_frequency_convention");
         }
 
         @Test
         void distanceWithoutDiameterIsNotApplicable() {
-            assertNotApplicable(FIVE_MHZ_STEEL.withDistanceMm(50.0), "distance_mm");
+            assertNotApplicable(FIVE_MHZ_STEEL.toBuilder().distanceMm(50.0).build(), "distance_mm");
         }
 
         @Test
         void wedgePathWithoutWedgeVelocityIsNotApplicable() {
-            assertNotApplicable(FIVE_MHZ_STEEL.withElementDiameterMm(10.0).withWedgePathMm(10.0), "wedge_path_mm");
+            assertNotApplicable(FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(10.0).wedgePathMm(10.0)
+                    .build(), "wedge_path_mm");
         }
 
         @Test
         void wedgePathWithoutDiameterIsNotApplicable() {
-            assertNotApplicable(FIVE_MHZ_STEEL.withWedgePathMm(10.0).withWedgeVelocityMPerS(WEDGE_M_PER_S),
+            assertNotApplicable(FIVE_MHZ_STEEL.toBuilder().wedgePathMm(10.0).wedgeVelocityMPerS(WEDGE_M_PER_S).build(),
                     "wedge_path_mm");
         }
 
         @Test
         void incidentAngleWithoutWedgeVelocityIsNotApplicable() {
-            assertNotApplicable(FIVE_MHZ_STEEL.withIncidentAngleDeg(30.0), "incident_angle_deg");
+            assertNotApplicable(FIVE_MHZ_STEEL.toBuilder().incidentAngleDeg(30.0).build(), "incident_angle_deg");
         }
 
         @Test
         void wedgeVelocityAloneIsNotApplicable() {
-            assertNotApplicable(FIVE_MHZ_STEEL.withWedgeVelocityMPerS(WEDGE_M_PER_S), "wedge_velocity_m_per_s");
+            assertNotApplicable(FIVE_MHZ_STEEL.toBuilder().wedgeVelocityMPerS(WEDGE_M_PER_S)
+                    .build(), "wedge_velocity_m_per_s");
         }
     }
 
@@ -409,18 +415,18 @@ class PulseCalculatorTest {
 
         @Test
         void bandwidthOfTwoHundredPercentIsInvalid() {
-            assertInvalid(() -> FIVE_MHZ_STEEL.withBandwidthPercent(200.0), "bandwidth_percent");
-            assertInvalid(() -> FIVE_MHZ_STEEL.withBandwidthPercent(0.0), "bandwidth_percent");
+            assertInvalid(() -> FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(200.0).build(), "bandwidth_percent");
+            assertInvalid(() -> FIVE_MHZ_STEEL.toBuilder().bandwidthPercent(0.0).build(), "bandwidth_percent");
         }
 
         @Test
         void negativeDiameterIsInvalid() {
-            assertInvalid(() -> FIVE_MHZ_STEEL.withElementDiameterMm(-1.0), "element_diameter_mm");
+            assertInvalid(() -> FIVE_MHZ_STEEL.toBuilder().elementDiameterMm(-1.0).build(), "element_diameter_mm");
         }
 
         @Test
         void ninetyDegreeIncidenceIsInvalid() {
-            assertInvalid(() -> FIVE_MHZ_STEEL.withIncidentAngleDeg(90.0), "incident_angle_deg");
+            assertInvalid(() -> FIVE_MHZ_STEEL.toBuilder().incidentAngleDeg(90.0).build(), "incident_angle_deg");
         }
     }
 }

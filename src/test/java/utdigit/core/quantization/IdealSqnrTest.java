@@ -32,7 +32,7 @@ class IdealSqnrTest {
     void idealSqnrMatchesKesterRule(int bitDepth) {
         double kester = 6.02 * bitDepth + 1.76;
 
-        double sqnr = QuantizationCalculator.compute(QuantizationInput.ofBitDepth(bitDepth)).idealSqnrDb().orElseThrow();
+        double sqnr = QuantizationCalculator.compute(QuantizationInput.of(bitDepth)).idealSqnrDb().orElseThrow();
 
         assertThat(sqnr).isCloseTo(kester,
                 within(MT001_ROUNDING_DB_PER_BIT * bitDepth + MT001_ROUNDING_OFFSET_DB));
@@ -62,15 +62,16 @@ class IdealSqnrTest {
 
     @Test
     void idealSqnrDoesNotDependOnTheCodeMapping() {
-        QuantizationInput in = QuantizationInput.ofBitDepth(8);
-        assertThat(QuantizationCalculator.compute(in.withCodeMapping(CodeMapping.MAX_CODE)).idealSqnrDb())
+        QuantizationInput in = QuantizationInput.of(8);
+        assertThat(QuantizationCalculator.compute(in.toBuilder().codeMapping(CodeMapping.MAX_CODE)
+                .build()).idealSqnrDb())
                 .isEqualTo(QuantizationCalculator.compute(in).idealSqnrDb());
     }
 
     @Test
     void idealSqnrOfRectifiedDataIsNullWithAWarning() {
         QuantizationResult r = QuantizationCalculator.compute(
-                QuantizationInput.ofBitDepth(8).withDigitizedSignal(DigitizedSignal.RECTIFIED));
+                QuantizationInput.builder(8).digitizedSignal(DigitizedSignal.RECTIFIED).build());
 
         assertThat(r.idealSqnrDb()).isEmpty();
         assertThat(r.hasWarning(QuantizationCalculator.IDEAL_SQNR_NOT_APPLICABLE)).isTrue();
@@ -82,7 +83,7 @@ class IdealSqnrTest {
     }
 
     private static double sqnr(int bitDepth) {
-        return QuantizationCalculator.compute(QuantizationInput.ofBitDepth(bitDepth)).idealSqnrDb().orElseThrow();
+        return QuantizationCalculator.compute(QuantizationInput.of(bitDepth)).idealSqnrDb().orElseThrow();
     }
 
     /**

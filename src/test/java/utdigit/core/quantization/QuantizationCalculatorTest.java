@@ -42,8 +42,8 @@ class QuantizationCalculatorTest {
         @CsvFileSource(resources = "/reference/quantization-lsb.csv")
         void levelsAndLsbMatchClosedForms(int bitDepth, DigitizedSignal signal, CodeMapping mapping, long levels,
                 double lsbNumeratorPercentFsh, double lsbDenominator) {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(bitDepth)
-                    .withDigitizedSignal(signal).withCodeMapping(mapping));
+            QuantizationResult r = compute(QuantizationInput.builder(bitDepth)
+                    .digitizedSignal(signal).codeMapping(mapping).build());
 
             assertThat(r.levels()).isEqualTo(levels);
             assertThat(r.lsbPercentFsh())
@@ -53,12 +53,12 @@ class QuantizationCalculatorTest {
 
         @Test
         void thirtyTwoBitsGiveTwoToTheThirtySecondLevelsWithoutOverflow() {
-            assertThat(compute(QuantizationInput.ofBitDepth(32)).levels()).isEqualTo(4_294_967_296L);
+            assertThat(compute(QuantizationInput.of(32)).levels()).isEqualTo(4_294_967_296L);
         }
 
         @Test
         void defaultsAreRfRoundingFsrOver2nAndNoGain() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8));
+            QuantizationResult r = compute(QuantizationInput.of(8));
 
             assertThat(r.digitizedSignal()).isEqualTo(DigitizedSignal.RF);
             assertThat(r.quantizer()).isEqualTo(Quantizer.ROUNDING);
@@ -70,20 +70,22 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("dynamic range is full screen to one LSB: 8-bit RF 20 log10(128), RECTIFIED 20 log10(256) (definition)")
         void dynamicRangeIsFullScreenOverOneLsb() {
-            assertThat(compute(QuantizationInput.ofBitDepth(8)).dynamicRangeDb())
+            assertThat(compute(QuantizationInput.of(8)).dynamicRangeDb())
                     .isCloseTo(20 * Math.log10(128), within(ALLOWED_ERROR_DB));
-            assertThat(compute(QuantizationInput.ofBitDepth(8).withDigitizedSignal(DigitizedSignal.RECTIFIED))
+            assertThat(compute(QuantizationInput.builder(8).digitizedSignal(DigitizedSignal.RECTIFIED).build())
                     .dynamicRangeDb()).isCloseTo(20 * Math.log10(256), within(ALLOWED_ERROR_DB));
         }
 
         @Test
         @DisplayName("MAX_CODE LSB is 128/127 of FSR_OVER_2N for 8-bit RF (about 0.8 %) and 256/255 for RECTIFIED (about 0.4 %)")
         void codeMappingsDifferByTheLargestCodeRatio() {
-            double rfFsr = compute(QuantizationInput.ofBitDepth(8)).lsbPercentFsh();
-            double rfMax = compute(QuantizationInput.ofBitDepth(8).withCodeMapping(CodeMapping.MAX_CODE)).lsbPercentFsh();
-            QuantizationInput rectified = QuantizationInput.ofBitDepth(8).withDigitizedSignal(DigitizedSignal.RECTIFIED);
+            double rfFsr = compute(QuantizationInput.of(8)).lsbPercentFsh();
+            double rfMax = compute(QuantizationInput.builder(8).codeMapping(CodeMapping.MAX_CODE)
+                    .build()).lsbPercentFsh();
+            QuantizationInput rectified = QuantizationInput.builder(8).digitizedSignal(DigitizedSignal.RECTIFIED)
+                    .build();
             double recFsr = compute(rectified).lsbPercentFsh();
-            double recMax = compute(rectified.withCodeMapping(CodeMapping.MAX_CODE)).lsbPercentFsh();
+            double recMax = compute(rectified.toBuilder().codeMapping(CodeMapping.MAX_CODE).build()).lsbPercentFsh();
 
             assertThat(rfMax / rfFsr).isCloseTo(128.0 / 127.0, within(ALLOWED_RELATIVE_ERROR));
             assertThat(recMax / recFsr).isCloseTo(256.0 / 255.0, within(ALLOWED_RELATIVE_ERROR));
@@ -95,9 +97,9 @@ class QuantizationCalculatorTest {
         @ValueSource(ints = {2, 4, 8, 12, 16, 24, 32})
         @DisplayName("RF has one bit less dynamic range than RECTIFIED: 20 log10(2) = 6.02 dB (derived from FSR 200 vs 100 %FSH)")
         void rfAndRectifiedDifferByOneBitOfDynamicRange(int bitDepth) {
-            double rf = compute(QuantizationInput.ofBitDepth(bitDepth)).dynamicRangeDb();
-            double rectified = compute(QuantizationInput.ofBitDepth(bitDepth)
-                    .withDigitizedSignal(DigitizedSignal.RECTIFIED)).dynamicRangeDb();
+            double rf = compute(QuantizationInput.of(bitDepth)).dynamicRangeDb();
+            double rectified = compute(QuantizationInput.builder(bitDepth)
+                    .digitizedSignal(DigitizedSignal.RECTIFIED).build()).dynamicRangeDb();
 
             assertThat(rectified - rf).isCloseTo(20 * Math.log10(2), within(ALLOWED_ERROR_DB));
         }
@@ -106,9 +108,10 @@ class QuantizationCalculatorTest {
         @ValueSource(ints = {8, 12, 16, 32})
         @DisplayName("with MAX_CODE RF and RECTIFIED differ by 20 log10((2^N - 1)/(2^(N-1) - 1)), about 6.02 dB")
         void rfAndRectifiedDifferByAboutOneBitWithMaxCode(int bitDepth) {
-            QuantizationInput maxCode = QuantizationInput.ofBitDepth(bitDepth).withCodeMapping(CodeMapping.MAX_CODE);
+            QuantizationInput maxCode = QuantizationInput.builder(bitDepth).codeMapping(CodeMapping.MAX_CODE).build();
             double rf = compute(maxCode).dynamicRangeDb();
-            double rectified = compute(maxCode.withDigitizedSignal(DigitizedSignal.RECTIFIED)).dynamicRangeDb();
+            double rectified = compute(maxCode.toBuilder().digitizedSignal(DigitizedSignal.RECTIFIED)
+                    .build()).dynamicRangeDb();
             double largestRectifiedCode = Math.pow(2, bitDepth) - 1;
             double largestRfCode = Math.pow(2, bitDepth - 1) - 1;
 
@@ -123,7 +126,7 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("ROUNDING at 50 %FSH, 8-bit RF: +/- LSB/2 (W. Kester, MT-001, from memory)")
         void roundingReadsWithinHalfAnLsb() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withSignalHeightPercentFsh(50.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).signalHeightPercentFsh(50.0).build());
             double halfLsb = LSB_8_BIT_RF_PERCENT_FSH / 2;
 
             assertThat(r.amplitudeErrorOverDb()).isCloseTo(db((50 + halfLsb) / 50), within(ALLOWED_ERROR_DB));
@@ -136,8 +139,8 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("TRUNCATION of RF: positive peaks up to 1 LSB low, negative half-waves up to 1 LSB high (floor, derived)")
         void truncationOfRfReadsWithinOneLsbEitherWay() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withQuantizer(Quantizer.TRUNCATION)
-                    .withSignalHeightPercentFsh(50.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).quantizer(Quantizer.TRUNCATION)
+                    .signalHeightPercentFsh(50.0).build());
             double lsb = LSB_8_BIT_RF_PERCENT_FSH;
 
             assertThat(r.amplitudeErrorOverDb()).isCloseTo(db((50 + lsb) / 50), within(ALLOWED_ERROR_DB));
@@ -147,8 +150,8 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("TRUNCATION of RECTIFIED data never reads high (floor of s >= 0, derived)")
         void truncationOfRectifiedNeverReadsHigh() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withQuantizer(Quantizer.TRUNCATION)
-                    .withDigitizedSignal(DigitizedSignal.RECTIFIED).withSignalHeightPercentFsh(50.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).quantizer(Quantizer.TRUNCATION)
+                    .digitizedSignal(DigitizedSignal.RECTIFIED).signalHeightPercentFsh(50.0).build());
             double lsb = 100.0 / 256.0;
 
             assertThat(r.amplitudeErrorOverDb()).isEqualTo(0.0);
@@ -159,9 +162,10 @@ class QuantizationCalculatorTest {
         @ValueSource(doubles = {5.0, 20.0, 80.0})
         @DisplayName("TRUNCATION errs about twice as far below as ROUNDING (bound LSB vs LSB/2, derived)")
         void truncationErrsAboutTwiceAsFarBelowAsRounding(double heightPercentFsh) {
-            QuantizationInput in = QuantizationInput.ofBitDepth(10).withSignalHeightPercentFsh(heightPercentFsh);
+            QuantizationInput in = QuantizationInput.builder(10).signalHeightPercentFsh(heightPercentFsh).build();
             double rounding = compute(in).amplitudeErrorUnderDb().orElseThrow();
-            double truncation = compute(in.withQuantizer(Quantizer.TRUNCATION)).amplitudeErrorUnderDb().orElseThrow();
+            double truncation = compute(in.toBuilder().quantizer(Quantizer.TRUNCATION)
+                    .build()).amplitudeErrorUnderDb().orElseThrow();
 
             assertThat(truncation).isLessThan(rounding);
             // for small LSB/h, 20 log10(1 - e) ~ -8.686 e: twice the bound, about twice the dB
@@ -170,8 +174,8 @@ class QuantizationCalculatorTest {
 
         @Test
         void underErrorDoesNotExistWhenTheHeightIsWithinHalfAnLsbOfZero() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8)
-                    .withSignalHeightPercentFsh(LSB_8_BIT_RF_PERCENT_FSH / 2));
+            QuantizationResult r = compute(QuantizationInput.builder(8)
+                    .signalHeightPercentFsh(LSB_8_BIT_RF_PERCENT_FSH / 2).build());
 
             assertThat(r.amplitudeErrorUnderDb()).isEmpty();
             assertThat(r.hasWarning(QuantizationCalculator.AMPLITUDE_ERROR_UNDER_UNDEFINED)).isTrue();
@@ -181,8 +185,8 @@ class QuantizationCalculatorTest {
 
         @Test
         void underErrorOfTruncationDoesNotExistAtOneLsb() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withQuantizer(Quantizer.TRUNCATION)
-                    .withSignalHeightPercentFsh(LSB_8_BIT_RF_PERCENT_FSH));
+            QuantizationResult r = compute(QuantizationInput.builder(8).quantizer(Quantizer.TRUNCATION)
+                    .signalHeightPercentFsh(LSB_8_BIT_RF_PERCENT_FSH).build());
 
             assertThat(r.amplitudeErrorUnderDb()).isEmpty();
             assertThat(r.hasWarning(QuantizationCalculator.AMPLITUDE_ERROR_UNDER_UNDEFINED)).isTrue();
@@ -190,7 +194,7 @@ class QuantizationCalculatorTest {
 
         @Test
         void heightBelowOneLsbWarnsButKeepsAFiniteUnderErrorAboveHalfAnLsb() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withSignalHeightPercentFsh(0.5));
+            QuantizationResult r = compute(QuantizationInput.builder(8).signalHeightPercentFsh(0.5).build());
 
             assertThat(r.hasWarning(QuantizationCalculator.SIGNAL_HEIGHT_BELOW_ONE_LSB)).isTrue();
             assertThat(r.hasWarning(QuantizationCalculator.AMPLITUDE_ERROR_UNDER_UNDEFINED)).isFalse();
@@ -200,7 +204,7 @@ class QuantizationCalculatorTest {
 
         @Test
         void heightAboveOneLsbRaisesNoHeightWarning() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withSignalHeightPercentFsh(1.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).signalHeightPercentFsh(1.0).build());
 
             assertThat(r.warnings()).isEmpty();
         }
@@ -212,7 +216,7 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("ROUNDING: h_min = (LSB/2)/(1 - 10^(-X/20)) and 20 log10(h_min/100) (src/docs/methods.md 4.3)")
         void roundingMinimumHeightMatchesClosedForm() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withAmplitudeToleranceDb(1.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).amplitudeToleranceDb(1.0).build());
             double expected = (LSB_8_BIT_RF_PERCENT_FSH / 2) / (1 - Math.pow(10, -1.0 / 20));
 
             assertThat(r.minimumHeightPercentFsh()).isCloseTo(expected, within(ALLOWED_RELATIVE_ERROR * expected));
@@ -222,9 +226,10 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("TRUNCATION: h_min = LSB/(1 - 10^(-X/20)), twice the ROUNDING value (src/docs/methods.md 4.3)")
         void truncationMinimumHeightIsTwiceRounding() {
-            QuantizationInput in = QuantizationInput.ofBitDepth(12).withAmplitudeToleranceDb(0.5);
+            QuantizationInput in = QuantizationInput.builder(12).amplitudeToleranceDb(0.5).build();
             double rounding = compute(in).minimumHeightPercentFsh();
-            double truncation = compute(in.withQuantizer(Quantizer.TRUNCATION)).minimumHeightPercentFsh();
+            double truncation = compute(in.toBuilder().quantizer(Quantizer.TRUNCATION)
+                    .build()).minimumHeightPercentFsh();
             double expected = (200.0 / 4096) / (1 - Math.pow(10, -0.5 / 20));
 
             assertThat(truncation).isCloseTo(expected, within(ALLOWED_RELATIVE_ERROR * expected));
@@ -236,10 +241,10 @@ class QuantizationCalculatorTest {
         @DisplayName("the inverse round-trips: the under error at h_min is -X dB")
         void underErrorAtMinimumHeightIsMinusTheTolerance(double toleranceDb) {
             for (Quantizer quantizer : Quantizer.values()) {
-                QuantizationInput in = QuantizationInput.ofBitDepth(16).withQuantizer(quantizer)
-                        .withAmplitudeToleranceDb(toleranceDb);
+                QuantizationInput in = QuantizationInput.builder(16).quantizer(quantizer)
+                        .amplitudeToleranceDb(toleranceDb).build();
                 double minimumHeight = compute(in).minimumHeightPercentFsh();
-                QuantizationResult atMinimum = compute(in.withSignalHeightPercentFsh(minimumHeight));
+                QuantizationResult atMinimum = compute(in.toBuilder().signalHeightPercentFsh(minimumHeight).build());
 
                 assertThat(atMinimum.amplitudeErrorUnderDb().orElseThrow())
                         .as("%s", quantizer).isCloseTo(-toleranceDb, within(ALLOWED_ERROR_DB));
@@ -249,19 +254,19 @@ class QuantizationCalculatorTest {
 
         @Test
         void signalHeightBelowTheMinimumWarns() {
-            QuantizationInput in = QuantizationInput.ofBitDepth(8).withAmplitudeToleranceDb(1.0);
+            QuantizationInput in = QuantizationInput.builder(8).amplitudeToleranceDb(1.0).build();
             double minimumHeight = compute(in).minimumHeightPercentFsh();
 
-            assertThat(compute(in.withSignalHeightPercentFsh(minimumHeight * 0.99))
+            assertThat(compute(in.toBuilder().signalHeightPercentFsh(minimumHeight * 0.99).build())
                     .hasWarning(QuantizationCalculator.SIGNAL_HEIGHT_BELOW_MINIMUM)).isTrue();
-            assertThat(compute(in.withSignalHeightPercentFsh(minimumHeight * 1.01))
+            assertThat(compute(in.toBuilder().signalHeightPercentFsh(minimumHeight * 1.01).build())
                     .hasWarning(QuantizationCalculator.SIGNAL_HEIGHT_BELOW_MINIMUM)).isFalse();
         }
 
         @Test
         void minimumHeightAboveFullScreenIsReturnedWithAWarning() {
             // 1-bit RF: LSB 100 %FSH, h_min = 50/(1 - 10^(-1/20)) = 460 %FSH
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(1).withAmplitudeToleranceDb(1.0));
+            QuantizationResult r = compute(QuantizationInput.builder(1).amplitudeToleranceDb(1.0).build());
 
             assertThat(r.minimumHeightPercentFsh()).isCloseTo(50 / (1 - Math.pow(10, -1.0 / 20)), within(1e-9));
             assertThat(r.minimumHeightDb()).isPositive();
@@ -270,7 +275,7 @@ class QuantizationCalculatorTest {
 
         @Test
         void minimumHeightOnScreenRaisesNoWarning() {
-            assertThat(compute(QuantizationInput.ofBitDepth(8).withAmplitudeToleranceDb(1.0)).warnings()).isEmpty();
+            assertThat(compute(QuantizationInput.builder(8).amplitudeToleranceDb(1.0).build()).warnings()).isEmpty();
         }
     }
 
@@ -280,7 +285,8 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("evaluation height h_ref 10^(L/20): 80 %FSH at -14 dB (definition of a dB level)")
         void evaluationHeightIsReferenceTimesLevel() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withEvaluation(80.0, -14.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).referenceHeightPercentFsh(80.0)
+                    .evaluationLevelDb(-14.0).build());
             double expected = 80 * Math.pow(10, -14.0 / 20);
 
             assertThat(r.evaluationHeightPercentFsh()).isCloseTo(expected, within(ALLOWED_RELATIVE_ERROR * expected));
@@ -292,7 +298,8 @@ class QuantizationCalculatorTest {
         @Test
         void evaluationHeightBelowOneLsbWarns() {
             // 80 10^(-42/20) = 0.635 %FSH < 0.78125 %FSH
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withEvaluation(80.0, -42.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).referenceHeightPercentFsh(80.0)
+                    .evaluationLevelDb(-42.0).build());
 
             assertThat(r.hasWarning(QuantizationCalculator.EVALUATION_HEIGHT_BELOW_ONE_LSB)).isTrue();
             assertThat(r.evaluationErrorUnderDb()).isPresent();
@@ -300,7 +307,8 @@ class QuantizationCalculatorTest {
 
         @Test
         void evaluationErrorDoesNotExistWithinHalfAnLsbOfZero() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withEvaluation(50.0, -80.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).referenceHeightPercentFsh(50.0)
+                    .evaluationLevelDb(-80.0).build());
 
             assertThat(r.evaluationErrorUnderDb()).isEmpty();
             assertThat(r.hasWarning(QuantizationCalculator.EVALUATION_ERROR_UNDER_UNDEFINED)).isTrue();
@@ -309,8 +317,9 @@ class QuantizationCalculatorTest {
         @Test
         void evaluationHeightBelowTheMinimumForTheToleranceWarns() {
             // 8-bit RF, 1 dB: h_min = 3.59 %FSH; 80 %FSH at -30 dB is 2.53 %FSH
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withAmplitudeToleranceDb(1.0)
-                    .withEvaluation(80.0, -30.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).amplitudeToleranceDb(1.0)
+                    .referenceHeightPercentFsh(80.0)
+                    .evaluationLevelDb(-30.0).build());
 
             assertThat(r.hasWarning(QuantizationCalculator.EVALUATION_HEIGHT_BELOW_MINIMUM)).isTrue();
             assertThat(r.evaluationErrorUnderDb().orElseThrow()).isLessThan(-1.0);
@@ -319,8 +328,9 @@ class QuantizationCalculatorTest {
         @Test
         void evaluationHeightLiftedOffScreenByGainIsKeptWithAWarning() {
             // +6 dB soft gain: 80 %FSH displayed at +6 dB is 159.6 %FSH displayed, 80 %FSH at the converter
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withDigitalGainDb(6.0)
-                    .withEvaluation(80.0, 6.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).digitalGainDb(6.0)
+                    .referenceHeightPercentFsh(80.0)
+                    .evaluationLevelDb(6.0).build());
 
             assertThat(r.evaluationHeightPercentFsh()).isCloseTo(80 * Math.pow(10, 0.3), within(1e-9));
             assertThat(r.hasWarning(QuantizationCalculator.EVALUATION_HEIGHT_ABOVE_FULL_SCREEN)).isTrue();
@@ -333,11 +343,11 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("soft gain of 20 dB makes the displayed LSB ten times larger (definition of 20 dB)")
         void gainScalesTheDisplayedLsb() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withDigitalGainDb(20.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).digitalGainDb(20.0).build());
 
             assertThat(r.lsbPercentFsh()).isCloseTo(10 * LSB_8_BIT_RF_PERCENT_FSH, within(1e-12));
             assertThat(r.dynamicRangeDb()).isCloseTo(20 * Math.log10(128) - 20, within(ALLOWED_ERROR_DB));
-            assertThat(r.idealSqnrDb()).isEqualTo(compute(QuantizationInput.ofBitDepth(8)).idealSqnrDb());
+            assertThat(r.idealSqnrDb()).isEqualTo(compute(QuantizationInput.of(8)).idealSqnrDb());
         }
 
         @Test
@@ -345,7 +355,7 @@ class QuantizationCalculatorTest {
         void negativeGainDoesNotRaiseTheDynamicRange() {
             // -12 dB shrinks the displayed LSB to a quarter, but also the largest reachable height to 25 %FSH:
             // from there to one displayed LSB is still 128 LSB, 42.14 dB (derived from the definition).
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withDigitalGainDb(-12.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).digitalGainDb(-12.0).build());
             assertThat(r.lsbPercentFsh()).isCloseTo(LSB_8_BIT_RF_PERCENT_FSH * Math.pow(10, -12.0 / 20), within(1e-12));
             double reachablePercentFsh = 100.0 * Math.pow(10, -12.0 / 20);
             assertThat(r.dynamicRangeDb()).isCloseTo(20 * Math.log10(reachablePercentFsh / r.lsbPercentFsh()),
@@ -358,8 +368,8 @@ class QuantizationCalculatorTest {
             double gainDb = 6.0;
             double fullScaleDisplayed = 100 * Math.pow(10, gainDb / 20);
 
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withDigitalGainDb(gainDb)
-                    .withSignalHeightPercentFsh(fullScaleDisplayed));
+            QuantizationResult r = compute(QuantizationInput.builder(8).digitalGainDb(gainDb)
+                    .signalHeightPercentFsh(fullScaleDisplayed).build());
 
             assertThat(r.amplitudeErrorOverDb()).isPositive();
         }
@@ -371,7 +381,7 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("averaging M gives 10 log10(M): 4 acquisitions 6.02 dB (uncorrelated noise power / M)")
         void averagingGainIsTenLogM() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withAveraging(4));
+            QuantizationResult r = compute(QuantizationInput.builder(8).averaging(4).build());
 
             assertThat(r.averagingSnrGainDb()).isCloseTo(10 * Math.log10(4), within(ALLOWED_ERROR_DB));
             assertThat(r.hasWarning(QuantizationCalculator.AVERAGING_NOISE_ONLY)).isTrue();
@@ -379,15 +389,15 @@ class QuantizationCalculatorTest {
 
         @Test
         void averagingOneAcquisitionGainsNothing() {
-            assertThat(compute(QuantizationInput.ofBitDepth(8).withAveraging(1)).averagingSnrGainDb()).isZero();
+            assertThat(compute(QuantizationInput.builder(8).averaging(1).build()).averagingSnrGainDb()).isZero();
         }
 
         @Test
         void averagingDoesNotChangeTheQuantizationFigures() {
-            QuantizationInput in = QuantizationInput.ofBitDepth(8).withSignalHeightPercentFsh(10.0)
-                    .withAmplitudeToleranceDb(1.0);
+            QuantizationInput in = QuantizationInput.builder(8).signalHeightPercentFsh(10.0)
+                    .amplitudeToleranceDb(1.0).build();
             QuantizationResult single = compute(in);
-            QuantizationResult averaged = compute(in.withAveraging(256));
+            QuantizationResult averaged = compute(in.toBuilder().averaging(256).build());
 
             assertThat(averaged.lsbPercentFsh()).isEqualTo(single.lsbPercentFsh());
             assertThat(averaged.amplitudeErrorUnderDb()).isEqualTo(single.amplitudeErrorUnderDb());
@@ -400,7 +410,7 @@ class QuantizationCalculatorTest {
 
         @Test
         void resultsOfOptionalInputsNotGivenAreNull() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8));
+            QuantizationResult r = compute(QuantizationInput.of(8));
 
             assertThat(r.amplitudeErrorOverDb()).isNull();
             assertThat(r.amplitudeErrorUnderDb()).isNull();
@@ -414,8 +424,9 @@ class QuantizationCalculatorTest {
 
         @Test
         void everyResultNamesItsReferences() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(8).withSignalHeightPercentFsh(50.0)
-                    .withAmplitudeToleranceDb(1.0).withEvaluation(80.0, -6.0).withAveraging(4).withDigitalGainDb(3.0));
+            QuantizationResult r = compute(QuantizationInput.builder(8).signalHeightPercentFsh(50.0)
+                    .amplitudeToleranceDb(1.0).referenceHeightPercentFsh(80.0).evaluationLevelDb(-6.0).averaging(4)
+                    .digitalGainDb(3.0).build());
 
             assertThat(r.references()).extracting(ref -> ref.topic()).contains("levels", "LSB size", "dynamic range",
                     "ideal SQNR", "amplitude error", "minimum height", "evaluation height", "averaging",
@@ -431,7 +442,7 @@ class QuantizationCalculatorTest {
         @Test
         @DisplayName("MAX_CODE with one bit of RF leaves 2^0 - 1 = 0 positive codes: impossible (422)")
         void maxCodeWithOneBitOfRfIsImpossible() {
-            assertThatThrownBy(() -> compute(QuantizationInput.ofBitDepth(1).withCodeMapping(CodeMapping.MAX_CODE)))
+            assertThatThrownBy(() -> compute(QuantizationInput.builder(1).codeMapping(CodeMapping.MAX_CODE).build()))
                     .isInstanceOfSatisfying(CalculationException.class, e -> {
                         assertThat(e.error()).isEqualTo(CalculationError.IMPOSSIBLE_COMBINATION);
                         assertThat(e.error().category()).isEqualTo(CalculationError.Category.IMPOSSIBLE);
@@ -441,8 +452,8 @@ class QuantizationCalculatorTest {
 
         @Test
         void maxCodeWithOneBitOfRectifiedPutsFullScreenAtCodeOne() {
-            QuantizationResult r = compute(QuantizationInput.ofBitDepth(1).withCodeMapping(CodeMapping.MAX_CODE)
-                    .withDigitizedSignal(DigitizedSignal.RECTIFIED));
+            QuantizationResult r = compute(QuantizationInput.builder(1).codeMapping(CodeMapping.MAX_CODE)
+                    .digitizedSignal(DigitizedSignal.RECTIFIED).build());
 
             assertThat(r.lsbPercentFsh()).isEqualTo(100.0);
         }
@@ -450,55 +461,60 @@ class QuantizationCalculatorTest {
         @Test
         void signalHeightTheConverterCouldNotReachIsImpossible() {
             // -6 dB soft gain: 80 %FSH displayed needs 159.6 %FSH at the converter
-            assertImpossible(QuantizationInput.ofBitDepth(8).withDigitalGainDb(-6.0).withSignalHeightPercentFsh(80.0),
+            assertImpossible(QuantizationInput.builder(8).digitalGainDb(-6.0).signalHeightPercentFsh(80.0).build(),
                     "signal_height_percent_fsh");
-            assertThatThrownBy(() -> compute(QuantizationInput.ofBitDepth(8).withDigitalGainDb(-6.0)
-                    .withSignalHeightPercentFsh(80.0))).isInstanceOfSatisfying(CalculationException.class,
+            assertThatThrownBy(() -> compute(QuantizationInput.builder(8).digitalGainDb(-6.0)
+                    .signalHeightPercentFsh(80.0).build())).isInstanceOfSatisfying(CalculationException.class,
                             e -> assertThat(e.fields()).containsExactly("signal_height_percent_fsh", "digital_gain_db"));
         }
 
         @Test
         void referenceHeightTheConverterCouldNotReachIsImpossible() {
-            assertImpossible(QuantizationInput.ofBitDepth(8).withDigitalGainDb(-6.0).withEvaluation(80.0, -20.0),
+            assertImpossible(QuantizationInput.builder(8).digitalGainDb(-6.0).referenceHeightPercentFsh(80.0)
+                    .evaluationLevelDb(-20.0).build(),
                     "reference_height_percent_fsh");
         }
 
         @Test
         void evaluationHeightTheConverterCouldNotReachIsImpossible() {
             // 80 %FSH at +6 dB is 159.6 %FSH with no gain
-            assertImpossible(QuantizationInput.ofBitDepth(8).withEvaluation(80.0, 6.0), "evaluation_level_db");
-            assertThatThrownBy(() -> compute(QuantizationInput.ofBitDepth(8).withEvaluation(80.0, 6.0)))
+            assertImpossible(QuantizationInput.builder(8).referenceHeightPercentFsh(80.0).evaluationLevelDb(6.0)
+                    .build(), "evaluation_level_db");
+            assertThatThrownBy(() -> compute(QuantizationInput.builder(8).referenceHeightPercentFsh(80.0)
+                    .evaluationLevelDb(6.0).build()))
                     .isInstanceOfSatisfying(CalculationException.class, e -> assertThat(e.fields())
                             .containsExactly("evaluation_level_db", "reference_height_percent_fsh"));
         }
 
         @Test
         void referenceHeightWithoutEvaluationLevelIsNotApplicable() {
-            assertNotApplicable(QuantizationInput.ofBitDepth(8).withEvaluation(80.0, null),
+            assertNotApplicable(QuantizationInput.builder(8).referenceHeightPercentFsh(80.0).build(),
                     "reference_height_percent_fsh");
         }
 
         @Test
         void evaluationLevelWithoutReferenceHeightIsNotApplicable() {
-            assertNotApplicable(QuantizationInput.ofBitDepth(8).withEvaluation(null, -6.0), "evaluation_level_db");
+            assertNotApplicable(QuantizationInput.builder(8).evaluationLevelDb(-6.0).build(), "evaluation_level_db");
         }
 
         @ParameterizedTest(name = "bit_depth {0}")
         @ValueSource(ints = {0, -1, 33, 64})
         void bitDepthOutsideOneToThirtyTwoIsInvalid(int bitDepth) {
-            assertInvalid(QuantizationInput.ofBitDepth(bitDepth), "bit_depth");
+            assertInvalid(QuantizationInput.of(bitDepth), "bit_depth");
         }
 
         @Test
         void nonPositiveOrNanInputsAreInvalid() {
-            assertInvalid(QuantizationInput.ofBitDepth(8).withSignalHeightPercentFsh(0.0), "signal_height_percent_fsh");
-            assertInvalid(QuantizationInput.ofBitDepth(8).withSignalHeightPercentFsh(Double.NaN),
+            assertInvalid(QuantizationInput.builder(8).signalHeightPercentFsh(0.0)
+                    .build(), "signal_height_percent_fsh");
+            assertInvalid(QuantizationInput.builder(8).signalHeightPercentFsh(Double.NaN).build(),
                     "signal_height_percent_fsh");
-            assertInvalid(QuantizationInput.ofBitDepth(8).withAmplitudeToleranceDb(-1.0), "amplitude_tolerance_db");
-            assertInvalid(QuantizationInput.ofBitDepth(8).withDigitalGainDb(Double.NaN), "digital_gain_db");
-            assertInvalid(QuantizationInput.ofBitDepth(8).withEvaluation(80.0, Double.POSITIVE_INFINITY),
+            assertInvalid(QuantizationInput.builder(8).amplitudeToleranceDb(-1.0).build(), "amplitude_tolerance_db");
+            assertInvalid(QuantizationInput.builder(8).digitalGainDb(Double.NaN).build(), "digital_gain_db");
+            assertInvalid(QuantizationInput.builder(8).referenceHeightPercentFsh(80.0)
+                    .evaluationLevelDb(Double.POSITIVE_INFINITY).build(),
                     "evaluation_level_db");
-            assertInvalid(QuantizationInput.ofBitDepth(8).withAveraging(0), "averaging");
+            assertInvalid(QuantizationInput.builder(8).averaging(0).build(), "averaging");
         }
 
         private void assertImpossible(QuantizationInput in, String firstField) {

@@ -25,8 +25,8 @@ class QuantizationPropertiesTest {
     /** The three options that shape the converter, drawn together. */
     record Converter(DigitizedSignal signal, Quantizer quantizer, CodeMapping mapping) {
         QuantizationInput input(int bitDepth) {
-            return QuantizationInput.ofBitDepth(bitDepth).withDigitizedSignal(signal).withQuantizer(quantizer)
-                    .withCodeMapping(mapping);
+            return QuantizationInput.builder(bitDepth).digitizedSignal(signal).quantizer(quantizer)
+                    .codeMapping(mapping).build();
         }
 
         /** MAX_CODE with one bit of RF has no positive code (tested as a failure elsewhere). */
@@ -50,12 +50,12 @@ class QuantizationPropertiesTest {
                 .assuming((c, n, gainDb, h) -> c.exists(n))
                 .checkAssert((c, n, gainDb, heightPercentFsh) -> {
                     QuantizationResult plain = QuantizationCalculator.compute(
-                            c.input(n).withSignalHeightPercentFsh(heightPercentFsh));
+                            c.input(n).toBuilder().signalHeightPercentFsh(heightPercentFsh).build());
                     // the displayed height may exceed 100 %FSH here (the web layer rejects that); the
                     // core accepts any height the converter could record, which is what this property needs
                     double displayed = heightPercentFsh * Math.pow(10, gainDb / 20);
                     QuantizationResult gained = QuantizationCalculator.compute(
-                            c.input(n).withDigitalGainDb(gainDb).withSignalHeightPercentFsh(displayed));
+                            c.input(n).toBuilder().digitalGainDb(gainDb).signalHeightPercentFsh(displayed).build());
 
                     assertThat(gained.dynamicRangeDb())
                             .isCloseTo(plain.dynamicRangeDb() - Math.max(gainDb, 0.0), within(ALLOWED_ERROR_DB));
@@ -76,16 +76,17 @@ class QuantizationPropertiesTest {
                 .forAll(converters(), integers().between(1, 32), doubles().between(0.01, 40), doubles().between(-40, 60))
                 .assuming((c, n, x, g) -> c.exists(n))
                 .checkAssert((c, n, toleranceDb, gainDb) -> {
-                    QuantizationInput in = c.input(n).withDigitalGainDb(gainDb).withAmplitudeToleranceDb(toleranceDb);
+                    QuantizationInput in = c.input(n).toBuilder().digitalGainDb(gainDb)
+                            .amplitudeToleranceDb(toleranceDb).build();
                     double minimumHeight = QuantizationCalculator.compute(in).minimumHeightPercentFsh();
                     double highestRecordable = 100 * Math.min(1, Math.pow(10, gainDb / 20));
                     if (minimumHeight > highestRecordable) {
                         return; // not a valid signal height on this converter (warned about elsewhere)
                     }
                     QuantizationResult atMinimum = QuantizationCalculator.compute(
-                            in.withSignalHeightPercentFsh(minimumHeight));
+                            in.toBuilder().signalHeightPercentFsh(minimumHeight).build());
                     QuantizationResult justBelow = QuantizationCalculator.compute(
-                            in.withSignalHeightPercentFsh(minimumHeight * (1 - 1e-6)));
+                            in.toBuilder().signalHeightPercentFsh(minimumHeight * (1 - 1e-6)).build());
 
                     assertThat(atMinimum.amplitudeErrorUnderDb().orElseThrow()).isCloseTo(-toleranceDb, within(1e-8));
                     assertThat(atMinimum.amplitudeErrorOverDb()).isLessThan(toleranceDb);
@@ -103,9 +104,11 @@ class QuantizationPropertiesTest {
                 .assuming((c, n, h, x) -> c.exists(n))
                 .checkAssert((c, n, heightPercentFsh, toleranceDb) -> {
                     QuantizationResult fewer = QuantizationCalculator.compute(c.input(n)
-                            .withSignalHeightPercentFsh(heightPercentFsh).withAmplitudeToleranceDb(toleranceDb));
+                            .toBuilder().signalHeightPercentFsh(heightPercentFsh).amplitudeToleranceDb(toleranceDb)
+                            .build());
                     QuantizationResult more = QuantizationCalculator.compute(c.input(n + 1)
-                            .withSignalHeightPercentFsh(heightPercentFsh).withAmplitudeToleranceDb(toleranceDb));
+                            .toBuilder().signalHeightPercentFsh(heightPercentFsh).amplitudeToleranceDb(toleranceDb)
+                            .build());
 
                     assertThat(more.amplitudeErrorOverDb()).isLessThanOrEqualTo(fewer.amplitudeErrorOverDb());
                     if (fewer.amplitudeErrorUnderDb().isPresent()) {
@@ -126,7 +129,7 @@ class QuantizationPropertiesTest {
                 .assuming((c, n, h) -> c.exists(n))
                 .checkAssert((c, n, heightPercentFsh) -> {
                     QuantizationResult r = QuantizationCalculator.compute(
-                            c.input(n).withSignalHeightPercentFsh(heightPercentFsh));
+                            c.input(n).toBuilder().signalHeightPercentFsh(heightPercentFsh).build());
 
                     assertThat(r.amplitudeErrorOverDb()).isGreaterThanOrEqualTo(0.0);
                     r.amplitudeErrorUnderDb().ifPresentOrElse(under -> {
@@ -140,9 +143,9 @@ class QuantizationPropertiesTest {
     @DisplayName("RF has one bit less dynamic range than RECTIFIED at every depth (FSR 200 vs 100 %FSH)")
     void rfAndRectifiedDifferByOneBitAtEveryDepth() {
         qt().withFixedSeed(SEED).forAll(integers().between(1, 32)).checkAssert(n -> {
-            double rf = QuantizationCalculator.compute(QuantizationInput.ofBitDepth(n)).dynamicRangeDb();
-            double rectified = QuantizationCalculator.compute(QuantizationInput.ofBitDepth(n)
-                    .withDigitizedSignal(DigitizedSignal.RECTIFIED)).dynamicRangeDb();
+            double rf = QuantizationCalculator.compute(QuantizationInput.of(n)).dynamicRangeDb();
+            double rectified = QuantizationCalculator.compute(QuantizationInput.builder(n)
+                    .digitizedSignal(DigitizedSignal.RECTIFIED).build()).dynamicRangeDb();
             assertThat(rectified - rf).isCloseTo(20 * Math.log10(2), within(ALLOWED_ERROR_DB));
         });
     }

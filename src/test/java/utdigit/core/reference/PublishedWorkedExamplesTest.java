@@ -106,10 +106,10 @@ class PublishedWorkedExamplesTest {
     private static double computed(Example e) {
         return switch (e.quantity()) {
             case "WATER_VELOCITY_M_PER_S" -> WaterVelocity.marczakMPerS(e.p1());
-            case "IDEAL_SQNR_DB" -> QuantizationCalculator.compute(QuantizationInput.ofBitDepth(e.p1().intValue()))
+            case "IDEAL_SQNR_DB" -> QuantizationCalculator.compute(QuantizationInput.of(e.p1().intValue()))
                     .idealSqnrDb().orElseThrow();
-            case "DYNAMIC_RANGE_DB" -> QuantizationCalculator.compute(QuantizationInput.ofBitDepth(e.p1().intValue())
-                    .withDigitizedSignal(DigitizedSignal.RECTIFIED)).dynamicRangeDb();
+            case "DYNAMIC_RANGE_DB" -> QuantizationCalculator.compute(QuantizationInput.builder(e.p1().intValue())
+                    .digitizedSignal(DigitizedSignal.RECTIFIED).build()).dynamicRangeDb();
             case "SINGLE_INSTANT_UNCERTAINTY_NS" ->
                     SampleClock.of(1000.0 / e.p1(), 1, DecimationMode.DROP).singleInstantStandardUncertaintyNs();
             case "DIFFERENCE_UNCERTAINTY_NS" -> SampleClock.of(1000.0 / e.p1(), 1, DecimationMode.DROP).differenceStandardUncertaintyNs();
@@ -130,7 +130,7 @@ class PublishedWorkedExamplesTest {
         double a = Math.pow(Math.PI * 5.0 * 0.6, 2) / (4.0 * Math.log(Math.pow(10.0, 6.0 / 20.0)));
         double sigmaMhz = Math.sqrt(a) / (2.0 * Math.PI);
         double fsMhz = 2.0 * z * sigmaMhz * Math.sqrt(2.0);
-        return SamplingCalculator.compute(SamplingInput.of(fsMhz, 5.0).withBandwidthPercent(60.0)
-                .withSignal(SampledSignal.ENVELOPE)).energyAboveNyquistFraction();
+        return SamplingCalculator.compute(SamplingInput.builder(fsMhz, 5.0).bandwidthPercent(60.0)
+                .signal(SampledSignal.ENVELOPE).build()).energyAboveNyquistFraction();
     }
 }

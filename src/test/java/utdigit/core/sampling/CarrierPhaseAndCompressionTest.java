@@ -63,7 +63,8 @@ class CarrierPhaseAndCompressionTest {
     void narrowBandsAndFewSamplesCostMore() {
         assertThat(extraCostOfCarrierPhaseDb(0.2, 5.3)).isBetween(0.15, 0.3);
         assertThat(extraCostOfCarrierPhaseDb(0.4, 2.8)).isBetween(0.6, 0.9);
-        assertThat(SamplingCalculator.compute(SamplingInput.of(25.0, 5.0).withBandwidthPercent(30.0)).references())
+        assertThat(SamplingCalculator.compute(SamplingInput.builder(25.0, 5.0).bandwidthPercent(30.0)
+                .build()).references())
                 .anySatisfy(ref -> assertThat(ref.id()).isEqualTo(utdigit.core.common.Sources.PULSE_SAMPLING_LOSS.id()));
         assertThat(utdigit.core.common.Sources.PULSE_SAMPLING_LOSS.checkNote())
                 .contains("carrier phase", "0.05 dB", "0.3 dB", "0.8 dB");
@@ -74,27 +75,33 @@ class CarrierPhaseAndCompressionTest {
     void compressedDataAliasingIsWarned() {
         // 5 MHz, 60 %: fu = 6.5 MHz. 100 MHz / 8 = 12.5 MHz, aliasing above 6.25 MHz < 6.5 MHz: warned,
         // though the amplitude figures (at the raw 100 MHz) are fine.
-        SamplingInput base = SamplingInput.of(100.0, 5.0).withBandwidthPercent(60.0);
-        SamplingResult eight = SamplingCalculator.compute(base.withDecimation(8, DecimationMode.PEAK_PRESERVING));
+        SamplingInput base = SamplingInput.builder(100.0, 5.0).bandwidthPercent(60.0).build();
+        SamplingResult eight = SamplingCalculator.compute(base.toBuilder().decimationFactor(8)
+                .decimationMode(DecimationMode.PEAK_PRESERVING).build());
         assertThat(eight.hasWarning(SamplingCalculator.COMPRESSED_DATA_ALIASING)).isTrue();
         assertThat(eight.hasWarning(SamplingCalculator.BAND_ALIASING)).isFalse();
         assertThat(eight.warnings()).filteredOn(w -> w.code().equals(SamplingCalculator.COMPRESSED_DATA_ALIASING))
                 .singleElement().satisfies(w -> assertThat(w.message()).contains("6.25 MHz", "6.5 MHz"));
         // 100 MHz / 7 = 14.29 MHz, aliasing above 7.14 MHz: the -6 dB band stays below it
-        assertThat(SamplingCalculator.compute(base.withDecimation(7, DecimationMode.PEAK_PRESERVING))
+        assertThat(SamplingCalculator.compute(base.toBuilder().decimationFactor(7)
+                .decimationMode(DecimationMode.PEAK_PRESERVING).build())
                 .hasWarning(SamplingCalculator.COMPRESSED_DATA_ALIASING)).isFalse();
         // DROP by 8 says it through BAND_ALIASING (every figure follows fs/m), not this warning
-        SamplingResult drop = SamplingCalculator.compute(base.withDecimation(8, DecimationMode.DROP));
+        SamplingResult drop = SamplingCalculator.compute(base.toBuilder().decimationFactor(8)
+                .decimationMode(DecimationMode.DROP).build());
         assertThat(drop.hasWarning(SamplingCalculator.COMPRESSED_DATA_ALIASING)).isFalse();
         assertThat(drop.hasWarning(SamplingCalculator.BAND_ALIASING)).isTrue();
         // without a bandwidth the nominal frequency decides: 100 / 24 = 4.17 MHz, aliasing above 2.08 MHz < 5 MHz
-        assertThat(SamplingCalculator.compute(SamplingInput.of(100.0, 5.0).withDecimation(24,
-                DecimationMode.PEAK_PRESERVING)).hasWarning(SamplingCalculator.COMPRESSED_DATA_ALIASING)).isTrue();
+        assertThat(SamplingCalculator.compute(SamplingInput.builder(100.0, 5.0).decimationFactor(24)
+                .decimationMode(DecimationMode.PEAK_PRESERVING)
+                .build()).hasWarning(SamplingCalculator.COMPRESSED_DATA_ALIASING)).isTrue();
         // ENVELOPE: the envelope's own -6 dB edge bw fc/2 = 1.5 MHz decides: 100 / 32 = 3.125 MHz passes, 100 / 34 warns
-        SamplingInput envelope = base.withSignal(SampledSignal.ENVELOPE);
-        assertThat(SamplingCalculator.compute(envelope.withDecimation(32, DecimationMode.PEAK_PRESERVING))
+        SamplingInput envelope = base.toBuilder().signal(SampledSignal.ENVELOPE).build();
+        assertThat(SamplingCalculator.compute(envelope.toBuilder().decimationFactor(32)
+                .decimationMode(DecimationMode.PEAK_PRESERVING).build())
                 .hasWarning(SamplingCalculator.COMPRESSED_DATA_ALIASING)).isFalse();
-        assertThat(SamplingCalculator.compute(envelope.withDecimation(34, DecimationMode.PEAK_PRESERVING))
+        assertThat(SamplingCalculator.compute(envelope.toBuilder().decimationFactor(34)
+                .decimationMode(DecimationMode.PEAK_PRESERVING).build())
                 .hasWarning(SamplingCalculator.COMPRESSED_DATA_ALIASING)).isTrue();
     }
 }

@@ -63,8 +63,8 @@ class EnvelopeSpectrumTest {
     @DisplayName("5 MHz, 60 %, envelope sampled at 8 MHz: 9.3e-6 of the energy above 4 MHz and -42.7 dB there, "
             + "no band aliasing (the carrier band's 0.866 and -2.67 dB do not apply)")
     void envelopeAtEightMegahertz() {
-        SamplingResult r = SamplingCalculator.compute(SamplingInput.of(8.0, 5.0).withBandwidthPercent(60.0)
-                .withSignal(SampledSignal.ENVELOPE));
+        SamplingResult r = SamplingCalculator.compute(SamplingInput.builder(8.0, 5.0).bandwidthPercent(60.0)
+                .signal(SampledSignal.ENVELOPE).build());
         double[] power = envelopePowerSpectrum(5.0, 0.6);
         double numeric = fractionAbove(power, 4.0);
         assertThat(numeric).isCloseTo(9.3e-6, within(0.05e-6));
@@ -80,7 +80,7 @@ class EnvelopeSpectrumTest {
         assertThat(r.hasWarning(SamplingCalculator.BAND_ALIASING)).isFalse();
         assertThat(r.hasWarning(SamplingCalculator.NYQUIST_LEVEL_ABOVE_MINUS_40_DB)).isFalse();
         // The same rate for RF: the carrier band is cut near its middle.
-        SamplingResult rf = SamplingCalculator.compute(SamplingInput.of(8.0, 5.0).withBandwidthPercent(60.0));
+        SamplingResult rf = SamplingCalculator.compute(SamplingInput.builder(8.0, 5.0).bandwidthPercent(60.0).build());
         assertThat(rf.energyAboveNyquistFraction()).isCloseTo(0.866, within(0.001));
         assertThat(rf.hasWarning(SamplingCalculator.BAND_ALIASING)).isTrue();
     }
@@ -89,8 +89,9 @@ class EnvelopeSpectrumTest {
     @CsvSource({"8, 5, 60", "4, 5, 60", "3, 5, 60", "5, 10, 30", "2, 2.25, 100", "20, 10, 100"})
     @DisplayName("ENVELOPE: energy above fs/2 and the level there match the FFT of the sampled envelope")
     void envelopeFiguresMatchTheFft(double fsMhz, double fMhz, double bandwidthPercent) {
-        SamplingResult r = SamplingCalculator.compute(SamplingInput.of(fsMhz, fMhz).withBandwidthPercent(bandwidthPercent)
-                .withSignal(SampledSignal.ENVELOPE));
+        SamplingResult r = SamplingCalculator.compute(SamplingInput.builder(fsMhz, fMhz)
+                .bandwidthPercent(bandwidthPercent)
+                .signal(SampledSignal.ENVELOPE).build());
         double[] power = envelopePowerSpectrum(fMhz, bandwidthPercent / 100.0);
         double numeric = fractionAbove(power, fsMhz / 2.0);
         // the bin width (0.0015 MHz) limits the FFT's own accuracy: 0.5 % relative or 1e-9 absolute
@@ -112,7 +113,7 @@ class EnvelopeSpectrumTest {
     }
 
     private static SamplingResult envelopeAt(double fsMhz) {
-        return SamplingCalculator.compute(SamplingInput.of(fsMhz, 5.0).withBandwidthPercent(60.0)
-                .withSignal(SampledSignal.ENVELOPE));
+        return SamplingCalculator.compute(SamplingInput.builder(fsMhz, 5.0).bandwidthPercent(60.0)
+                .signal(SampledSignal.ENVELOPE).build());
     }
 }

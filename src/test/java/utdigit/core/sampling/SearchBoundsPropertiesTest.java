@@ -159,8 +159,8 @@ class SearchBoundsPropertiesTest {
                 .forAll(positiveUpTo(1000.0), logBetween(1.0, 1e7), bandwidths(), positiveUpTo(40.0))
                 .checkAssert((fcMhz, n, bwPercent, toleranceDb) -> {
                     double fsMhz = StrictMath.min(n * fcMhz, 100_000.0);
-                    SamplingInput in = SamplingInput.of(fsMhz, fcMhz).withBandwidthPercent(bwPercent)
-                            .withAmplitudeToleranceDb(toleranceDb).withTfmGridSpacingMm(0.1).withVelocityMPerS(5920.0);
+                    SamplingInput in = SamplingInput.builder(fsMhz, fcMhz).bandwidthPercent(bwPercent)
+                            .amplitudeToleranceDb(toleranceDb).tfmGridSpacingMm(0.1).velocityMPerS(5920.0).build();
                     SamplingResult r;
                     try {
                         r = SamplingCalculator.compute(in);
@@ -215,7 +215,8 @@ class SearchBoundsPropertiesTest {
         assertThatThrownBy(() -> RequiredPulseRate.forRf(GaussianPulse.of(5.0, 0.6), PeakReading.ABSOLUTE, 1e-300,
                 rate, SearchBudget.of(1))).isInstanceOf(SearchBudget.Exhausted.class);
         assertThat(rate.spent()).isZero();
-        SamplingResult r = SamplingCalculator.compute(SamplingInput.of(4.5e-300, 1e-300).withBandwidthPercent(1.0));
+        SamplingResult r = SamplingCalculator.compute(SamplingInput.builder(4.5e-300, 1e-300).bandwidthPercent(1.0)
+                .build());
         assertThat(r.pulseAmplitudeLossDb()).isEmpty();
         assertThat(r.hasWarning(SamplingCalculator.SEARCH_BOUND_REACHED)).isTrue();
     }

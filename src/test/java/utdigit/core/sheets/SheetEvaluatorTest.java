@@ -45,12 +45,13 @@ class SheetEvaluatorTest {
     @Test
     void valuesEqualTheSingleCalculators() {
         SheetResult r = SheetEvaluator.evaluate(phasedArraySheet(100), FIVE_SAMPLES);
-        var sampling = SamplingCalculator.compute(SamplingInput.of(100, 5.0).withDecimationFactor(2)
-                .withBandwidthPercent(60.0));
+        var sampling = SamplingCalculator.compute(SamplingInput.builder(100, 5.0).decimationFactor(2)
+                .bandwidthPercent(60.0).build());
         assertThat(r.values().get("samples_per_period")).isEqualTo(sampling.samplesPerPeriod());
         assertThat(r.values().get("pulse_amplitude_loss_db")).isEqualTo(sampling.pulseAmplitudeLossDb().orElseThrow());
-        var quantization = QuantizationCalculator.compute(QuantizationInput.ofBitDepth(12)
-                .withEvaluation(80.0, -14.0).withAmplitudeToleranceDb(2.0));
+        var quantization = QuantizationCalculator.compute(QuantizationInput.builder(12)
+                .referenceHeightPercentFsh(80.0)
+                .evaluationLevelDb(-14.0).amplitudeToleranceDb(2.0).build());
         assertThat(r.values().get("evaluation_error_under_db"))
                 .isEqualTo(quantization.evaluationErrorUnderDb().orElseThrow());
         var tof = TimeOfFlightCalculator.compute(TimeOfFlightInput.builder(100, 3255.0).decimationFactor(2)
@@ -73,8 +74,8 @@ class SheetEvaluatorTest {
         SheetResult r = SheetEvaluator.evaluate(phasedArraySheet(100), FIVE_SAMPLES);
         assertThat(r.references()).extracting(Reference::id).doesNotHaveDuplicates();
         // Every source the single sampling calculation cites is cited by the sheet, "sampling" among its topic.
-        var sampling = SamplingCalculator.compute(SamplingInput.of(100, 5.0).withDecimationFactor(2)
-                .withBandwidthPercent(60.0));
+        var sampling = SamplingCalculator.compute(SamplingInput.builder(100, 5.0).decimationFactor(2)
+                .bandwidthPercent(60.0).build());
         assertThat(sampling.references()).isNotEmpty();
         for (Reference cited : sampling.references()) {
             Reference inSheet = r.references().stream().filter(x -> x.id().equals(cited.id())).findFirst()

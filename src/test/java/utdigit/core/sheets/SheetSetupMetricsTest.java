@@ -44,7 +44,8 @@ class SheetSetupMetricsTest {
     void arrayCoverageAndDacValuesEqualTheSingleCalculators() {
         SheetSetup setup = new SheetSetup(6.0, 50.0, 3.0, null, 0.5, 16, 70.0, null, 30.0, TcgMode.ANALOG, null, null);
         SheetResult r = SheetEvaluator.evaluate(phasedArray(setup), PITCH);
-        var array = ArrayApertureCalculator.compute(new ArrayApertureInput(5.0, 3255.0, 0.5, 16, null, null, 70.0));
+        var array = ArrayApertureCalculator.compute(ArrayApertureInput.builder(5.0, 3255.0, 0.5)
+                .activeElements(16).maxSteeringAngleDeg(70.0).build());
         assertThat(r.values().get("max_grating_lobe_free_pitch_mm")).isEqualTo(array.maxGratingLobeFreePitchMm());
         assertThat(r.values().get("aperture_near_field_length_mm")).isEqualTo(array.nearFieldLengthMm());
         // Shear wavelength 3.255 / 5 = 0.651 mm; steered to 70 deg the largest pitch is 0.651 / 1.940 = 0.3356 mm
@@ -131,9 +132,9 @@ class SheetSetupMetricsTest {
         // The probe's own figures keep D: the plane perpendicular to incidence.
         assertThat(r.values().get("near_field_length_mm")).isCloseTo(100.0 / (4 * lambdaMm), within(1e-9));
         // The same calculator as POST /api/pulse-parameters, bit for bit.
-        PulseResult.IncidencePlane plane = PulseCalculator.compute(PulseInput.of(5.0, STEEL_SHEAR_M_PER_S)
-                .withElementDiameterMm(10.0).withWedgeVelocityMPerS(WEDGE_M_PER_S)
-                .withIncidentAngleDeg(INCIDENT_FOR_45_DEG)).incidencePlane();
+        PulseResult.IncidencePlane plane = PulseCalculator.compute(PulseInput.builder(5.0, STEEL_SHEAR_M_PER_S)
+                .elementDiameterMm(10.0).wedgeVelocityMPerS(WEDGE_M_PER_S)
+                .incidentAngleDeg(INCIDENT_FOR_45_DEG).build()).incidencePlane();
         assertThat(r.values().get("incidence_plane_near_field_length_mm"))
                 .isEqualTo(plane.nearFieldLengthMm().orElseThrow());
         assertThat(r.values().get("incidence_plane_beam_spread_6db_deg")).isEqualTo(plane.beamSpread6dbDeg().orElseThrow());

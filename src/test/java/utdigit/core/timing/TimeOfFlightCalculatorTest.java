@@ -47,7 +47,7 @@ class TimeOfFlightCalculatorTest {
     @DisplayName("pulse-echo sound path per sample is v dt/2 (definition: one way of a round trip)")
     void pulseEchoSoundPathIsHalfOfVelocityTimesInterval() {
         // 100 MHz: dt = 10 ns = 0.01 us; v dt / 2 = 5.9 x 0.01 / 2 = 0.0295 mm.
-        TimeOfFlightResult r = TimeOfFlightCalculator.compute(TimeOfFlightInput.pulseEcho(100.0, V_M_PER_S));
+        TimeOfFlightResult r = TimeOfFlightCalculator.compute(TimeOfFlightInput.of(100.0, V_M_PER_S));
         assertThat(r.timeResolutionNs()).isCloseTo(10.0, within(ALLOWED_ERROR_NS));
         assertThat(r.soundPathResolutionMm()).isCloseTo(0.0295, within(ALLOWED_ERROR_MM));
         assertThat(r.depthResolutionMm()).isNull();
@@ -82,7 +82,7 @@ class TimeOfFlightCalculatorTest {
     @Test
     @DisplayName("timing from the trigger: worst case dt/2, standard uncertainty dt/sqrt(12) (GUM 4.3.7, half-width a/sqrt(3))")
     void triggerTimingIsOneQuantizedInstant() {
-        TimeOfFlightResult r = TimeOfFlightCalculator.compute(TimeOfFlightInput.pulseEcho(100.0, V_M_PER_S));
+        TimeOfFlightResult r = TimeOfFlightCalculator.compute(TimeOfFlightInput.of(100.0, V_M_PER_S));
         assertThat(r.timeReference()).isEqualTo(TimeReference.TRIGGER);
         assertThat(r.timingErrorNs()).isCloseTo(5.0, within(ALLOWED_ERROR_NS));
         assertThat(r.timingStandardUncertaintyNs()).isCloseTo(5.0 / Math.sqrt(3.0), within(ALLOWED_ERROR_NS));
@@ -217,7 +217,7 @@ class TimeOfFlightCalculatorTest {
     @Test
     @DisplayName("defaults: PULSE_ECHO, TRIGGER, decimation 1")
     void defaultsAreEchoed() {
-        TimeOfFlightResult r = TimeOfFlightCalculator.compute(TimeOfFlightInput.pulseEcho(50.0, V_M_PER_S));
+        TimeOfFlightResult r = TimeOfFlightCalculator.compute(TimeOfFlightInput.of(50.0, V_M_PER_S));
         assertThat(r.technique()).isEqualTo(Technique.PULSE_ECHO);
         assertThat(r.timeReference()).isEqualTo(TimeReference.TRIGGER);
         assertThat(r.decimationFactor()).isEqualTo(1);
@@ -328,7 +328,7 @@ class TimeOfFlightCalculatorTest {
 
         @Test
         void notANumberVelocityIsInvalid() {
-            assertFails(TimeOfFlightInput.pulseEcho(100.0, Double.NaN), CalculationError.INVALID_INPUT, "velocity");
+            assertFails(TimeOfFlightInput.of(100.0, Double.NaN), CalculationError.INVALID_INPUT, "velocity");
         }
 
         @Test
@@ -338,7 +338,7 @@ class TimeOfFlightCalculatorTest {
 
         @Test
         void zeroSamplingFrequencyIsInvalid() {
-            assertFails(TimeOfFlightInput.pulseEcho(0.0, V_M_PER_S), CalculationError.INVALID_INPUT,
+            assertFails(TimeOfFlightInput.of(0.0, V_M_PER_S), CalculationError.INVALID_INPUT,
                     "sampling_frequency_mhz");
         }
 

@@ -21,7 +21,7 @@ class TofdSetupCalculatorTest {
 
     @Test
     void arrivalTimesOfAHandWorkedSetUp() {
-        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.withPulseDurationUs(0.5));
+        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.toBuilder().pulseDurationUs(0.5).build());
         // Lateral wave 2S / v = 60 / 6 = 10 us; back wall 2 sqrt(30^2 + 40^2) / 6 = 100 / 6 us
         // (Charlesworth & Temple 2.3.4, a 3-4-5 triangle).
         assertThat(r.lateralWaveTimeUs()).isCloseTo(10.0, within(1e-12));
@@ -32,13 +32,16 @@ class TofdSetupCalculatorTest {
 
     @Test
     void theGateMustSpanLateralWaveToBackWallWithThePulseDurationEachSide() {
-        TofdSetupResult ok = TofdSetupCalculator.compute(SETUP.withPulseDurationUs(0.5).withGate(9.0, 17.5));
+        TofdSetupResult ok = TofdSetupCalculator.compute(SETUP.toBuilder().pulseDurationUs(0.5).gateStartUs(9.0)
+                .gateEndUs(17.5).build());
         assertThat(ok.gateSpansWall()).isTrue();
         assertThat(ok.gateStartMarginUs()).isCloseTo(1.0, within(1e-12));
-        TofdSetupResult late = TofdSetupCalculator.compute(SETUP.withPulseDurationUs(0.5).withGate(9.8, 17.5));
+        TofdSetupResult late = TofdSetupCalculator.compute(SETUP.toBuilder().pulseDurationUs(0.5).gateStartUs(9.8)
+                .gateEndUs(17.5).build());
         assertThat(late.gateSpansWall()).isFalse();
         assertThat(late.hasWarning(TofdSetupCalculator.GATE_MISSES_WALL)).isTrue();
-        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.withGate(17.0, 9.0)))
+        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.toBuilder().gateStartUs(17.0).gateEndUs(9.0)
+                .build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.error()).isEqualTo(CalculationError.IMPOSSIBLE_COMBINATION));
     }
@@ -46,9 +49,10 @@ class TofdSetupCalculatorTest {
     @Test
     void depthFromAMeasuredTime() {
         // t = 2 x 50 / 6 us gives back the 40 mm of the 3-4-5 triangle; 2 sqrt(30^2 + 20^2) / 6 gives 20 mm.
-        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.withMeasuredTimeUs(2 * Math.sqrt(1300) / 6));
+        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.toBuilder().measuredTimeUs(2 * Math.sqrt(1300) / 6)
+                .build());
         assertThat(r.depthFromTimeMm()).isCloseTo(20.0, within(1e-9));
-        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.withMeasuredTimeUs(9.0)))
+        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.toBuilder().measuredTimeUs(9.0).build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.fields()).containsExactly("measured_time_us"));
     }
@@ -64,8 +68,8 @@ class TofdSetupCalculatorTest {
         double dds = (depth(t, 30 + h) - depth(t, 30 - h)) / (2 * h);
         // fs 100 MHz from the trigger: u_t = 10 ns / sqrt(12) (GUM 4.3.7); u(2S) = 0.5 mm, so u_S = 0.25 mm.
         double uT = 0.01 / Math.sqrt(12);
-        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.withDepthMm(d)
-                .withSampling(100.0, null, null).withSeparationUncertaintyMm(0.5));
+        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.toBuilder().depthMm(d)
+                .samplingFrequencyMhz(100.0).probeCentreSeparationUncertaintyMm(0.5).build());
         assertThat(r.timingDepthUncertaintyMm().orElseThrow()).isCloseTo(Math.abs(ddt) * uT, within(1e-7));
         assertThat(r.separationDepthUncertaintyMm().orElseThrow()).isCloseTo(Math.abs(dds) * 0.25, within(1e-7));
         double combined = Math.hypot(ddt * uT, dds * 0.25);
@@ -94,8 +98,9 @@ class TofdSetupCalculatorTest {
         }
         double mean = sum / n;
         double sd = Math.sqrt(sumSq / n - mean * mean);
-        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.withDepthMm(d)
-                .withSampling(20.0, null, TimeReference.LATERAL_WAVE).withSeparationUncertaintyMm(0.5));
+        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.toBuilder().depthMm(d)
+                .samplingFrequencyMhz(20.0).timeReference(TimeReference.LATERAL_WAVE)
+                .probeCentreSeparationUncertaintyMm(0.5).build());
         assertThat(r.timingStandardUncertaintyNs()).isCloseTo(50.0 / Math.sqrt(6), within(1e-9));
         // Linearisation against the distribution's standard deviation: within 3 %.
         assertThat(r.combinedDepthUncertaintyMm().orElseThrow()).isCloseTo(sd, within(0.03 * sd));
@@ -103,17 +108,19 @@ class TofdSetupCalculatorTest {
 
     @Test
     void aDepthBelowTheBackWallIsImpossibleAndBothDepthFormsAreRefused() {
-        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.withDepthMm(41.0)))
+        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.toBuilder().depthMm(41.0).build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.error()).isEqualTo(CalculationError.IMPOSSIBLE_COMBINATION));
-        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.withDepthMm(10.0).withMeasuredTimeUs(12.0)))
+        assertThatThrownBy(() -> TofdSetupCalculator.compute(SETUP.toBuilder().depthMm(10.0).measuredTimeUs(12.0)
+                .build()))
                 .isInstanceOfSatisfying(CalculationException.class,
                         e -> assertThat(e.error()).isEqualTo(CalculationError.NOT_APPLICABLE));
     }
 
     @Test
     void aTipAtTheSurfaceHasNoFiniteDepthUncertainty() {
-        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.withMeasuredTimeUs(10.0).withSampling(100.0, null, null));
+        TofdSetupResult r = TofdSetupCalculator.compute(SETUP.toBuilder().measuredTimeUs(10.0)
+                .samplingFrequencyMhz(100.0).build());
         assertThat(r.depthFromTimeMm()).isEqualTo(0.0);
         assertThat(r.timingDepthUncertaintyMm()).isEmpty();
         assertThat(r.hasWarning(TofdSetupCalculator.TIP_AT_SURFACE)).isTrue();

@@ -61,10 +61,11 @@ class WaveformAnalyzerTest {
     @MethodSource("numpyReferences")
     void agreesWithNumpyAndScipy(Map<String, String> ref) throws IOException {
         String name = ref.get("name");
-        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.of(samples(name), RECORD_MHZ)
-                .withTarget(TARGET_MHZ, null, null, null, null));
-        WaveformResult p = WaveformAnalyzer.analyse(WaveformInput.of(samples(name), RECORD_MHZ)
-                .withTarget(TARGET_MHZ, null, null, PeakReading.POSITIVE_PEAK, null));
+        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.builder(samples(name), RECORD_MHZ)
+                .samplingFrequencyMhz(TARGET_MHZ).build());
+        WaveformResult p = WaveformAnalyzer.analyse(WaveformInput.builder(samples(name), RECORD_MHZ)
+                .samplingFrequencyMhz(TARGET_MHZ)
+                .peakReading(PeakReading.POSITIVE_PEAK).build());
         // numpy.fft.rfft on the same zero-padded length: the same bin, edges to rounding.
         assertThat(r.spectrumWindow().name()).as("window").isEqualTo(ref.get("window"));
         assertThat(r.peakFrequencyMhz()).as("peak").isCloseTo(d(ref, "peak_frequency_mhz"), within(1e-12));
@@ -123,9 +124,10 @@ class WaveformAnalyzerTest {
         double recordMhz = 20.0 * fcMhz;
         int n = (int) StrictMath.ceil(12.0 * g.envelopeDurationUs(40.0) * recordMhz / 2.0) * 2;
         double targetMhz = 4.6 * fcMhz;
-        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.of(gaussianRecord(g, n, recordMhz), recordMhz)
-                .withCentreFrequencyConvention(convention)
-                .withTarget(targetMhz, null, null, null, 1.0));
+        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.builder(gaussianRecord(g, n, recordMhz), recordMhz)
+                .centreFrequencyConvention(convention)
+                .samplingFrequencyMhz(targetMhz)
+                .amplitudeToleranceDb(1.0).build());
         double tolMhz = 0.003 * fcMhz;
         // Model edges (scipy.signal.gausspulse parameterisation): -6 dB at fc(1 -/+ bw/2); the real pulse's
         // lower edges from its two-sided spectrum (RealPulseSpectrum, solved by Commons Math BrentSolver).
@@ -167,8 +169,8 @@ class WaveformAnalyzerTest {
     @Test
     void energyAboveTheTargetNyquistIsTheModelsForAGaussianRecord() {
         GaussianPulse g = GaussianPulse.of(5.0, 0.6);
-        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.of(gaussianRecord(g, 800, RECORD_MHZ), RECORD_MHZ)
-                .withTarget(12.0, null, null, null, null));
+        WaveformResult r = WaveformAnalyzer.analyse(
+                WaveformInput.builder(gaussianRecord(g, 800, RECORD_MHZ), RECORD_MHZ).samplingFrequencyMhz(12.0).build());
         // 0.5 erfc((fs/2 - fc)/(sigma_f sqrt 2)), sigma_f = sqrt(a)/(2 pi) (Gaussian power spectrum; Commons Math
         // Erf); the negative-frequency image adds about 1e-9 at 60 % (RealPulseSpectrum.imageRatio).
         double z = (6.0 - 5.0) / (g.powerSpectrumSigmaMhz() * StrictMath.sqrt(2.0));
@@ -180,22 +182,25 @@ class WaveformAnalyzerTest {
     void theRequiredRateKeepsTheLossWithinTheToleranceAndASlightlySlowerOneDoesNot() throws IOException {
         // The definition (the rate above which every rate passes), read back at the answer for the ringing record.
         double[] x = samples("ringing-5mhz");
-        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.of(x, RECORD_MHZ).withTarget(25.0, null, null, null, 1.0));
+        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.builder(x, RECORD_MHZ).samplingFrequencyMhz(25.0)
+                .amplitudeToleranceDb(1.0).build());
         double rate = r.target().requiredSamplingFrequencyPulseMhz().orElseThrow();
-        double at = WaveformAnalyzer.analyse(WaveformInput.of(x, RECORD_MHZ).withTarget(rate, null, null, null, null))
+        double at = WaveformAnalyzer.analyse(WaveformInput.builder(x, RECORD_MHZ).samplingFrequencyMhz(rate).build())
                 .target().pulseAmplitudeLossDb().orElseThrow();
-        double below = WaveformAnalyzer.analyse(WaveformInput.of(x, RECORD_MHZ)
-                .withTarget(rate * (1 - 3e-4), null, null, null, null)).target().pulseAmplitudeLossDb().orElseThrow();
+        double below = WaveformAnalyzer.analyse(WaveformInput.builder(x, RECORD_MHZ)
+                .samplingFrequencyMhz(rate * (1 - 3e-4)).build()).target().pulseAmplitudeLossDb().orElseThrow();
         assertThat(at).isLessThanOrEqualTo(1.0);
         assertThat(below).isGreaterThan(1.0);
     }
 
     @Test
     void aDcOffsetChangesNothing() throws IOException {
-        WaveformResult plain = WaveformAnalyzer.analyse(WaveformInput.of(samples("gaussian-5mhz-60"), RECORD_MHZ)
-                .withTarget(TARGET_MHZ, null, null, null, 1.0));
-        WaveformResult offset = WaveformAnalyzer.analyse(WaveformInput.of(samples("gaussian-5mhz-60-dc-offset"),
-                RECORD_MHZ).withTarget(TARGET_MHZ, null, null, null, 1.0));
+        WaveformResult plain = WaveformAnalyzer.analyse(WaveformInput.builder(samples("gaussian-5mhz-60"), RECORD_MHZ)
+                .samplingFrequencyMhz(TARGET_MHZ)
+                .amplitudeToleranceDb(1.0).build());
+        WaveformResult offset = WaveformAnalyzer.analyse(
+                WaveformInput.builder(samples("gaussian-5mhz-60-dc-offset"), RECORD_MHZ)
+                        .samplingFrequencyMhz(TARGET_MHZ).amplitudeToleranceDb(1.0).build());
         // Removing the mean (definition): the same record up to the rounding of the offset.
         assertThat(offset.lowerFrequencyMhz()).isCloseTo(plain.lowerFrequencyMhz(), within(1e-9));
         assertThat(offset.pulseDuration6dbUs().orElseThrow()).isCloseTo(plain.pulseDuration6dbUs().orElseThrow(), within(1e-9));
@@ -236,8 +241,9 @@ class WaveformAnalyzerTest {
         assertThatThrownBy(() -> WaveformInput.of(nan, RECORD_MHZ)).isInstanceOf(CalculationException.class);
         assertThatThrownBy(() -> WaveformAnalyzer.analyse(WaveformInput.of(new double[32], RECORD_MHZ)))
                 .isInstanceOf(CalculationException.class).hasMessageContaining("no pulse");
-        assertThatThrownBy(() -> WaveformAnalyzer.analyse(WaveformInput.of(gaussianRecord(GaussianPulse.of(5, 0.6), 64,
-                RECORD_MHZ), RECORD_MHZ).withTarget(null, 2, null, null, null)))
+        assertThatThrownBy(() -> WaveformAnalyzer.analyse(
+                WaveformInput.builder(gaussianRecord(GaussianPulse.of(5, 0.6), 64, RECORD_MHZ), RECORD_MHZ)
+                        .decimationFactor(2).build()))
                 .isInstanceOf(CalculationException.class).hasMessageContaining("decimation_factor");
     }
 
@@ -245,8 +251,8 @@ class WaveformAnalyzerTest {
     void theLargestRecordIsAnalysedWithATolerance() {
         // Bounded work: the largest record with a tolerance search completes (speed is a benchmark's matter).
         GaussianPulse g = GaussianPulse.of(5.0, 0.6);
-        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.of(gaussianRecord(g, WaveformInput.MAX_SAMPLES,
-                RECORD_MHZ), RECORD_MHZ).withTarget(TARGET_MHZ, null, null, null, 1.0));
+        WaveformResult r = WaveformAnalyzer.analyse(WaveformInput.builder(gaussianRecord(g, WaveformInput.MAX_SAMPLES,
+                RECORD_MHZ), RECORD_MHZ).samplingFrequencyMhz(TARGET_MHZ).amplitudeToleranceDb(1.0).build());
         assertThat(r.target().pulseAmplitudeLossDb().orElseThrow())
                 .isCloseTo(PulseSamplingLoss.rfLossDb(g, 1.0 / TARGET_MHZ, PeakReading.ABSOLUTE), within(0.002));
     }
