@@ -9,7 +9,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.acquisition.CaptureMode;
 import utdigit.core.materials.WaveMode;
 import utdigit.web.json.InputMessages;
-import utdigit.web.units.Mirrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /**
@@ -38,10 +38,10 @@ public record AcquisitionBudgetRequest(
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double gateLengthUs,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double gateLengthMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double gateLengthIn,
 
         @VelocityFields.MPerS Double velocityMPerS,
@@ -61,34 +61,34 @@ public record AcquisitionBudgetRequest(
         @Min(1) @Max(65536)
         Integer averaging,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double scanIncrementMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double scanIncrementIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double scanLengthMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double scanLengthIn,
 
         @NotNull(message = InputMessages.REQUIRED) @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000000")
         Double pulseRepetitionFrequencyHz,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double plannedScanSpeedMmPerS,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double plannedScanSpeedInPerS,
 
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double maxRoundTripUs,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double maxSoundPathMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double maxSoundPathIn,
 
         @DecimalMin("1") @DecimalMax("100")

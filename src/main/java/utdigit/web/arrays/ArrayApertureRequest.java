@@ -8,7 +8,7 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.web.json.InputMessages;
-import utdigit.web.units.Mirrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /** POST /api/array-apertures. */
@@ -27,25 +27,25 @@ public record ArrayApertureRequest(
         @VelocityFields.Mode WaveMode waveMode,
         @VelocityFields.TemperatureC Double temperatureC,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double elementPitchMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double elementPitchIn,
 
         @Min(1) @Max(65536)
         Integer activeElements,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double activeApertureMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double activeApertureIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double elementLengthMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double elementLengthIn,
 
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)

@@ -4,7 +4,7 @@ import io.swagger.v3.oas.annotations.media.Schema;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import utdigit.core.materials.WaveMode;
-import utdigit.web.units.Mirrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /** POST /api/scan-coverages. */
@@ -14,10 +14,10 @@ import utdigit.web.units.VelocityFields;
         + "_mm or _in. The velocity once: velocity_m_per_s, velocity_in_per_us or material (+ wave_mode, + "
         + "temperature_c for water). angular_step_deg needs sound_path.")
 public record ScanCoverageRequest(
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double beamWidth6dbMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double beamWidth6dbIn,
 
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000")
@@ -29,28 +29,28 @@ public record ScanCoverageRequest(
         @VelocityFields.Mode WaveMode waveMode,
         @VelocityFields.TemperatureC Double temperatureC,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double elementDiameterMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double elementDiameterIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double soundPathMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double soundPathIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double scanIncrementMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double scanIncrementIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double indexStepMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double indexStepIn,
 
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "90", inclusive = false)

@@ -7,7 +7,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.pulse.CentreFrequencyConvention;
 import utdigit.web.json.InputMessages;
-import utdigit.web.units.Mirrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /** POST /api/pulse-parameters. */
@@ -29,22 +29,22 @@ public record PulseParametersRequest(
 
         CentreFrequencyConvention centreFrequencyConvention,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double elementDiameterMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double elementDiameterIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double distanceMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double distanceIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double wedgePathMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double wedgePathIn,
 
         @DecimalMin("100") @DecimalMax("20000")

@@ -13,7 +13,7 @@ import utdigit.core.sampling.PeakReading;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.TfmImage;
 import utdigit.web.json.InputMessages;
-import utdigit.web.units.Mirrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /** POST /api/sampling-assessments. */
@@ -45,10 +45,10 @@ public record SamplingAssessmentRequest(
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("40")
         Double amplitudeToleranceDb,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double tfmGridSpacingMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double tfmGridSpacingIn,
 
         @VelocityFields.MPerS Double velocityMPerS,
@@ -59,21 +59,21 @@ public record SamplingAssessmentRequest(
 
         TfmImage tfmImage,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double tfmLateralGridSpacingMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double tfmLateralGridSpacingIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double tfmApertureMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double tfmApertureIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double tfmDepthMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double tfmDepthIn) implements VelocityFields {
 }

@@ -8,6 +8,7 @@ import jakarta.validation.constraints.Min;
 import utdigit.core.dac.TcgMode;
 import utdigit.core.sheets.SheetSetup;
 import utdigit.web.problem.FieldErrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocityFields;
 
@@ -18,23 +19,23 @@ import utdigit.web.units.VelocityFields;
         + "_m_per_s or _in_per_us.")
 public record SheetSetupSection(
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double beamWidth6dbMm,
+        @Lengths.Mm Double beamWidth6dbMm,
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) Double beamWidth6dbIn,
+        @Lengths.In Double beamWidth6dbIn,
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double soundPathMm,
+        @Lengths.Mm Double soundPathMm,
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) Double soundPathIn,
+        @Lengths.In Double soundPathIn,
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double indexStepMm,
+        @Lengths.Mm Double indexStepMm,
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) Double indexStepIn,
+        @Lengths.In Double indexStepIn,
         @Schema(format = "double")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "90", inclusive = false) Double angularStepDeg,
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double elementPitchMm,
+        @Lengths.Mm Double elementPitchMm,
         @Schema(format = "double")
-        @DecimalMin(value = "0", inclusive = false) Double elementPitchIn,
+        @Lengths.In Double elementPitchIn,
         @Schema(format = "int32")
         @Min(1) @Max(65536) Integer activeElements,
         @Schema(format = "double")

@@ -19,6 +19,7 @@ import utdigit.core.sampling.DecimationMode;
 import utdigit.core.sampling.SampledSignal;
 import utdigit.core.sampling.TfmImage;
 import utdigit.core.sheets.SheetTechnique;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /** POST /api/technique-sheet-validations: a technique sheet and the profile to check it against. */
@@ -53,9 +54,9 @@ public record TechniqueSheetRequest(
             @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false) Double bandwidthPercent,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double elementDiameterMm,
+            @Lengths.Mm Double elementDiameterMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double elementDiameterIn,
+            @Lengths.In Double elementDiameterIn,
             @Schema(format = "int32")
             @Min(1) @Max(65536) Integer elementCount) {}
 
@@ -77,9 +78,9 @@ public record TechniqueSheetRequest(
             @Schema(format = "double")
             @DecimalMin("0") @DecimalMax("20") Double velocityUncertaintyPercent,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double thicknessMm,
+            @Lengths.Mm Double thicknessMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double thicknessIn,
+            @Lengths.In Double thicknessIn,
             @Schema(format = "double")
             @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double refractedAngleDeg,
             @Schema(format = "double")
@@ -117,27 +118,27 @@ public record TechniqueSheetRequest(
             @Schema(format = "int32")
             @Min(1) @Max(65536) Integer averaging,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double scanIncrementMm,
+            @Lengths.Mm Double scanIncrementMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double scanIncrementIn,
+            @Lengths.In Double scanIncrementIn,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double scanLengthMm,
+            @Lengths.Mm Double scanLengthMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double scanLengthIn,
+            @Lengths.In Double scanLengthIn,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double plannedScanSpeedMmPerS,
+            @Lengths.Mm Double plannedScanSpeedMmPerS,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double plannedScanSpeedInPerS,
+            @Lengths.In Double plannedScanSpeedInPerS,
             @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gateLengthUs,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gateLengthMm,
+            @Lengths.Mm Double gateLengthMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double gateLengthIn,
+            @Lengths.In Double gateLengthIn,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double maxSoundPathMm,
+            @Lengths.Mm Double maxSoundPathMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double maxSoundPathIn,
+            @Lengths.In Double maxSoundPathIn,
             @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double maxRoundTripUs,
             @Schema(format = "double")
@@ -148,34 +149,34 @@ public record TechniqueSheetRequest(
             description = "TOFD: probe-centre separation and depth of interest")
     public record Tofd(
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double probeCentreSeparationMm,
+            @Lengths.Mm Double probeCentreSeparationMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double probeCentreSeparationIn,
+            @Lengths.In Double probeCentreSeparationIn,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double depthOfInterestMm,
+            @Lengths.Mm Double depthOfInterestMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double depthOfInterestIn) {}
+            @Lengths.In Double depthOfInterestIn) {}
 
     /** TFM image grid. */
     @Schema(name = "SheetTfm",
             description = "TFM: image grid steps, and the aperture and depth of the lateral check")
     public record Tfm(
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gridSpacingMm,
+            @Lengths.Mm Double gridSpacingMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double gridSpacingIn,
+            @Lengths.In Double gridSpacingIn,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double lateralGridSpacingMm,
+            @Lengths.Mm Double lateralGridSpacingMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double lateralGridSpacingIn,
+            @Lengths.In Double lateralGridSpacingIn,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double apertureMm,
+            @Lengths.Mm Double apertureMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double apertureIn,
+            @Lengths.In Double apertureIn,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double depthMm,
+            @Lengths.Mm Double depthMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double depthIn,
+            @Lengths.In Double depthIn,
             TfmImage image) {}
 
     /** The evaluation. */
@@ -190,7 +191,7 @@ public record TechniqueSheetRequest(
             @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("40") Double amplitudeToleranceDb,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double thicknessToleranceMm,
+            @Lengths.Mm Double thicknessToleranceMm,
             @Schema(format = "double")
-            @DecimalMin(value = "0", inclusive = false) Double thicknessToleranceIn) {}
+            @Lengths.In Double thicknessToleranceIn) {}
 }

@@ -9,7 +9,7 @@ import jakarta.validation.constraints.NotNull;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.thickness.Measurement;
 import utdigit.web.json.InputMessages;
-import utdigit.web.units.Mirrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /** POST /api/thickness-resolutions. */
@@ -36,10 +36,10 @@ public record ThicknessResolutionRequest(
         @DecimalMin("0") @DecimalMax("20")
         Double velocityUncertaintyPercent,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double nominalThicknessMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double nominalThicknessIn,
 
         Measurement measurement,
@@ -47,10 +47,10 @@ public record ThicknessResolutionRequest(
         @Min(1) @Max(65536)
         Integer echoSpacing,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double requiredResolutionMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double requiredResolutionIn,
 
         @DecimalMin("1") @DecimalMax("5")

@@ -10,7 +10,7 @@ import utdigit.core.materials.WaveMode;
 import utdigit.core.timing.Technique;
 import utdigit.core.timing.TimeReference;
 import utdigit.web.json.InputMessages;
-import utdigit.web.units.Mirrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.VelocityFields;
 
 /** POST /api/time-of-flight-resolutions. */
@@ -38,22 +38,22 @@ public record TimeOfFlightResolutionRequest(
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
         Double refractedAngleDeg,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double probeCentreSeparationMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double probeCentreSeparationIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double depthMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double depthIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double thicknessMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double thicknessIn,
 
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")

@@ -7,6 +7,7 @@ import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import utdigit.core.materials.WaveMode;
 import utdigit.core.timing.TimeReference;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocityFields;
 
@@ -24,16 +25,16 @@ public record TofdSetupRequest(
         @VelocityFields.Mode WaveMode waveMode,
         @VelocityFields.TemperatureC Double temperatureC,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double probeCentreSeparationMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double probeCentreSeparationIn,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double thicknessMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double thicknessIn,
 
         @DecimalMin("0") @DecimalMax("100000")
@@ -45,10 +46,10 @@ public record TofdSetupRequest(
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
         Double pulseDurationUs,
 
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Mirrors.MAX_MM)
+        @Lengths.Mm
         Double depthMm,
 
-        @DecimalMin(value = "0", inclusive = false)
+        @Lengths.In
         Double depthIn,
 
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000")
