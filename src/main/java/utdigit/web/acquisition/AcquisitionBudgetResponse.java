@@ -6,6 +6,7 @@ import java.util.Optional;
 import utdigit.web.pipeline.ResultNotes.ReferenceView;
 import utdigit.web.pipeline.ToleranceCheck;
 import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/acquisition-budgets. */
@@ -43,18 +44,13 @@ record AcquisitionBudgetResponse(
     @Schema(name = "AcquisitionBudgetInInches", description = "Inch mirrors of the length "
             + "results (the inch is 25.4 mm exactly)")
     record InInches(
-            @Schema(format = "double")
             Double maxScanLengthPerFileIn,
-            @Schema(format = "double")
             Double maxScanSpeedInPerS,
-            @Schema(format = "double")
             Double dataRateScanSpeedInPerS) {
 
         /** The mirrors, or null (omitted) when the answer has no length result. */
         static InInches of(Double maxScanLengthPerFileIn, Double maxScanSpeedInPerS, Double dataRateScanSpeedInPerS) {
-            return maxScanLengthPerFileIn == null && maxScanSpeedInPerS == null &&
-                    dataRateScanSpeedInPerS == null ? null
-                    : new InInches(maxScanLengthPerFileIn, maxScanSpeedInPerS, dataRateScanSpeedInPerS);
+            return Mirrors.orNone(new InInches(maxScanLengthPerFileIn, maxScanSpeedInPerS, dataRateScanSpeedInPerS));
         }
     }
 }

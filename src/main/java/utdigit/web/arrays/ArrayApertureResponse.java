@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import utdigit.web.pipeline.ResultNotes.ReferenceView;
 import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/array-apertures. */
@@ -16,14 +17,10 @@ record ArrayApertureResponse(
         double wavelengthMm,
         Double activeApertureMm,
         Double nearFieldLengthMm,
-        @Schema(types = {"number", "null"})
         Optional<Double> beamSpread6dbDeg,
-        @Schema(types = {"number", "null"})
         Optional<Double> beamSpread20dbDeg,
-        @Schema(types = {"number", "null"})
         Optional<Double> beamSpreadNullDeg,
         Double passiveNearFieldLengthMm,
-        @Schema(types = {"number", "null"})
         Optional<Double> passiveBeamSpread6dbDeg,
         double pitchToWavelengthRatio,
         double maxGratingLobeFreePitchMm,
@@ -38,24 +35,17 @@ record ArrayApertureResponse(
     @Schema(name = "ArrayApertureInInches", description = "Inch mirrors of the length "
             + "results (the inch is 25.4 mm exactly)")
     record InInches(
-            @Schema(format = "double")
             Double wavelengthIn,
-            @Schema(format = "double")
             Double activeApertureIn,
-            @Schema(format = "double")
             Double nearFieldLengthIn,
-            @Schema(format = "double")
             Double passiveNearFieldLengthIn,
-            @Schema(format = "double")
             Double maxGratingLobeFreePitchIn) {
 
         /** The mirrors, or null (omitted) when the answer has no length result. */
         static InInches of(Double wavelengthIn, Double activeApertureIn, Double nearFieldLengthIn,
                     Double passiveNearFieldLengthIn, Double maxGratingLobeFreePitchIn) {
-            return wavelengthIn == null && activeApertureIn == null && nearFieldLengthIn == null &&
-                    passiveNearFieldLengthIn == null && maxGratingLobeFreePitchIn == null ? null
-                    : new InInches(wavelengthIn, activeApertureIn, nearFieldLengthIn, passiveNearFieldLengthIn,
-                    maxGratingLobeFreePitchIn);
+            return Mirrors.orNone(new InInches(wavelengthIn, activeApertureIn, nearFieldLengthIn,
+                    passiveNearFieldLengthIn, maxGratingLobeFreePitchIn));
         }
     }
 }

@@ -15,15 +15,11 @@ import utdigit.web.pipeline.ResultNotes.WarningView;
 record DacQuantizationResponse(
         double lsbPercentFsh,
         double lowestReferenceHeightPercentFsh,
-        @Schema(types = {"number", "null"})
         Optional<Double> uncorrectedErrorUnderDb,
-        @Schema(types = {"number", "null"})
         Optional<Double> analogTcgErrorUnderDb,
         double digitalTcgLsbPercentFsh,
-        @Schema(types = {"number", "null"})
         Optional<Double> digitalTcgErrorUnderDb,
         Double minimumHeightPercentFsh,
-        @Schema(types = {"number", "null"})
         Optional<Double> maxUncorrectedSpanDb,
         Boolean uncorrectedWithinTolerance,
         Boolean analogTcgWithinTolerance,

@@ -13,7 +13,6 @@ record MaterialView(
         String name,
         Material.Origin origin,
         double longitudinalMPerS,
-        @Schema(types = {"number", "null"})
         @JsonInclude(JsonInclude.Include.ALWAYS)
         Double shearMPerS,
         Double longitudinalUncertaintyMPerS,

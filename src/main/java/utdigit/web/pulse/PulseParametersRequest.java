@@ -53,7 +53,6 @@ public record PulseParametersRequest(
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false)
         Double incidentAngleDeg,
 
-        @Schema(format = "double", exclusiveMinimumValue = 0)
         @DecimalMin(value = "0", inclusive = false)
         Double wedgeVelocityInPerUs) implements VelocityFields {
 }

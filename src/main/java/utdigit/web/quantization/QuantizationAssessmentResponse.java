@@ -14,15 +14,12 @@ record QuantizationAssessmentResponse(
         long levels,
         double lsbPercentFsh,
         double dynamicRangeDb,
-        @Schema(types = {"number", "null"})
         Optional<Double> idealSqnrDb,
         Double amplitudeErrorOverDb,
-        @Schema(types = {"number", "null"})
         Optional<Double> amplitudeErrorUnderDb,
         Double minimumHeightPercentFsh,
         Double minimumHeightDb,
         Double evaluationHeightPercentFsh,
-        @Schema(types = {"number", "null"})
         Optional<Double> evaluationErrorUnderDb,
         Double averagingSnrGainDb,
         List<ToleranceCheck> toleranceChecks,

@@ -6,6 +6,7 @@ import java.util.Optional;
 import utdigit.web.pipeline.ResultNotes.ReferenceView;
 import utdigit.web.pipeline.ToleranceCheck;
 import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/sampling-assessments. */
@@ -30,10 +31,8 @@ record SamplingAssessmentResponse(
 
         Double energyAboveNyquistFraction,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> sineAmplitudeLossDb,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> pulseAmplitudeLossDb,
 
         double timingErrorNs,
@@ -44,10 +43,8 @@ record SamplingAssessmentResponse(
 
         Double requiredSamplingFrequencyMhz,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> requiredSamplingFrequencyPulseMhz,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> tfmGridAmplitudeLossDb,
 
         Double tfmMaxGridSpacingMm,
@@ -68,13 +65,11 @@ record SamplingAssessmentResponse(
     @Schema(name = "SamplingAssessmentInInches", description = "Inch mirrors of the length "
             + "results (the inch is 25.4 mm exactly)")
     record InInches(
-            @Schema(format = "double")
             Double tfmMaxGridSpacingIn) {
 
         /** The mirrors, or null (omitted) when the answer has no length result. */
         static InInches of(Double tfmMaxGridSpacingIn) {
-            return tfmMaxGridSpacingIn == null ? null
-                    : new InInches(tfmMaxGridSpacingIn);
+            return Mirrors.orNone(new InInches(tfmMaxGridSpacingIn));
         }
     }
 }

@@ -18,44 +18,25 @@ import utdigit.web.units.VelocityFields;
         + "angle and wedge velocity, for the incidence-plane figures). Each length once: _mm or _in; each speed once: "
         + "_m_per_s or _in_per_us.")
 public record SheetSetupSection(
-        @Schema(format = "double")
         @Lengths.Mm Double beamWidth6dbMm,
-        @Schema(format = "double")
         @Lengths.In Double beamWidth6dbIn,
-        @Schema(format = "double")
         @Lengths.Mm Double soundPathMm,
-        @Schema(format = "double")
         @Lengths.In Double soundPathIn,
-        @Schema(format = "double")
         @Lengths.Mm Double indexStepMm,
-        @Schema(format = "double")
         @Lengths.In Double indexStepIn,
-        @Schema(format = "double")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "90", inclusive = false) Double angularStepDeg,
-        @Schema(format = "double")
         @Lengths.Mm Double elementPitchMm,
-        @Schema(format = "double")
         @Lengths.In Double elementPitchIn,
-        @Schema(format = "int32")
         @Min(1) @Max(65536) Integer activeElements,
-        @Schema(format = "double")
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double maxSteeringAngleDeg,
-        @Schema(format = "double")
         @DecimalMin("100") @DecimalMax("20000") Double steeringVelocityMPerS,
-        @Schema(format = "double")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("60") Double dacSpanDb,
         TcgMode tcg,
-        @Schema(format = "double")
         @DecimalMin("0") @DecimalMax("100000") Double gateStartUs,
-        @Schema(format = "double")
         @DecimalMin("0") @DecimalMax("100000") Double gateEndUs,
-        @Schema(format = "double")
         @DecimalMin(value = "0", inclusive = false) Double steeringVelocityInPerUs,
-        @Schema(format = "double", minimum = "0", exclusiveMaximumValue = 90)
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double incidentAngleDeg,
-        @Schema(format = "double", minimum = "100", maximum = "20000")
         @DecimalMin("100") @DecimalMax("20000") Double wedgeVelocityMPerS,
-        @Schema(format = "double")
         @DecimalMin(value = "0", inclusive = false) Double wedgeVelocityInPerUs) {
 
     /** The core's section with lengths in mm; field errors go to {@code errors} (section "setup"). */

@@ -49,15 +49,10 @@ public record TechniqueSheetRequest(
     @Schema(name = "SheetProbe",
             description = "The probe: frequency, bandwidth, element diameter, number of array elements")
     public record Probe(
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000") Double frequencyMhz,
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false) Double bandwidthPercent,
-            @Schema(format = "double")
             @Lengths.Mm Double elementDiameterMm,
-            @Schema(format = "double")
             @Lengths.In Double elementDiameterIn,
-            @Schema(format = "int32")
             @Min(1) @Max(65536) Integer elementCount) {}
 
     /** The part's material and geometry. */
@@ -67,23 +62,14 @@ public record TechniqueSheetRequest(
     public record Material(
             String material,
             WaveMode waveMode,
-            @Schema(format = "double")
             @DecimalMin("0") @DecimalMax("95") Double temperatureC,
-            @Schema(format = "double")
             @DecimalMin("100") @DecimalMax("20000") Double velocityMPerS,
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) Double velocityInPerUs,
-            @Schema(format = "double")
             @DecimalMin("0") @DecimalMax("4000") Double velocityUncertaintyMPerS,
-            @Schema(format = "double")
             @DecimalMin("0") @DecimalMax("20") Double velocityUncertaintyPercent,
-            @Schema(format = "double")
             @Lengths.Mm Double thicknessMm,
-            @Schema(format = "double")
             @Lengths.In Double thicknessIn,
-            @Schema(format = "double")
             @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double refractedAngleDeg,
-            @Schema(format = "double")
             @DecimalMin("0") Double velocityUncertaintyInPerUs) implements VelocityFields {}
 
     /** The digitizer's settings. */
@@ -91,11 +77,8 @@ public record TechniqueSheetRequest(
             description = "The digitizer: sampling frequency, decimation, "
             + "bit depth and how the signal is quantized")
     public record Digitization(
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double samplingFrequencyMhz,
-            @Schema(format = "int32")
             @Min(1) @Max(65536) Integer decimationFactor,
-            @Schema(format = "int32")
             @Min(1) @Max(32) Integer bitDepth,
             DigitizedSignal digitizedSignal,
             Quantizer quantizer,
@@ -108,74 +91,45 @@ public record TechniqueSheetRequest(
             description = "The acquisition: PRF, focal laws or FMC/HMC capture, averaging, scan increment, length and speed, "
             + "gate and longest sound path")
     public record Acquisition(
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("1000000") Double pulseRepetitionFrequencyHz,
-            @Schema(format = "int32")
             @Min(1) @Max(65536) Integer focalLaws,
-            @Schema(format = "int32")
             @Min(1) @Max(65536) Integer fmcElementCount,
             CaptureMode capture,
-            @Schema(format = "int32")
             @Min(1) @Max(65536) Integer averaging,
-            @Schema(format = "double")
             @Lengths.Mm Double scanIncrementMm,
-            @Schema(format = "double")
             @Lengths.In Double scanIncrementIn,
-            @Schema(format = "double")
             @Lengths.Mm Double scanLengthMm,
-            @Schema(format = "double")
             @Lengths.In Double scanLengthIn,
-            @Schema(format = "double")
             @Lengths.Mm Double plannedScanSpeedMmPerS,
-            @Schema(format = "double")
             @Lengths.In Double plannedScanSpeedInPerS,
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double gateLengthUs,
-            @Schema(format = "double")
             @Lengths.Mm Double gateLengthMm,
-            @Schema(format = "double")
             @Lengths.In Double gateLengthIn,
-            @Schema(format = "double")
             @Lengths.Mm Double maxSoundPathMm,
-            @Schema(format = "double")
             @Lengths.In Double maxSoundPathIn,
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double maxRoundTripUs,
-            @Schema(format = "double")
             @DecimalMin("1") @DecimalMax("100") Double wraparoundDecayFactor) {}
 
     /** TOFD set-up. */
     @Schema(name = "SheetTofd",
             description = "TOFD: probe-centre separation and depth of interest")
     public record Tofd(
-            @Schema(format = "double")
             @Lengths.Mm Double probeCentreSeparationMm,
-            @Schema(format = "double")
             @Lengths.In Double probeCentreSeparationIn,
-            @Schema(format = "double")
             @Lengths.Mm Double depthOfInterestMm,
-            @Schema(format = "double")
             @Lengths.In Double depthOfInterestIn) {}
 
     /** TFM image grid. */
     @Schema(name = "SheetTfm",
             description = "TFM: image grid steps, and the aperture and depth of the lateral check")
     public record Tfm(
-            @Schema(format = "double")
             @Lengths.Mm Double gridSpacingMm,
-            @Schema(format = "double")
             @Lengths.In Double gridSpacingIn,
-            @Schema(format = "double")
             @Lengths.Mm Double lateralGridSpacingMm,
-            @Schema(format = "double")
             @Lengths.In Double lateralGridSpacingIn,
-            @Schema(format = "double")
             @Lengths.Mm Double apertureMm,
-            @Schema(format = "double")
             @Lengths.In Double apertureIn,
-            @Schema(format = "double")
             @Lengths.Mm Double depthMm,
-            @Schema(format = "double")
             @Lengths.In Double depthIn,
             TfmImage image) {}
 
@@ -184,14 +138,9 @@ public record TechniqueSheetRequest(
             description = "Evaluation: reference height, evaluation level, "
             + "amplitude and thickness tolerances")
     public record Evaluation(
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("100") Double referenceHeightPercentFsh,
-            @Schema(format = "double")
             @DecimalMin("-80") @DecimalMax("20") Double evaluationLevelDb,
-            @Schema(format = "double")
             @DecimalMin(value = "0", inclusive = false) @DecimalMax("40") Double amplitudeToleranceDb,
-            @Schema(format = "double")
             @Lengths.Mm Double thicknessToleranceMm,
-            @Schema(format = "double")
             @Lengths.In Double thicknessToleranceIn) {}
 }

@@ -54,9 +54,7 @@ record TechniqueSheetValidationResponse(
             String ruleId,
             String title,
             String metric,
-            @Schema(format = "double", types = {"number", "null"})
             @JsonInclude(JsonInclude.Include.ALWAYS) Double actual,
-            @Schema(format = "double", types = {"number", "null"})
             @JsonInclude(JsonInclude.Include.ALWAYS) Double limit,
             String limitMetric,
             Comparison comparison,

@@ -62,7 +62,6 @@ public record ThicknessResolutionRequest(
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "200", inclusive = false)
         Double bandwidthPercent,
 
-        @Schema(format = "double", minimum = "0")
         @DecimalMin("0")
         Double velocityUncertaintyInPerUs) implements VelocityFields {
 }

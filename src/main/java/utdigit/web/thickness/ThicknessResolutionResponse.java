@@ -6,6 +6,7 @@ import java.util.Optional;
 import utdigit.web.pipeline.ResultNotes.ReferenceView;
 import utdigit.web.pipeline.ToleranceCheck;
 import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/thickness-resolutions. */
@@ -35,15 +36,12 @@ record ThicknessResolutionResponse(
     @Schema(name = "ThicknessResolutionInInches", description = "Inch mirrors of the length "
             + "results (the inch is 25.4 mm exactly)")
     record InInches(
-            @Schema(format = "double")
             Double standardUncertaintyIn,
-            @Schema(format = "double")
             Double expandedUncertaintyIn) {
 
         /** The mirrors, or null (omitted) when the answer has no length result. */
         static InInches of(Double standardUncertaintyIn, Double expandedUncertaintyIn) {
-            return standardUncertaintyIn == null && expandedUncertaintyIn == null ? null
-                    : new InInches(standardUncertaintyIn, expandedUncertaintyIn);
+            return Mirrors.orNone(new InInches(standardUncertaintyIn, expandedUncertaintyIn));
         }
     }
 }

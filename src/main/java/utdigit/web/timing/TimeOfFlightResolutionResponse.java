@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import utdigit.web.pipeline.ResultNotes.ReferenceView;
 import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/time-of-flight-resolutions. */
@@ -35,28 +36,19 @@ record TimeOfFlightResolutionResponse(
     @Schema(name = "TimeOfFlightResolutionInInches", description = "Inch mirrors of the length "
             + "results (the inch is 25.4 mm exactly)")
     record InInches(
-            @Schema(format = "double")
             Double soundPathResolutionIn,
-            @Schema(format = "double")
             Double depthResolutionIn,
-            @Schema(format = "double")
             Double surfaceDistanceResolutionIn,
-            @Schema(format = "double")
             Double pulseLimitedDepthResolutionIn,
-            @Schema(format = "double")
             Double deadZoneDepthIn,
-            @Schema(format = "double")
             Double backwallDeadZoneIn) {
 
         /** The mirrors, or null (omitted) when the answer has no length result. */
         static InInches of(Double soundPathResolutionIn, Double depthResolutionIn,
                     Double surfaceDistanceResolutionIn, Double pulseLimitedDepthResolutionIn, Double deadZoneDepthIn,
                     Double backwallDeadZoneIn) {
-            return soundPathResolutionIn == null && depthResolutionIn == null &&
-                    surfaceDistanceResolutionIn == null && pulseLimitedDepthResolutionIn == null &&
-                    deadZoneDepthIn == null && backwallDeadZoneIn == null ? null
-                    : new InInches(soundPathResolutionIn, depthResolutionIn, surfaceDistanceResolutionIn,
-                    pulseLimitedDepthResolutionIn, deadZoneDepthIn, backwallDeadZoneIn);
+            return Mirrors.orNone(new InInches(soundPathResolutionIn, depthResolutionIn, surfaceDistanceResolutionIn,
+                    pulseLimitedDepthResolutionIn, deadZoneDepthIn, backwallDeadZoneIn));
         }
     }
 }

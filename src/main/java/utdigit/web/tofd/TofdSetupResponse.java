@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Optional;
 import utdigit.web.pipeline.ResultNotes.ReferenceView;
 import utdigit.web.pipeline.ResultNotes.WarningView;
+import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocitySourceView;
 
 /** The answer of POST /api/tofd-setups. */
@@ -24,13 +25,9 @@ record TofdSetupResponse(
         Double depthFromTimeMm,
         Double timeOfFlightUs,
         Double timingStandardUncertaintyNs,
-        @Schema(types = {"number", "null"})
         Optional<Double> timingDepthUncertaintyMm,
-        @Schema(types = {"number", "null"})
         Optional<Double> separationDepthUncertaintyMm,
-        @Schema(types = {"number", "null"})
         Optional<Double> combinedDepthUncertaintyMm,
-        @Schema(types = {"number", "null"})
         Optional<Double> expandedDepthUncertaintyMm,
         TofdSetupRequest inputs,
         VelocitySourceView velocitySource,
@@ -42,26 +39,18 @@ record TofdSetupResponse(
     @Schema(name = "TofdSetupInInches", description = "Inch mirrors of the length "
             + "results (the inch is 25.4 mm exactly)")
     record InInches(
-            @Schema(format = "double")
             Double depthFromTimeIn,
-            @Schema(format = "double", types = {"number", "null"})
             Optional<Double> timingDepthUncertaintyIn,
-            @Schema(format = "double", types = {"number", "null"})
             Optional<Double> separationDepthUncertaintyIn,
-            @Schema(format = "double", types = {"number", "null"})
             Optional<Double> combinedDepthUncertaintyIn,
-            @Schema(format = "double", types = {"number", "null"})
             Optional<Double> expandedDepthUncertaintyIn) {
 
         /** The mirrors, or null (omitted) when the answer has no length result. */
         static InInches of(Double depthFromTimeIn, Optional<Double> timingDepthUncertaintyIn,
                     Optional<Double> separationDepthUncertaintyIn, Optional<Double> combinedDepthUncertaintyIn,
                     Optional<Double> expandedDepthUncertaintyIn) {
-            return depthFromTimeIn == null && timingDepthUncertaintyIn == null &&
-                    separationDepthUncertaintyIn == null && combinedDepthUncertaintyIn == null &&
-                    expandedDepthUncertaintyIn == null ? null
-                    : new InInches(depthFromTimeIn, timingDepthUncertaintyIn, separationDepthUncertaintyIn,
-                    combinedDepthUncertaintyIn, expandedDepthUncertaintyIn);
+            return Mirrors.orNone(new InInches(depthFromTimeIn, timingDepthUncertaintyIn,
+                    separationDepthUncertaintyIn, combinedDepthUncertaintyIn, expandedDepthUncertaintyIn));
         }
     }
 }

@@ -13,7 +13,6 @@ record StampVerificationResponse(
         String stampedServiceVersion,
         String serviceVersion,
         boolean contentIntact,
-        @Schema(types = {"boolean", "null"})
         @JsonInclude(JsonInclude.Include.ALWAYS) Boolean signatureValid,
         boolean reproducible,
         List<Difference> differences,

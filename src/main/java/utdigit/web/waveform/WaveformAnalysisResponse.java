@@ -27,31 +27,24 @@ record WaveformAnalysisResponse(
 
         double upperFrequencyMhz,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> lowerFrequency20dbMhz,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> upperFrequency20dbMhz,
 
         double centreFrequencyMhz,
 
         double bandwidthPercent,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> pulseDuration6dbUs,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> pulseDuration20dbUs,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> cycles6db,
 
         double energyNearRecordNyquistFraction,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> modelPulseDuration6dbUs,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> modelCycles6db,
 
         Double effectiveSamplingFrequencyMhz,
@@ -60,23 +53,18 @@ record WaveformAnalysisResponse(
 
         Double nyquistFrequencyMhz,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> pulseAmplitudeLossDb,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> worstPhaseNs,
 
         Double energyAboveNyquistFraction,
 
         Optional<Double> requiredSamplingFrequencyPulseMhz,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> modelPulseAmplitudeLossDb,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> modelEnergyAboveNyquistFraction,
 
-        @Schema(types = {"number", "null"})
         Optional<Double> modelRequiredSamplingFrequencyPulseMhz,
 
         List<ToleranceCheck> toleranceChecks,
