@@ -8,6 +8,7 @@ import jakarta.validation.constraints.Min;
 import utdigit.core.dac.TcgMode;
 import utdigit.core.sheets.SheetSetup;
 import utdigit.web.problem.FieldErrors;
+import utdigit.web.units.Lengths;
 import utdigit.web.units.Mirrors;
 import utdigit.web.units.VelocityFields;
 
@@ -17,62 +18,25 @@ import utdigit.web.units.VelocityFields;
         + "angle and wedge velocity, for the incidence-plane figures). Each length once: _mm or _in; each speed once: "
         + "_m_per_s or _in_per_us.")
 public record SheetSetupSection(
-        @Schema(description = "Pulse-echo -6 dB beam width at the reflector's sound path, mm; else the round probe's "
-                + "(probe.frequency_mhz, probe.element_diameter, the part's velocity) at sound_path", format = "double",
-                example = "8")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double beamWidth6dbMm,
-        @Schema(description = "Pulse-echo -6 dB beam width, in", format = "double", example = "0.315")
-        @DecimalMin(value = "0", inclusive = false) Double beamWidth6dbIn,
-        @Schema(description = "Sound path to the reflector the coverage is judged at, mm", format = "double",
-                example = "60")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double soundPathMm,
-        @Schema(description = "Sound path to the reflector, in", format = "double", example = "2.36")
-        @DecimalMin(value = "0", inclusive = false) Double soundPathIn,
-        @Schema(description = "Distance between scan lines (index offset), mm", format = "double", example = "4")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double indexStepMm,
-        @Schema(description = "Index step, in", format = "double", example = "0.16")
-        @DecimalMin(value = "0", inclusive = false) Double indexStepIn,
-        @Schema(description = "Angle between neighbouring beams of a sector scan, deg (above 0, below 90)",
-                format = "double", example = "1")
+        @Lengths.Mm Double beamWidth6dbMm,
+        @Lengths.In Double beamWidth6dbIn,
+        @Lengths.Mm Double soundPathMm,
+        @Lengths.In Double soundPathIn,
+        @Lengths.Mm Double indexStepMm,
+        @Lengths.In Double indexStepIn,
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "90", inclusive = false) Double angularStepDeg,
-        @Schema(description = "Array element pitch, mm", format = "double", example = "0.6")
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax("100000") Double elementPitchMm,
-        @Schema(description = "Array element pitch, in", format = "double", example = "0.024")
-        @DecimalMin(value = "0", inclusive = false) Double elementPitchIn,
-        @Schema(description = "Elements fired together (1 to 65536)", format = "int32", example = "16")
+        @Lengths.Mm Double elementPitchMm,
+        @Lengths.In Double elementPitchIn,
         @Min(1) @Max(65536) Integer activeElements,
-        @Schema(description = "Largest steering angle used, from the array's normal in the medium where the beam is "
-                + "steered, deg (0 to below 90)", format = "double", example = "10")
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double maxSteeringAngleDeg,
-        @Schema(description = "Velocity of the medium where the beam is steered, m/s (100 to 20000): the wedge's for "
-                + "an array on a wedge; default the part's velocity (a contact array)", format = "double",
-                example = "2330")
         @DecimalMin("100") @DecimalMax("20000") Double steeringVelocityMPerS,
-        @Schema(description = "Span of the DAC curve from its highest point (at evaluation.reference_height_percent_fsh) "
-                + "to its lowest, dB (above 0, at most 60)", format = "double", example = "24")
         @DecimalMin(value = "0", inclusive = false) @DecimalMax("60") Double dacSpanDb,
-        @Schema(description = "How the DAC span is corrected: NONE, ANALOG (TCG before the converter) or DIGITAL (TCG "
-                + "on digitized data); default NONE")
         TcgMode tcg,
-        @Schema(description = "TOFD gate opening time in the part, us (0 to 100000)", format = "double", example = "10")
         @DecimalMin("0") @DecimalMax("100000") Double gateStartUs,
-        @Schema(description = "TOFD gate closing time in the part, us (0 to 100000)", format = "double", example = "16.5")
         @DecimalMin("0") @DecimalMax("100000") Double gateEndUs,
-        @Schema(description = "Velocity of the medium where the beam is steered, in/us (equivalent of 100 to 20000 "
-                + "m/s); the inch form of steering_velocity_m_per_s", format = "double", example = "0.0917")
         @DecimalMin(value = "0", inclusive = false) Double steeringVelocityInPerUs,
-        @Schema(description = "Angle beam: incident angle in the wedge, deg (0 to below 90); with "
-                + "wedge_velocity, probe.frequency_mhz, probe.element_diameter and the part's velocity it gives the "
-                + "incidence-plane figures (incidence_plane_aperture_mm, incidence_plane_near_field_length_mm, "
-                + "incidence_plane_beam_spread_6db_deg)", format = "double", example = "36",
-                minimum = "0", exclusiveMaximumValue = 90)
         @DecimalMin("0") @DecimalMax(value = "90", inclusive = false) Double incidentAngleDeg,
-        @Schema(description = "Angle beam: longitudinal velocity of the wedge, m/s (100 to 20000); wedge grades vary "
-                + "by maker and temperature: give the measured value", format = "double", example = "2730",
-                minimum = "100", maximum = "20000")
         @DecimalMin("100") @DecimalMax("20000") Double wedgeVelocityMPerS,
-        @Schema(description = "Angle beam: longitudinal velocity of the wedge, in/us (equivalent of 100 to 20000 m/s)",
-                format = "double", example = "0.1075")
         @DecimalMin(value = "0", inclusive = false) Double wedgeVelocityInPerUs) {
 
     /** The core's section with lengths in mm; field errors go to {@code errors} (section "setup"). */

@@ -198,6 +198,41 @@ public final class Mirrors {
         return mm == null ? null : mm.map(Units::mmToIn);
     }
 
+    /**
+     * An answer's inch mirrors, or null (the in_inches object omitted) when every mirror is null,
+     * i.e. the answer has no length result with these inputs.
+     */
+    public static <R extends Record> R orNone(R mirrors) {
+        try {
+            for (java.lang.invoke.MethodHandle accessor : ACCESSORS.get(mirrors.getClass())) {
+                if (accessor.invoke(mirrors) != null) {
+                    return mirrors;
+                }
+            }
+            return null;
+        } catch (Throwable e) { // an accessor of a record's own component does not throw
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static final ClassValue<java.lang.invoke.MethodHandle[]> ACCESSORS = new ClassValue<>() {
+        @Override
+        protected java.lang.invoke.MethodHandle[] computeValue(Class<?> type) {
+            java.lang.reflect.RecordComponent[] components = type.getRecordComponents();
+            java.lang.invoke.MethodHandle[] accessors = new java.lang.invoke.MethodHandle[components.length];
+            for (int i = 0; i < components.length; i++) {
+                try {
+                    java.lang.reflect.Method accessor = components[i].getAccessor();
+                    accessor.setAccessible(true); // the mirror records are package-private
+                    accessors[i] = java.lang.invoke.MethodHandles.lookup().unreflect(accessor);
+                } catch (IllegalAccessException e) {
+                    throw new IllegalStateException(e);
+                }
+            }
+            return accessors;
+        }
+    };
+
     private static final String NUMBER = "(-?\\d+(?:\\.\\d+)?)";
     /** "12.5 mm" (not mm/us, mm^2 or a longer word). */
     private static final java.util.regex.Pattern LENGTH_WITH_UNIT =
