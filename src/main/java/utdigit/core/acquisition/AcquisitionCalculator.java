@@ -63,7 +63,7 @@ public final class AcquisitionCalculator {
         SampleClock clock = SampleClock.of(in.samplingFrequencyMhz(), decimationFactor, DecimationMode.DROP);
         int bitDepth = in.bitDepth();
         if (bitDepth < 1 || bitDepth > 32) {
-            throw AcquisitionMessages.bitDepthOutOfRange(bitDepth);
+            throw CalculationException.invalid("bit_depth", bitDepth, "must be an integer from 1 to 32");
         }
         double scanIncrementMm = Checks.positive("scan_increment_mm", in.scanIncrementMm());
         double prfHz = Checks.positive("pulse_repetition_frequency_hz", in.pulseRepetitionFrequencyHz());
@@ -115,7 +115,8 @@ public final class AcquisitionCalculator {
 
     private static Gate gate(AcquisitionInput in, Double velocityMPerS, List<Reference> references) {
         if (in.gateLengthUs() != null && in.gateLengthMm() != null) {
-            throw AcquisitionMessages.twoGates();
+            throw CalculationException.notApplicable("gate_length_mm",
+                    "give the gate as gate_length_us or as gate_length_mm, not both");
         } else if (in.gateLengthUs() != null) {
             return new Gate("gate_length_us", Checks.positive("gate_length_us", in.gateLengthUs()));
         } else if (in.gateLengthMm() != null) {
@@ -123,7 +124,8 @@ public final class AcquisitionCalculator {
             references.add(Reference.of("gate length from a sound path", Sources.DEFINITIONS));
             return new Gate("gate_length_mm", gateUs);
         } else {
-            throw AcquisitionMessages.gateRequired();
+            throw CalculationException.invalid("gate_length_us", Double.NaN,
+                    "is required (or gate_length_mm with a velocity)");
         }
     }
 
@@ -136,7 +138,9 @@ public final class AcquisitionCalculator {
     private static Counts counts(AcquisitionInput in, List<Reference> references) {
         if (in.fmcElementCount() != null) {
             if (in.focalLaws() != null) {
-                throw AcquisitionMessages.focalLawsWithMatrixCapture();
+                throw CalculationException.notApplicable("focal_laws",
+                        "focal_laws applies to phased-array acquisition; with fmc_element_count the capture "
+                                + "(FMC or HMC) decides firings and A-scans");
             }
             String countField = "fmc_element_count";
             int n = Checks.atLeastOne(countField, in.fmcElementCount());
@@ -145,7 +149,8 @@ public final class AcquisitionCalculator {
             return new Counts(countField, captureUsed.firings(n), captureUsed.aScans(n), null, captureUsed);
         }
         if (in.capture() != null) {
-            throw AcquisitionMessages.captureWithoutMatrix();
+            throw CalculationException.notApplicable("capture",
+                    "capture applies only with fmc_element_count (matrix capture)");
         }
         String countField = "focal_laws";
         int focalLawsUsed = in.focalLaws() == null ? 1 : Checks.atLeastOne(countField, in.focalLaws());
@@ -157,7 +162,8 @@ public final class AcquisitionCalculator {
     private static Double decayFactor(AcquisitionInput in, Double roundTripUs) {
         if (roundTripUs == null) {
             if (in.wraparoundDecayFactor() != null) {
-                throw AcquisitionMessages.decayFactorWithoutRoundTrip();
+                throw CalculationException.notApplicable("wraparound_decay_factor",
+                        "wraparound_decay_factor applies only with max_round_trip_us or max_sound_path_mm");
             }
             return null;
         }
@@ -340,19 +346,22 @@ public final class AcquisitionCalculator {
         boolean needed = in.gateLengthMm() != null || in.maxSoundPathMm() != null;
         if (in.velocityMPerS() == null) {
             if (needed) {
-                throw AcquisitionMessages.velocityRequired();
+                throw CalculationException.invalid("velocity_m_per_s", Double.NaN,
+                        "is required with gate_length_mm or max_sound_path_mm");
             }
             return null;
         }
         if (!needed) {
-            throw AcquisitionMessages.velocityNotApplicable();
+            throw CalculationException.notApplicable("velocity_m_per_s",
+                    "a velocity applies only with gate_length_mm or max_sound_path_mm");
         }
         return Checks.positive("velocity_m_per_s", in.velocityMPerS());
     }
 
     private static Double roundTripUs(AcquisitionInput in, Double velocityMPerS) {
         if (in.maxRoundTripUs() != null && in.maxSoundPathMm() != null) {
-            throw AcquisitionMessages.twoRoundTrips();
+            throw CalculationException.notApplicable("max_sound_path_mm",
+                    "give the round trip as max_round_trip_us or as max_sound_path_mm, not both");
         }
         if (in.maxRoundTripUs() != null) {
             return Checks.positive("max_round_trip_us", in.maxRoundTripUs());

@@ -22,51 +22,6 @@ final class AcquisitionMessages {
     /** A number for a message: six significant digits, no trailing zeros, no exponent. */
     private static final MathContext MESSAGE_DIGITS = new MathContext(6, RoundingMode.HALF_EVEN);
 
-    static CalculationException bitDepthOutOfRange(int bitDepth) {
-        return CalculationException.invalid("bit_depth", bitDepth, "must be an integer from 1 to 32");
-    }
-
-    static CalculationException twoGates() {
-        return CalculationException.notApplicable("gate_length_mm",
-                "give the gate as gate_length_us or as gate_length_mm, not both");
-    }
-
-    static CalculationException gateRequired() {
-        return CalculationException.invalid("gate_length_us", Double.NaN,
-                "is required (or gate_length_mm with a velocity)");
-    }
-
-    static CalculationException focalLawsWithMatrixCapture() {
-        return CalculationException.notApplicable("focal_laws",
-                "focal_laws applies to phased-array acquisition; with fmc_element_count the capture "
-                        + "(FMC or HMC) decides firings and A-scans");
-    }
-
-    static CalculationException captureWithoutMatrix() {
-        return CalculationException.notApplicable("capture",
-                "capture applies only with fmc_element_count (matrix capture)");
-    }
-
-    static CalculationException decayFactorWithoutRoundTrip() {
-        return CalculationException.notApplicable("wraparound_decay_factor",
-                "wraparound_decay_factor applies only with max_round_trip_us or max_sound_path_mm");
-    }
-
-    static CalculationException velocityRequired() {
-        return CalculationException.invalid("velocity_m_per_s", Double.NaN,
-                "is required with gate_length_mm or max_sound_path_mm");
-    }
-
-    static CalculationException velocityNotApplicable() {
-        return CalculationException.notApplicable("velocity_m_per_s",
-                "a velocity applies only with gate_length_mm or max_sound_path_mm");
-    }
-
-    static CalculationException twoRoundTrips() {
-        return CalculationException.notApplicable("max_sound_path_mm",
-                "give the round trip as max_round_trip_us or as max_sound_path_mm, not both");
-    }
-
     static CalculationException gateLongerThanPeriod(String gateField, double gateUs, double periodUs, double prfHz) {
         return CalculationException.impossible(String.format(Locale.ROOT,
                 "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"

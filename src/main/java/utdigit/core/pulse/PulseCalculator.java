@@ -366,22 +366,29 @@ public final class PulseCalculator {
 
     private static void checkApplicability(PulseInput in) {
         if (in.centreFrequencyConvention() != null && in.bandwidthPercent() == null) {
-            throw PulseMessages.conventionWithoutBandwidth();
+            throw CalculationException.notApplicable("centre_frequency_convention",
+                    "centre_frequency_convention applies only together with bandwidth_percent");
         }
         if (in.distanceMm() != null && in.elementDiameterMm() == null) {
-            throw PulseMessages.distanceWithoutDiameter();
+            throw CalculationException.notApplicable("distance_mm",
+                    "distance_mm needs element_diameter_mm: the beam diameter follows from the element's beam spread");
         }
         if (in.wedgePathMm() != null && in.wedgeVelocityMPerS() == null) {
-            throw PulseMessages.wedgePathWithoutWedgeVelocity();
+            throw CalculationException.notApplicable("wedge_path_mm",
+                    "wedge_path_mm needs wedge_velocity_m_per_s to give the near field left in the part");
         }
         if (in.wedgePathMm() != null && in.elementDiameterMm() == null) {
-            throw PulseMessages.wedgePathWithoutDiameter();
+            throw CalculationException.notApplicable("wedge_path_mm",
+                    "wedge_path_mm needs element_diameter_mm: the near field left in the part follows from "
+                            + "the element's near field");
         }
         if (in.incidentAngleDeg() != null && in.wedgeVelocityMPerS() == null) {
-            throw PulseMessages.incidentAngleWithoutWedgeVelocity();
+            throw CalculationException.notApplicable("incident_angle_deg",
+                    "incident_angle_deg needs wedge_velocity_m_per_s to give the refracted angle");
         }
         if (in.wedgeVelocityMPerS() != null && in.wedgePathMm() == null && in.incidentAngleDeg() == null) {
-            throw PulseMessages.wedgeVelocityAlone();
+            throw CalculationException.notApplicable("wedge_velocity_m_per_s",
+                    "wedge_velocity_m_per_s applies only together with wedge_path_mm or incident_angle_deg");
         }
     }
 }

@@ -12,7 +12,6 @@ import static utdigit.core.pulse.PulseCalculator.REAL_LOWER_EDGE_BELOW_MODEL;
 
 import java.math.MathContext;
 import java.util.Optional;
-import utdigit.core.common.CalculationException;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Warning;
 
@@ -22,41 +21,6 @@ final class PulseMessages {
 
     /** A number for a message: 4 significant digits, no exponent. */
     private static final MathContext MESSAGE_DIGITS = new MathContext(4);
-
-    private static CalculationException notApplicable(String field, String message) {
-        return CalculationException.notApplicable(field, message);
-    }
-
-    static CalculationException conventionWithoutBandwidth() {
-        return notApplicable("centre_frequency_convention",
-                "centre_frequency_convention applies only together with bandwidth_percent");
-    }
-
-    static CalculationException distanceWithoutDiameter() {
-        return notApplicable("distance_mm",
-                "distance_mm needs element_diameter_mm: the beam diameter follows from the element's beam spread");
-    }
-
-    static CalculationException wedgePathWithoutWedgeVelocity() {
-        return notApplicable("wedge_path_mm",
-                "wedge_path_mm needs wedge_velocity_m_per_s to give the near field left in the part");
-    }
-
-    static CalculationException wedgePathWithoutDiameter() {
-        return notApplicable("wedge_path_mm",
-                "wedge_path_mm needs element_diameter_mm: the near field left in the part follows from "
-                        + "the element's near field");
-    }
-
-    static CalculationException incidentAngleWithoutWedgeVelocity() {
-        return notApplicable("incident_angle_deg",
-                "incident_angle_deg needs wedge_velocity_m_per_s to give the refracted angle");
-    }
-
-    static CalculationException wedgeVelocityAlone() {
-        return notApplicable("wedge_velocity_m_per_s",
-                "wedge_velocity_m_per_s applies only together with wedge_path_mm or incident_angle_deg");
-    }
 
     static Warning bandwidthAbove100Percent(double bandwidthPercent, double modelLowerMhz,
             Optional<Double> realLowerMhz) {

@@ -137,10 +137,12 @@ public final class QuantizationCalculator {
         Double referenceHeight = in.referenceHeightPercentFsh();
         Double evaluationLevelDb = in.evaluationLevelDb();
         if (referenceHeight != null && evaluationLevelDb == null) {
-            throw QuantizationMessages.referenceWithoutEvaluationLevel();
+            throw CalculationException.notApplicable("reference_height_percent_fsh",
+                    "reference_height_percent_fsh applies only together with evaluation_level_db");
         }
         if (evaluationLevelDb != null && referenceHeight == null) {
-            throw QuantizationMessages.evaluationLevelWithoutReference();
+            throw CalculationException.notApplicable("evaluation_level_db",
+                    "evaluation_level_db applies only together with reference_height_percent_fsh");
         }
         if (referenceHeight != null) {
             Checks.positive("reference_height_percent_fsh", referenceHeight);

@@ -20,16 +20,6 @@ import utdigit.core.common.Warning;
 final class QuantizationMessages {
     private QuantizationMessages() {}
 
-    static CalculationException referenceWithoutEvaluationLevel() {
-        return CalculationException.notApplicable("reference_height_percent_fsh",
-                "reference_height_percent_fsh applies only together with evaluation_level_db");
-    }
-
-    static CalculationException evaluationLevelWithoutReference() {
-        return CalculationException.notApplicable("evaluation_level_db",
-                "evaluation_level_db applies only together with reference_height_percent_fsh");
-    }
-
     static CalculationException heightNotReachable(String field, double heightPercentFsh, double gainDb,
             double atConverterPercentFsh) {
         String message = String.format(Locale.ROOT,
@@ -68,10 +58,8 @@ final class QuantizationMessages {
     }
 
     static Warning errorUnderUndefined(double signalHeight, double lowBoundPercentFsh, Quantizer quantizer) {
-        return Warning.of(AMPLITUDE_ERROR_UNDER_UNDEFINED, String.format(Locale.ROOT,
-                "signal_height_percent_fsh %s is at or below the quantizer's low bound (%s %%FSH with %s):"
-                        + " it can read as 0, so amplitude_error_under_db has no finite value; it is null",
-                fmt(signalHeight), fmt(lowBoundPercentFsh), quantizer));
+        return atLowBound(AMPLITUDE_ERROR_UNDER_UNDEFINED, "signal_height_percent_fsh", signalHeight,
+                lowBoundPercentFsh, quantizer, "amplitude_error_under_db");
     }
 
     static Warning minimumHeightAboveFullScreen(double minimumHeight, double highestDisplayable, double toleranceDb) {
@@ -82,10 +70,8 @@ final class QuantizationMessages {
     }
 
     static Warning signalHeightBelowMinimum(double signalHeight, double minimumHeight, double toleranceDb) {
-        return Warning.of(SIGNAL_HEIGHT_BELOW_MINIMUM, String.format(Locale.ROOT,
-                "signal_height_percent_fsh %s is below minimum_height_percent_fsh %s: its reading can be"
-                        + " off by more than amplitude_tolerance_db %s",
-                fmt(signalHeight), fmt(minimumHeight), fmt(toleranceDb)));
+        return belowMinimum(SIGNAL_HEIGHT_BELOW_MINIMUM, "signal_height_percent_fsh", signalHeight, minimumHeight,
+                "its reading can be off by more than", toleranceDb);
     }
 
     static Warning evaluationHeightAboveFullScreen(double evaluationHeight) {
@@ -105,17 +91,30 @@ final class QuantizationMessages {
 
     static Warning evaluationErrorUnderUndefined(double evaluationHeight, double lowBoundPercentFsh,
             Quantizer quantizer) {
-        return Warning.of(EVALUATION_ERROR_UNDER_UNDEFINED, String.format(Locale.ROOT,
-                "evaluation_height_percent_fsh %s is at or below the quantizer's low bound (%s %%FSH with"
-                        + " %s): it can read as 0, so evaluation_error_under_db has no finite value; it is null",
-                fmt(evaluationHeight), fmt(lowBoundPercentFsh), quantizer));
+        return atLowBound(EVALUATION_ERROR_UNDER_UNDEFINED, "evaluation_height_percent_fsh", evaluationHeight,
+                lowBoundPercentFsh, quantizer, "evaluation_error_under_db");
     }
 
     static Warning evaluationHeightBelowMinimum(double evaluationHeight, double minimumHeight, double toleranceDb) {
-        return Warning.of(EVALUATION_HEIGHT_BELOW_MINIMUM, String.format(Locale.ROOT,
-                "evaluation_height_percent_fsh %s is below minimum_height_percent_fsh %s: the evaluation"
-                        + " level is not read within amplitude_tolerance_db %s",
-                fmt(evaluationHeight), fmt(minimumHeight), fmt(toleranceDb)));
+        return belowMinimum(EVALUATION_HEIGHT_BELOW_MINIMUM, "evaluation_height_percent_fsh", evaluationHeight,
+                minimumHeight, "the evaluation level is not read within", toleranceDb);
+    }
+
+    /** A height (signal or evaluation) at or below the quantizer's low bound: its under error has no value. */
+    private static Warning atLowBound(String code, String heightField, double heightPercentFsh,
+            double lowBoundPercentFsh, Quantizer quantizer, String errorField) {
+        return Warning.of(code, String.format(Locale.ROOT,
+                "%s %s is at or below the quantizer's low bound (%s %%FSH with %s): it can read as 0, so %s has no"
+                        + " finite value; it is null",
+                heightField, fmt(heightPercentFsh), fmt(lowBoundPercentFsh), quantizer, errorField));
+    }
+
+    /** A height (signal or evaluation) below the minimum height read within the tolerance. */
+    private static Warning belowMinimum(String code, String heightField, double heightPercentFsh,
+            double minimumHeightPercentFsh, String consequence, double toleranceDb) {
+        return Warning.of(code, String.format(Locale.ROOT,
+                "%s %s is below minimum_height_percent_fsh %s: %s amplitude_tolerance_db %s",
+                heightField, fmt(heightPercentFsh), fmt(minimumHeightPercentFsh), consequence, fmt(toleranceDb)));
     }
 
     static Warning averagingNoiseOnly(int averaging, double averagingSnrGainDb) {

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import org.apache.commons.math3.special.Erf;
+import utdigit.core.common.CalculationException;
 import utdigit.core.common.Reference;
 import utdigit.core.common.SearchBudget;
 import utdigit.core.common.Sources;
@@ -121,14 +122,16 @@ public final class SamplingCalculator {
             DecimationMode mode = in.decimationMode() == null ? DecimationMode.DROP : in.decimationMode();
             SampledSignal signal = in.signal() == null ? SampledSignal.RF : in.signal();
             if (signal == SampledSignal.ENVELOPE && in.peakReading() != null) {
-                throw SamplingMessages.peakReadingWithEnvelope();
+                throw CalculationException.notApplicable("peak_reading",
+                        "peak_reading applies only to signal RF; with signal ENVELOPE the envelope samples are read");
             }
             PeakReading reading = signal == SampledSignal.RF
                     ? (in.peakReading() == null ? PeakReading.ABSOLUTE : in.peakReading())
                     : null;
             boolean withBandwidth = in.bandwidthPercent() != null;
             if (!withBandwidth && in.centreFrequencyConvention() != null) {
-                throw SamplingMessages.conventionWithoutBandwidth();
+                throw CalculationException.notApplicable("centre_frequency_convention",
+                        "centre_frequency_convention applies only with bandwidth_percent");
             }
             CentreFrequencyConvention convention = withBandwidth
                     ? (in.centreFrequencyConvention() == null
@@ -137,7 +140,9 @@ public final class SamplingCalculator {
             TfmInputs tfm = TfmInputs.check(in, withBandwidth);
             if (withBandwidth && in.amplitudeToleranceDb() != null && signal == SampledSignal.RF
                     && !(in.bandwidthPercent() >= MIN_BANDWIDTH_PERCENT_FOR_PULSE_RATE)) {
-                throw SamplingMessages.bandwidthTooNarrowForRateSearch(in.bandwidthPercent());
+                throw CalculationException.invalid("bandwidth_percent", in.bandwidthPercent(),
+                        "must be >= 1 with amplitude_tolerance_db and signal RF: the search for "
+                                + "required_sampling_frequency_pulse_mhz covers bandwidths of 1 % and above");
             }
             return new Options(m, mode, signal, reading, withBandwidth, convention, tfm);
         }
@@ -398,26 +403,31 @@ public final class SamplingCalculator {
         static TfmInputs check(SamplingInput in, boolean withBandwidth) {
             boolean withGrid = in.tfmGridSpacingMm() != null;
             if (!withGrid && in.tfmImage() != null) {
-                throw SamplingMessages.tfmImageWithoutGrid();
+                throw CalculationException.notApplicable("tfm_image", "tfm_image applies only with tfm_grid_spacing");
             }
             int lateralCount = (in.tfmLateralGridSpacingMm() != null ? 1 : 0) + (in.tfmApertureMm() != null ? 1 : 0)
                     + (in.tfmDepthMm() != null ? 1 : 0);
             if (lateralCount != 0 && lateralCount != 3) {
                 String given = in.tfmLateralGridSpacingMm() != null ? "tfm_lateral_grid_spacing_mm"
                         : in.tfmApertureMm() != null ? "tfm_aperture_mm" : "tfm_depth_mm";
-                throw SamplingMessages.lateralTogether(given);
+                throw CalculationException.notApplicable(given,
+                        "tfm_lateral_grid_spacing, tfm_aperture and tfm_depth go together: give all three or none");
             }
             boolean withLateral = lateralCount == 3;
             if (withGrid || withLateral) {
                 if (in.velocityMPerS() == null) {
-                    throw SamplingMessages.tfmWithoutVelocity(withGrid ? "tfm_grid_spacing_mm"
-                            : "tfm_lateral_grid_spacing_mm");
+                    throw CalculationException.notApplicable(withGrid ? "tfm_grid_spacing_mm" : "tfm_lateral_grid_spacing_mm",
+                            "the TFM grid figures need a velocity (velocity_m_per_s, velocity_in_per_us or material)");
                 }
             } else if (in.velocityMPerS() != null) {
-                throw SamplingMessages.velocityWithoutTfm();
+                throw CalculationException.notApplicable("velocity_m_per_s",
+                        "a velocity applies only to the TFM grid figures (tfm_grid_spacing, or tfm_lateral_grid_spacing "
+                                + "with tfm_aperture and tfm_depth)");
             }
             if (withGrid && in.tfmImage() == TfmImage.ENVELOPE && !withBandwidth) {
-                throw SamplingMessages.envelopeImageWithoutBandwidth();
+                throw CalculationException.notApplicable("tfm_image",
+                        "tfm_image ENVELOPE needs bandwidth_percent: its depth loss 6 (dz/w)^2 uses the pulse's -6 dB "
+                                + "duration");
             }
             return new TfmInputs(withGrid, withLateral);
         }

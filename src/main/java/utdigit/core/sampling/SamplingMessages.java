@@ -16,55 +16,12 @@ import static utdigit.core.sampling.SamplingCalculator.TFM_GRID_STEP_AT_OR_ABOVE
 import static utdigit.core.sampling.SamplingCalculator.TFM_STEP_NOT_BELOW_RESPONSE_WIDTH;
 
 import java.util.Locale;
-import utdigit.core.common.CalculationException;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Warning;
 
 /** Every warning and failure text of the sampling assessment, one factory per condition. */
 final class SamplingMessages {
     private SamplingMessages() {}
-
-    static CalculationException peakReadingWithEnvelope() {
-        return CalculationException.notApplicable("peak_reading",
-                "peak_reading applies only to signal RF; with signal ENVELOPE the envelope samples are read");
-    }
-
-    static CalculationException conventionWithoutBandwidth() {
-        return CalculationException.notApplicable("centre_frequency_convention",
-                "centre_frequency_convention applies only with bandwidth_percent");
-    }
-
-    static CalculationException bandwidthTooNarrowForRateSearch(double bandwidthPercent) {
-        return CalculationException.invalid("bandwidth_percent", bandwidthPercent,
-                "must be >= 1 with amplitude_tolerance_db and signal RF: the search for "
-                        + "required_sampling_frequency_pulse_mhz covers bandwidths of 1 % and above");
-    }
-
-    static CalculationException tfmImageWithoutGrid() {
-        return CalculationException.notApplicable("tfm_image", "tfm_image applies only with tfm_grid_spacing");
-    }
-
-    static CalculationException lateralTogether(String given) {
-        return CalculationException.notApplicable(given,
-                "tfm_lateral_grid_spacing, tfm_aperture and tfm_depth go together: give all three or none");
-    }
-
-    static CalculationException tfmWithoutVelocity(String field) {
-        return CalculationException.notApplicable(field,
-                "the TFM grid figures need a velocity (velocity_m_per_s, velocity_in_per_us or material)");
-    }
-
-    static CalculationException velocityWithoutTfm() {
-        return CalculationException.notApplicable("velocity_m_per_s",
-                "a velocity applies only to the TFM grid figures (tfm_grid_spacing, or tfm_lateral_grid_spacing "
-                        + "with tfm_aperture and tfm_depth)");
-    }
-
-    static CalculationException envelopeImageWithoutBandwidth() {
-        return CalculationException.notApplicable("tfm_image",
-                "tfm_image ENVELOPE needs bandwidth_percent: its depth loss 6 (dz/w)^2 uses the pulse's -6 dB "
-                        + "duration");
-    }
 
     static Warning samplesPerPeriodAtMost2(double samplesPerPeriod, boolean sineBoundWithoutValue) {
         return Warning.of(SAMPLES_PER_PERIOD_AT_MOST_2, String.format(Locale.ROOT,

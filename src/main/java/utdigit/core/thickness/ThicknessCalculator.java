@@ -61,7 +61,9 @@ public final class ThicknessCalculator {
         int echoSpacing = Checks.atLeastOne("echo_spacing",
                 in.echoSpacing() == null ? DEFAULT_ECHO_SPACING : in.echoSpacing());
         if (measurement == Measurement.FIRST_ECHO && echoSpacing != 1) {
-            throw ThicknessMessages.echoSpacingWithFirstEcho();
+            throw CalculationException.notApplicable("echo_spacing",
+                    "echo_spacing other than 1 applies only to measurement ECHO_TO_ECHO: FIRST_ECHO times one"
+                            + " round trip from the trigger");
         }
         int decimationFactor = in.decimationFactor() == null ? DEFAULT_DECIMATION_FACTOR : in.decimationFactor();
         SampleClock clock = SampleClock.of(in.samplingFrequencyMhz(), decimationFactor, DecimationMode.DROP);
@@ -173,7 +175,8 @@ public final class ThicknessCalculator {
     private static double velocityUncertaintyMPerS(
             ThicknessInput in, double velocityMPerS, List<Warning> warnings, List<Reference> references) {
         if (in.velocityUncertaintyMPerS() != null && in.velocityUncertaintyPercent() != null) {
-            throw ThicknessMessages.twoVelocityUncertainties();
+            throw CalculationException.notApplicable("velocity_uncertainty_percent",
+                    "give velocity_uncertainty_m_per_s or velocity_uncertainty_percent, not both");
         }
         double uncertaintyMPerS;
         if (in.velocityUncertaintyMPerS() != null) {
@@ -194,10 +197,12 @@ public final class ThicknessCalculator {
 
     private static void checkPulseInputs(ThicknessInput in) {
         if (in.frequencyMhz() != null && in.bandwidthPercent() == null) {
-            throw ThicknessMessages.bandwidthRequired();
+            throw CalculationException.notApplicable("bandwidth_percent",
+                    "bandwidth_percent is required with frequency_mhz for the pulse length");
         }
         if (in.bandwidthPercent() != null && in.frequencyMhz() == null) {
-            throw ThicknessMessages.frequencyRequired();
+            throw CalculationException.notApplicable("frequency_mhz",
+                    "frequency_mhz is required with bandwidth_percent for the pulse length");
         }
         if (in.frequencyMhz() != null) {
             Checks.positive("frequency_mhz", in.frequencyMhz());

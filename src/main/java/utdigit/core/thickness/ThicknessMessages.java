@@ -3,34 +3,12 @@ package utdigit.core.thickness;
 import static utdigit.core.thickness.ThicknessCalculator.THICKNESS_BELOW_AXIAL_RESOLUTION;
 
 import java.util.Locale;
-import utdigit.core.common.CalculationException;
 import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Warning;
 
 /** Every warning and failure text of the thickness resolution, one factory per condition. */
 final class ThicknessMessages {
     private ThicknessMessages() {}
-
-    static CalculationException echoSpacingWithFirstEcho() {
-        return CalculationException.notApplicable("echo_spacing",
-                "echo_spacing other than 1 applies only to measurement ECHO_TO_ECHO: FIRST_ECHO times one"
-                        + " round trip from the trigger");
-    }
-
-    static CalculationException twoVelocityUncertainties() {
-        return CalculationException.notApplicable("velocity_uncertainty_percent",
-                "give velocity_uncertainty_m_per_s or velocity_uncertainty_percent, not both");
-    }
-
-    static CalculationException bandwidthRequired() {
-        return CalculationException.notApplicable("bandwidth_percent",
-                "bandwidth_percent is required with frequency_mhz for the pulse length");
-    }
-
-    static CalculationException frequencyRequired() {
-        return CalculationException.notApplicable("frequency_mhz",
-                "frequency_mhz is required with bandwidth_percent for the pulse length");
-    }
 
     static Warning samplingTermDominates(Measurement measurement, double coverageFactor, double coveragePercent,
             double worstCaseMm) {

@@ -205,31 +205,40 @@ public final class TimeOfFlightCalculator {
             onlyTofd("frequency_mhz", in.frequencyMhz(), technique);
             onlyTofd("bandwidth_percent", in.bandwidthPercent(), technique);
             if (timeReference == TimeReference.LATERAL_WAVE) {
-                throw TimingMessages.lateralWaveOnlyTofd(technique);
+                throw CalculationException.notApplicable("time_reference",
+                        "time_reference LATERAL_WAVE applies only to technique TOFD (here " + technique + ")");
             }
         }
         if (technique != Technique.PULSE_ECHO && in.refractedAngleDeg() != null) {
-            throw TimingMessages.angleOnlyPulseEcho(technique);
+            throw CalculationException.notApplicable("refracted_angle_deg",
+                    "refracted_angle_deg applies only to technique PULSE_ECHO (here " + technique + ")"
+                            + (technique == Technique.TOFD ? "; the TOFD geometry comes from probe_centre_separation" : ""));
         }
         if (technique == Technique.TOFD) {
             if (in.probeCentreSeparationMm() == null) {
-                throw TimingMessages.separationRequired();
+                throw CalculationException.notApplicable("probe_centre_separation",
+                        "probe_centre_separation is required for TOFD");
             }
             if (in.pulseDurationUs() != null && (in.frequencyMhz() != null || in.bandwidthPercent() != null)) {
-                throw TimingMessages.twoPulseDurations();
+                throw CalculationException.notApplicable("pulse_duration_us",
+                        "give the pulse duration by pulse_duration_us or by frequency_mhz with bandwidth_percent,"
+                                + " not both");
             }
             if (in.frequencyMhz() != null && in.bandwidthPercent() == null) {
-                throw TimingMessages.bandwidthRequired();
+                throw CalculationException.notApplicable("bandwidth_percent",
+                        "bandwidth_percent is required with frequency_mhz for the TOFD pulse duration");
             }
             if (in.bandwidthPercent() != null && in.frequencyMhz() == null) {
-                throw TimingMessages.frequencyRequired();
+                throw CalculationException.notApplicable("frequency_mhz",
+                        "frequency_mhz is required with bandwidth_percent for the TOFD pulse duration");
             }
         }
     }
 
     private static void onlyTofd(String field, Double value, Technique technique) {
         if (value != null) {
-            throw TimingMessages.onlyTofd(field, technique);
+            throw CalculationException.notApplicable(field,
+                    field + " applies only to technique TOFD (here " + technique + ")");
         }
     }
 }

@@ -23,43 +23,6 @@ final class TimingMessages {
 
     // Time-of-flight resolution.
 
-    static CalculationException onlyTofd(String field, Technique technique) {
-        return CalculationException.notApplicable(field,
-                field + " applies only to technique TOFD (here " + technique + ")");
-    }
-
-    static CalculationException lateralWaveOnlyTofd(Technique technique) {
-        return CalculationException.notApplicable("time_reference",
-                "time_reference LATERAL_WAVE applies only to technique TOFD (here " + technique + ")");
-    }
-
-    static CalculationException angleOnlyPulseEcho(Technique technique) {
-        return CalculationException.notApplicable("refracted_angle_deg",
-                "refracted_angle_deg applies only to technique PULSE_ECHO (here " + technique + ")"
-                        + (technique == Technique.TOFD ? "; the TOFD geometry comes from probe_centre_separation" : ""));
-    }
-
-    static CalculationException separationRequired() {
-        return CalculationException.notApplicable("probe_centre_separation",
-                "probe_centre_separation is required for TOFD");
-    }
-
-    static CalculationException twoPulseDurations() {
-        return CalculationException.notApplicable("pulse_duration_us",
-                "give the pulse duration by pulse_duration_us or by frequency_mhz with bandwidth_percent,"
-                        + " not both");
-    }
-
-    static CalculationException bandwidthRequired() {
-        return CalculationException.notApplicable("bandwidth_percent",
-                "bandwidth_percent is required with frequency_mhz for the TOFD pulse duration");
-    }
-
-    static CalculationException frequencyRequired() {
-        return CalculationException.notApplicable("frequency_mhz",
-                "frequency_mhz is required with bandwidth_percent for the TOFD pulse duration");
-    }
-
     static CalculationException depthBelowThickness(double depthMm, double thicknessMm) {
         return CalculationException.impossible(
                 "depth (" + mm(depthMm) + ") lies below the back wall: it exceeds thickness ("
@@ -103,20 +66,6 @@ final class TimingMessages {
     }
 
     // TOFD set-up check.
-
-    static CalculationException halfGate(String field) {
-        return CalculationException.notApplicable(field,
-                "give the gate whole: gate_start_us and gate_end_us together");
-    }
-
-    static CalculationException depthAndMeasuredTime() {
-        return CalculationException.notApplicable("measured_time_us",
-                "give depth or measured_time_us for the depth uncertainty, not both");
-    }
-
-    static CalculationException onlyWithSamplingFrequency(String field) {
-        return CalculationException.notApplicable(field, field + " applies only with sampling_frequency_mhz");
-    }
 
     static CalculationException gateEndsBeforeStart(double startUs, double endUs) {
         return CalculationException.impossible("gate_end_us (" + fmt(endUs) + " us) must be after gate_start_us ("

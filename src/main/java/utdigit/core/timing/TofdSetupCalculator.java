@@ -77,17 +77,21 @@ public final class TofdSetupCalculator {
     /** The inputs that go together or apply only with another (all 400). */
     private static void checkApplicable(TofdSetupInput in) {
         if ((in.gateStartUs() == null) != (in.gateEndUs() == null)) {
-            throw TimingMessages.halfGate(in.gateStartUs() == null ? "gate_start_us" : "gate_end_us");
+            throw CalculationException.notApplicable(in.gateStartUs() == null ? "gate_start_us" : "gate_end_us",
+                    "give the gate whole: gate_start_us and gate_end_us together");
         }
         if (in.depthMm() != null && in.measuredTimeUs() != null) {
-            throw TimingMessages.depthAndMeasuredTime();
+            throw CalculationException.notApplicable("measured_time_us",
+                    "give depth or measured_time_us for the depth uncertainty, not both");
         }
         if (in.samplingFrequencyMhz() == null) {
             if (in.timeReference() != null) {
-                throw TimingMessages.onlyWithSamplingFrequency("time_reference");
+                throw CalculationException.notApplicable("time_reference",
+                        "time_reference applies only with sampling_frequency_mhz");
             }
             if (in.decimationFactor() != null) {
-                throw TimingMessages.onlyWithSamplingFrequency("decimation_factor");
+                throw CalculationException.notApplicable("decimation_factor",
+                        "decimation_factor applies only with sampling_frequency_mhz");
             }
         }
     }

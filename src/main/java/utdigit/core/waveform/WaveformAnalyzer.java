@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import utdigit.core.common.CalculationException;
 import utdigit.core.common.Decibels;
 import utdigit.core.common.Reference;
 import utdigit.core.common.SearchBudget;
@@ -131,7 +132,8 @@ public final class WaveformAnalyzer {
             largest = StrictMath.max(largest, StrictMath.abs(y[i]));
         }
         if (!(largest > 0.0)) {
-            throw WaveformMessages.noPulse();
+            throw CalculationException.notApplicable("samples",
+                    "the record holds no pulse: its samples are all equal (all zero or a constant offset)");
         }
         return y;
     }
@@ -220,7 +222,9 @@ public final class WaveformAnalyzer {
         Optional<Double> lower6 = lowerEdge(magnitude, peakBin, peakMagnitude * Decibels.toRatio(-6.0), resolutionMhz);
         Optional<Double> upper6 = upperEdge(magnitude, peakBin, peakMagnitude * Decibels.toRatio(-6.0), resolutionMhz);
         if (lower6.isEmpty() || upper6.isEmpty() || !(lower6.get() > 0.0)) {
-            throw WaveformMessages.noSixDbBand();
+            throw CalculationException.impossible("the record's spectrum does not fall 6 dB below its peak on both "
+                    + "sides inside 0 Hz to the record's Nyquist frequency: no -6 dB band can be measured",
+                    "samples");
         }
         double lowerMhz = lower6.get();
         double upperMhz = upper6.get();
@@ -407,7 +411,8 @@ public final class WaveformAnalyzer {
 
     private static void notWithoutTarget(String field, Object value) {
         if (value != null) {
-            throw WaveformMessages.notWithoutTarget(field);
+            throw CalculationException.notApplicable(field, field + " applies only with sampling_frequency_mhz (the "
+                    + "target rate to judge the record at)");
         }
     }
 

@@ -23,16 +23,6 @@ final class WaveformMessages {
 
     private static final MathContext DIGITS = new MathContext(6);
 
-    static CalculationException notWithoutTarget(String field) {
-        return CalculationException.notApplicable(field, field + " applies only with sampling_frequency_mhz (the "
-                + "target rate to judge the record at)");
-    }
-
-    static CalculationException noPulse() {
-        return CalculationException.notApplicable("samples",
-                "the record holds no pulse: its samples are all equal (all zero or a constant offset)");
-    }
-
     static Warning echoCut() {
         return Warning.of(ECHO_CUT_BY_RECORD, String.format(Locale.ROOT,
                 "the envelope at an end of the record is within %s dB of its peak: the echo is cut by the record, "
@@ -54,12 +44,6 @@ final class WaveformMessages {
                 "the record holds %s of its spectral energy above 0.8 of its own Nyquist frequency (%s MHz): "
                         + "noise or an under-sampled record; the measured figures may be affected",
                 num(near), num(recordNyquistMhz)));
-    }
-
-    static CalculationException noSixDbBand() {
-        return CalculationException.impossible("the record's spectrum does not fall 6 dB below its peak on both "
-                + "sides inside 0 Hz to the record's Nyquist frequency: no -6 dB band can be measured",
-                "samples");
     }
 
     static Warning edge20NotFound(boolean lowerMissing) {
