@@ -83,31 +83,15 @@ public final class WaveformAnalyzer {
         Band band = band(spectrum, convention, warnings, references);
         Durations durations = durations(echo, fsRec, band.centreMhz(), warnings, references);
         GaussianPulse pulse = gaussianModel(band, convention, warnings, references);
-        WaveformResult.ModelFigures model = pulse == null
-                ? new WaveformResult.ModelFigures(Optional.empty(), Optional.empty())
-                : new WaveformResult.ModelFigures(Optional.of(pulse.envelopeDurationUs(6.0)),
-                        Optional.of(pulse.cycles(6.0)));
+        WaveformResult.ModelFigures model = modelFigures(pulse);
         BandLimitedRecord record = new BandLimitedRecord(y, fsRec);
-        WaveformResult.TargetFigures target = null;
-        RecordLoss loss = RecordLoss.NONE;
-        if (withTarget) {
-            TargetClock at = targetClock(in);
-            double above = energyAbove(spectrum.power(), spectrum.total(), at.nyquistMhz(), spectrum.resolutionMhz());
-            references.add(Reference.of("energy above the target Nyquist frequency", Sources.WAVEFORM_ENERGY));
-            loss = recordLoss(record, at, band.centreMhz(), warnings, references);
-            Optional<Double> required = recordRequiredRate(in, record, at, band.centreMhz(), warnings, references);
-            ModelAtTarget modelAt = pulse == null ? ModelAtTarget.none(in)
-                    : modelAtTarget(in, at, band, convention, loss.loss(), warnings);
-            target = new WaveformResult.TargetFigures(at.clock().effectiveSamplingFrequencyMhz(),
-                    at.clock().effectiveSamplingFrequencyMhz() / band.centreMhz(), at.nyquistMhz(), loss.loss(),
-                    loss.phaseNs(), above, required, modelAt.loss(), modelAt.above(), modelAt.required(), at.m(),
-                    at.mode(), at.reading());
-        }
-        WaveformResult.Figure figure = figure(y, echo.envelope(), loss, spectrum, fsRec);
+        Target target = withTarget
+                ? target(in, spectrum, record, band, convention, pulse, warnings, references) : Target.NONE;
+        WaveformResult.Figure figure = figure(y, echo.envelope(), target.loss(), spectrum, fsRec);
         return new WaveformResult(y.length, spectrum.resolutionMhz(), echo.window(), spectrum.peakFrequencyMhz(),
                 band.lowerMhz(), band.upperMhz(), band.lower20(), band.upper20(), band.centreMhz(),
                 band.bandwidthPercent(), durations.duration6(), durations.duration20(), durations.cycles6(), near,
-                model, target, convention, figure, warnings, references);
+                model, target.figures(), convention, figure, warnings, references);
     }
 
     private static void refuseTargetOptions(WaveformInput in) {
@@ -268,6 +252,35 @@ public final class WaveformAnalyzer {
             references.add(Reference.of("Gaussian model beside the record", Sources.WAVEFORM_MODEL));
         }
         return pulse;
+    }
+
+    private static WaveformResult.ModelFigures modelFigures(GaussianPulse pulse) {
+        return pulse == null
+                ? new WaveformResult.ModelFigures(Optional.empty(), Optional.empty())
+                : new WaveformResult.ModelFigures(Optional.of(pulse.envelopeDurationUs(6.0)),
+                        Optional.of(pulse.cycles(6.0)));
+    }
+
+    /** The figures at the target rate, and the record's loss there (whose samples the figure shows). */
+    private record Target(WaveformResult.TargetFigures figures, RecordLoss loss) {
+        static final Target NONE = new Target(null, RecordLoss.NONE);
+    }
+
+    private static Target target(WaveformInput in, Spectrum spectrum, BandLimitedRecord record, Band band,
+            CentreFrequencyConvention convention, GaussianPulse pulse, List<Warning> warnings,
+            List<Reference> references) {
+        TargetClock at = targetClock(in);
+        double above = energyAbove(spectrum.power(), spectrum.total(), at.nyquistMhz(), spectrum.resolutionMhz());
+        references.add(Reference.of("energy above the target Nyquist frequency", Sources.WAVEFORM_ENERGY));
+        RecordLoss loss = recordLoss(record, at, band.centreMhz(), warnings, references);
+        Optional<Double> required = recordRequiredRate(in, record, at, band.centreMhz(), warnings, references);
+        ModelAtTarget modelAt = pulse == null ? ModelAtTarget.none(in)
+                : modelAtTarget(in, at, band, convention, loss.loss(), warnings);
+        WaveformResult.TargetFigures figures = new WaveformResult.TargetFigures(
+                at.clock().effectiveSamplingFrequencyMhz(), at.clock().effectiveSamplingFrequencyMhz() / band.centreMhz(),
+                at.nyquistMhz(), loss.loss(), loss.phaseNs(), above, required, modelAt.loss(), modelAt.above(),
+                modelAt.required(), at.m(), at.mode(), at.reading());
+        return new Target(figures, loss);
     }
 
     /** The target clock with its options' defaults. */
