@@ -159,12 +159,7 @@ public final class PulseCalculator {
             warnings.add(PulseMessages.noExactNearField(diameterMm, wavelengthMm));
         }
 
-        Optional<Double> beamSpread6dbDeg = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
-                wavelengthMm, diameterMm, NO_BEAM_SPREAD_6DB, "beam_spread_6db_deg",
-                "the pulse-echo -6 dB level", warnings);
-        Optional<Double> beamSpread20dbDeg = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
-                wavelengthMm, diameterMm, NO_BEAM_SPREAD_20DB, "beam_spread_20db_deg",
-                "the pulse-echo -20 dB level", warnings);
+        PulseEchoSpread spread = pulseEchoSpread(wavelengthMm, diameterMm, "", warnings);
         Optional<Double> beamSpreadNullDeg = beamSpread(PistonDirectivity.firstNullConstant(),
                 wavelengthMm, diameterMm, NO_BEAM_SPREAD_NULL, "beam_spread_null_deg",
                 "the first null", warnings);
@@ -184,9 +179,9 @@ public final class PulseCalculator {
         if (in.distanceMm() != null) {
             double nearFieldAheadMm = nearFieldInPartMm != null ? nearFieldInPartMm : nearFieldLengthMm;
             beamDiameter6dbMm = beamDiameter(in.distanceMm(), nearFieldAheadMm, nearFieldInPartMm != null,
-                    beamSpread6dbDeg, warnings, references);
+                    spread.at6db(), warnings, references);
         }
-        return new Element(nearFieldLengthMm, nearFieldLengthExactMm, beamSpread6dbDeg, beamSpread20dbDeg,
+        return new Element(nearFieldLengthMm, nearFieldLengthExactMm, spread.at6db(), spread.at20db(),
                 beamSpreadNullDeg, beamDiameter6dbMm, nearFieldInPartMm);
     }
 
@@ -242,12 +237,8 @@ public final class PulseCalculator {
         double apertureMm = PistonBeam.projectedApertureMm(in.elementDiameterMm(), alphaDeg, betaDeg);
         double nearFieldMm = PistonBeam.nearFieldLengthMm(apertureMm, wavelengthMm);
         references.add(Reference.of("incidence plane of an angle beam", Sources.INCIDENCE_PLANE));
-        Optional<Double> beamSpread6 = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
-                wavelengthMm, apertureMm, NO_BEAM_SPREAD_6DB, "incidence_plane_beam_spread_6db_deg",
-                "the pulse-echo -6 dB level", warnings);
-        Optional<Double> beamSpread20 = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
-                wavelengthMm, apertureMm, NO_BEAM_SPREAD_20DB, "incidence_plane_beam_spread_20db_deg",
-                "the pulse-echo -20 dB level", warnings);
+        PulseEchoSpread spread = pulseEchoSpread(wavelengthMm, apertureMm, "incidence_plane_", warnings);
+        Optional<Double> beamSpread6 = spread.at6db();
         Optional<Double> nearFieldInPart = null;
         if (in.wedgePathMm() != null) {
             nearFieldInPart = Optional.of(nearFieldMm - PistonBeam.incidencePlaneWedgePathInPartMm(in.wedgePathMm(),
@@ -270,7 +261,7 @@ public final class PulseCalculator {
             }
         }
         return new PulseResult.IncidencePlane(Optional.of(apertureMm), Optional.of(nearFieldMm), nearFieldInPart,
-                beamSpread6, beamSpread20, beamDiameter);
+                beamSpread6, spread.at20db(), beamDiameter);
     }
 
     /** The band results, all null without a bandwidth. */
@@ -352,6 +343,21 @@ public final class PulseCalculator {
             }
         }
         return Optional.of(edgeMhz);
+    }
+
+    /** The pulse-echo -6 dB and -20 dB beam-spread half angles of an aperture. */
+    private record PulseEchoSpread(Optional<Double> at6db, Optional<Double> at20db) {}
+
+    /** Both pulse-echo beam spreads of an aperture; {@code fieldPrefix} names their fields in the warnings. */
+    private static PulseEchoSpread pulseEchoSpread(double wavelengthMm, double apertureMm, String fieldPrefix,
+            List<Warning> warnings) {
+        Optional<Double> at6db = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
+                wavelengthMm, apertureMm, NO_BEAM_SPREAD_6DB, fieldPrefix + "beam_spread_6db_deg",
+                "the pulse-echo -6 dB level", warnings);
+        Optional<Double> at20db = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
+                wavelengthMm, apertureMm, NO_BEAM_SPREAD_20DB, fieldPrefix + "beam_spread_20db_deg",
+                "the pulse-echo -20 dB level", warnings);
+        return new PulseEchoSpread(at6db, at20db);
     }
 
     private static Optional<Double> beamSpread(double constant, double wavelengthMm, double diameterMm,
