@@ -2,13 +2,10 @@ package utdigit.core.acquisition;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
-import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Objects;
 import utdigit.core.common.CalculationException;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
@@ -46,8 +43,6 @@ public final class AcquisitionCalculator {
     /** A bit depth that is not a whole number of bytes: the storage assumption is stated. */
     public static final String SAMPLE_STORAGE_ASSUMED = "SAMPLE_STORAGE_ASSUMED";
 
-    private static final String COMMON_PRACTICE = "common practice, no published source";
-
     /**
      * Computes the acquisition budget.
      *
@@ -73,68 +68,11 @@ public final class AcquisitionCalculator {
         double scanIncrementMm = Checks.positive("scan_increment_mm", in.scanIncrementMm());
         double prfHz = Checks.positive("pulse_repetition_frequency_hz", in.pulseRepetitionFrequencyHz());
         Double velocityMPerS = checkVelocity(in);
-
-        String gateField;
-        double gateUs;
-        if (in.gateLengthUs() != null && in.gateLengthMm() != null) {
-            throw CalculationException.notApplicable("gate_length_mm",
-                    "give the gate as gate_length_us or as gate_length_mm, not both");
-        } else if (in.gateLengthUs() != null) {
-            gateField = "gate_length_us";
-            gateUs = Checks.positive(gateField, in.gateLengthUs());
-        } else if (in.gateLengthMm() != null) {
-            gateField = "gate_length_mm";
-            gateUs = pulseEchoTimeUs(Checks.positive(gateField, in.gateLengthMm()), velocityMPerS);
-            references.add(Reference.of("gate length from a sound path", Sources.DEFINITIONS));
-        } else {
-            throw CalculationException.invalid("gate_length_us", Double.NaN,
-                    "is required (or gate_length_mm with a velocity)");
-        }
-
-        Integer focalLawsUsed = null;
-        CaptureMode captureUsed = null;
-        String countField;
-        long firings;
-        long aScans;
-        if (in.fmcElementCount() != null) {
-            if (in.focalLaws() != null) {
-                throw CalculationException.notApplicable("focal_laws",
-                        "focal_laws applies to phased-array acquisition; with fmc_element_count the capture "
-                                + "(FMC or HMC) decides firings and A-scans");
-            }
-            countField = "fmc_element_count";
-            int n = Checks.atLeastOne(countField, in.fmcElementCount());
-            captureUsed = in.capture() == null ? CaptureMode.FMC : in.capture();
-            firings = captureUsed.firings(n);
-            aScans = captureUsed.aScans(n);
-            references.add(Reference.of("firings and A-scans per position, " + captureUsed, Sources.ACQUISITION_COUNTING));
-        } else {
-            if (in.capture() != null) {
-                throw CalculationException.notApplicable("capture",
-                        "capture applies only with fmc_element_count (matrix capture)");
-            }
-            countField = "focal_laws";
-            focalLawsUsed = in.focalLaws() == null ? 1 : Checks.atLeastOne(countField, in.focalLaws());
-            firings = focalLawsUsed;
-            aScans = focalLawsUsed;
-            references.add(Reference.of("firings and A-scans per position, phased array", Sources.ACQUISITION_COUNTING));
-        }
+        Gate gate = gate(in, velocityMPerS, references);
+        Counts counts = counts(in, references);
         int averaging = in.averaging() == null ? 1 : Checks.atLeastOne("averaging", in.averaging());
-
         Double roundTripUs = roundTripUs(in, velocityMPerS);
-        Double decayFactorUsed = null;
-        if (roundTripUs == null) {
-            if (in.wraparoundDecayFactor() != null) {
-                throw CalculationException.notApplicable("wraparound_decay_factor",
-                        "wraparound_decay_factor applies only with max_round_trip_us or max_sound_path_mm");
-            }
-        } else {
-            double q = in.wraparoundDecayFactor() == null ? 1.0 : in.wraparoundDecayFactor();
-            if (!(q >= 1.0) || Double.isInfinite(q)) {
-                throw CalculationException.invalid("wraparound_decay_factor", q, "must be finite and >= 1");
-            }
-            decayFactorUsed = q;
-        }
+        Double decayFactorUsed = decayFactor(in, roundTripUs);
         Double scanLengthMm = in.scanLengthMm() == null
                 ? null : Checks.positive("scan_length_mm", in.scanLengthMm());
         Double fileSizeLimitMegabytes = in.fileSizeLimitMegabytes() == null
@@ -143,27 +81,108 @@ public final class AcquisitionCalculator {
                 ? null : Checks.positive("planned_scan_speed_mm_per_s", in.plannedScanSpeedMmPerS());
 
         // 2. Inputs impossible together (422).
-        double periodUs = checkGateWithinPeriod(gateField, gateUs, prfHz);
+        double periodUs = checkGateWithinPeriod(gate.field(), gate.us(), prfHz);
         double effectiveMhz = clock.effectiveSamplingFrequencyMhz();
-        long samples = samplesPerAScan(gateUs, effectiveMhz, gateField, countField);
+        long samples = samplesPerAScan(gate.us(), effectiveMhz, gate.field(), counts.field());
         int bytesPerSample = bytesPerSample(bitDepth);
         long bytesPerAScan;
         long bytesPerPosition;
         try {
             bytesPerAScan = Math.multiplyExact(samples, (long) bytesPerSample);
-            bytesPerPosition = Math.multiplyExact(bytesPerAScan, aScans);
+            bytesPerPosition = Math.multiplyExact(bytesPerAScan, counts.aScans());
         } catch (ArithmeticException overflow) {
-            throw tooLarge(gateField, countField);
+            throw tooLarge(gate.field(), counts.field());
         }
 
-        // 3. Data volume.
+        // 3. Data volume; 4. scan speed; 5. wrap-around limit.
+        Volume volume = dataVolume(bitDepth, bytesPerSample, bytesPerPosition, scanIncrementMm, scanLengthMm,
+                fileSizeLimitMegabytes, warnings, references);
+        Speed speed = scanSpeed(prfHz, scanIncrementMm, counts.firings(), averaging, plannedSpeedMmPerS,
+                bytesPerPosition, warnings, references);
+        Double maxPrfHz = roundTripUs == null
+                ? null : wraparoundLimit(prfHz, roundTripUs, decayFactorUsed, warnings, references);
+
+        AcquisitionOptions options = new AcquisitionOptions(
+                decimationFactor, counts.focalLawsUsed(), counts.captureUsed(), averaging, decayFactorUsed);
+        return new AcquisitionResult(samples, bytesPerSample, bytesPerAScan, counts.firings(), counts.aScans(),
+                bytesPerPosition, volume.megabytesPerMetre(), volume.fileSizeMegabytes(), speed.maxMmPerS(),
+                speed.dataRateMegabytesPerS(), maxPrfHz, volume.maxScanLengthPerFileMm(), effectiveMhz, gate.us(),
+                periodUs, speed.dataRateMmPerS(), roundTripUs, options, warnings, references);
+    }
+
+    /** The gate as given (its contract name) and its length in time. */
+    private record Gate(String field, double us) {}
+
+    private static Gate gate(AcquisitionInput in, Double velocityMPerS, List<Reference> references) {
+        if (in.gateLengthUs() != null && in.gateLengthMm() != null) {
+            throw CalculationException.notApplicable("gate_length_mm",
+                    "give the gate as gate_length_us or as gate_length_mm, not both");
+        } else if (in.gateLengthUs() != null) {
+            return new Gate("gate_length_us", Checks.positive("gate_length_us", in.gateLengthUs()));
+        } else if (in.gateLengthMm() != null) {
+            double gateUs = pulseEchoTimeUs(Checks.positive("gate_length_mm", in.gateLengthMm()), velocityMPerS);
+            references.add(Reference.of("gate length from a sound path", Sources.DEFINITIONS));
+            return new Gate("gate_length_mm", gateUs);
+        } else {
+            throw CalculationException.invalid("gate_length_us", Double.NaN,
+                    "is required (or gate_length_mm with a velocity)");
+        }
+    }
+
+    /**
+     * Firings and A-scans per position, the field that decides them, and the options used (focal
+     * laws for phased array, the capture with fmc_element_count; the other null).
+     */
+    private record Counts(String field, long firings, long aScans, Integer focalLawsUsed, CaptureMode captureUsed) {}
+
+    private static Counts counts(AcquisitionInput in, List<Reference> references) {
+        if (in.fmcElementCount() != null) {
+            if (in.focalLaws() != null) {
+                throw CalculationException.notApplicable("focal_laws",
+                        "focal_laws applies to phased-array acquisition; with fmc_element_count the capture "
+                                + "(FMC or HMC) decides firings and A-scans");
+            }
+            String countField = "fmc_element_count";
+            int n = Checks.atLeastOne(countField, in.fmcElementCount());
+            CaptureMode captureUsed = in.capture() == null ? CaptureMode.FMC : in.capture();
+            references.add(Reference.of("firings and A-scans per position, " + captureUsed, Sources.ACQUISITION_COUNTING));
+            return new Counts(countField, captureUsed.firings(n), captureUsed.aScans(n), null, captureUsed);
+        }
+        if (in.capture() != null) {
+            throw CalculationException.notApplicable("capture",
+                    "capture applies only with fmc_element_count (matrix capture)");
+        }
+        String countField = "focal_laws";
+        int focalLawsUsed = in.focalLaws() == null ? 1 : Checks.atLeastOne(countField, in.focalLaws());
+        references.add(Reference.of("firings and A-scans per position, phased array", Sources.ACQUISITION_COUNTING));
+        return new Counts(countField, focalLawsUsed, focalLawsUsed, focalLawsUsed, null);
+    }
+
+    /** The wrap-around decay factor (default 1) with a round trip; refused without one. */
+    private static Double decayFactor(AcquisitionInput in, Double roundTripUs) {
+        if (roundTripUs == null) {
+            if (in.wraparoundDecayFactor() != null) {
+                throw CalculationException.notApplicable("wraparound_decay_factor",
+                        "wraparound_decay_factor applies only with max_round_trip_us or max_sound_path_mm");
+            }
+            return null;
+        }
+        double q = in.wraparoundDecayFactor() == null ? 1.0 : in.wraparoundDecayFactor();
+        if (!(q >= 1.0) || Double.isInfinite(q)) {
+            throw CalculationException.invalid("wraparound_decay_factor", q, "must be finite and >= 1");
+        }
+        return q;
+    }
+
+    /** Megabytes per metre of scan, and with their inputs the file size and the longest scan per file. */
+    private record Volume(double megabytesPerMetre, Double fileSizeMegabytes, Double maxScanLengthPerFileMm) {}
+
+    private static Volume dataVolume(int bitDepth, int bytesPerSample, long bytesPerPosition, double scanIncrementMm,
+            Double scanLengthMm, Double fileSizeLimitMegabytes, List<Warning> warnings, List<Reference> references) {
         references.add(Reference.of("samples per A-scan", Sources.ACQUISITION_COUNTING));
         references.add(Reference.of("bytes per sample", Sources.ACQUISITION_COUNTING));
         if (bitDepth % 8 != 0) {
-            warnings.add(Warning.of(SAMPLE_STORAGE_ASSUMED, String.format(Locale.ROOT,
-                    "bit_depth %d is counted as %d whole byte(s) per sample; an instrument that packs samples "
-                            + "(e.g. two 12-bit samples in 3 bytes) stores %s bytes per sample: check its "
-                            + "file format", bitDepth, bytesPerSample, fmt(bitDepth / 8.0))));
+            warnings.add(AcquisitionMessages.sampleStorageAssumed(bitDepth, bytesPerSample));
         }
         // bytes x 1000 / increment / 10^6 = bytes / (increment x 1000), in decimal (no float noise)
         double megabytesPerMetre = ratio(BigDecimal.valueOf(bytesPerPosition),
@@ -178,57 +197,44 @@ public final class AcquisitionCalculator {
         if (fileSizeLimitMegabytes != null) {
             maxScanLengthPerFileMm = fileSizeLimitMegabytes / megabytesPerMetre * 1000.0;
             if (fileSizeMegabytes != null && exceeds(fileSizeMegabytes, fileSizeLimitMegabytes)) {
-                warnings.add(Warning.of(FILE_SIZE_ABOVE_LIMIT, String.format(Locale.ROOT,
-                        "the file of scan_length_mm %s mm holds %s MB, above file_size_limit_megabytes "
-                                + "%s MB; one file holds at most %s mm of scan",
-                        fmt(scanLengthMm), fmt(fileSizeMegabytes), fmt(fileSizeLimitMegabytes),
-                        fmt(maxScanLengthPerFileMm))));
+                warnings.add(AcquisitionMessages.fileSizeAboveLimit(scanLengthMm, fileSizeMegabytes,
+                        fileSizeLimitMegabytes, maxScanLengthPerFileMm));
             }
         }
+        return new Volume(megabytesPerMetre, fileSizeMegabytes, maxScanLengthPerFileMm);
+    }
 
-        // 4. Scan speed: the PRF is spent on firings, each averaged firing counted.
+    /** The PRF-limited scan speed, the speed the data rate is quoted at, and that data rate. */
+    private record Speed(double maxMmPerS, double dataRateMmPerS, double dataRateMegabytesPerS) {}
+
+    /** Scan speed: the PRF is spent on firings, each averaged firing counted. */
+    private static Speed scanSpeed(double prfHz, double scanIncrementMm, long firings, int averaging,
+            Double plannedSpeedMmPerS, long bytesPerPosition, List<Warning> warnings, List<Reference> references) {
         double maxScanSpeedMmPerS = maxScanSpeedMmPerS(prfHz, scanIncrementMm, firings, averaging);
         references.add(Reference.of("maximum scan speed", Sources.SCAN_SPEED));
         double dataRateSpeedMmPerS = plannedSpeedMmPerS == null ? maxScanSpeedMmPerS : plannedSpeedMmPerS;
         if (plannedSpeedMmPerS != null && exceeds(plannedSpeedMmPerS, maxScanSpeedMmPerS)) {
-            warnings.add(Warning.of(PLANNED_SPEED_ABOVE_MAXIMUM, String.format(Locale.ROOT,
-                    "planned_scan_speed_mm_per_s %s mm/s is above the PRF-limited maximum %s mm/s "
-                            + "(pulse_repetition_frequency_hz %s Hz, %d firing(s) per position x averaging %d, "
-                            + "scan_increment_mm %s mm): positions would be missed",
-                    fmt(plannedSpeedMmPerS), fmt(maxScanSpeedMmPerS), fmt(prfHz), firings, averaging,
-                    fmt(scanIncrementMm))));
+            warnings.add(AcquisitionMessages.plannedSpeedAboveMaximum(plannedSpeedMmPerS, maxScanSpeedMmPerS, prfHz,
+                    firings, averaging, scanIncrementMm));
         }
         double dataRateMegabytesPerS = ratio(BigDecimal.valueOf(bytesPerPosition).multiply(decimal(dataRateSpeedMmPerS)),
                 decimal(scanIncrementMm).multiply(BigDecimal.valueOf(1_000_000)));
         references.add(Reference.of("data rate", Sources.ACQUISITION_COUNTING));
+        return new Speed(maxScanSpeedMmPerS, dataRateSpeedMmPerS, dataRateMegabytesPerS);
+    }
 
-        // 5. Wrap-around limit.
-        Double maxPrfHz = null;
-        if (roundTripUs != null) {
-            double q = decayFactorUsed;
-            maxPrfHz = maxPrfWithoutWraparoundHz(roundTripUs, q);
-            references.add(Reference.of("wrap-around PRF limit", Sources.WRAPAROUND));
-            if (q == 1.0) {
-                warnings.add(Warning.of(WRAPAROUND_DECAY_FACTOR_BARE_LIMIT,
-                        "wraparound_decay_factor 1 gives the bare physical limit: echoes of a firing that "
-                                + "reverberate longer than one round trip reach the next, and low-attenuation parts "
-                                + "need a margin (wraparound_decay_factor > 1) (" + COMMON_PRACTICE + ")"));
-            }
-            if (exceeds(prfHz, maxPrfHz)) {
-                warnings.add(Warning.of(PRF_ABOVE_WRAPAROUND_LIMIT, String.format(Locale.ROOT,
-                        "pulse_repetition_frequency_hz %s Hz is above the wrap-around limit %s Hz "
-                                + "(round trip %s us x wraparound_decay_factor %s): echoes of one firing may "
-                                + "appear as ghost echoes after the next",
-                        fmt(prfHz), fmt(maxPrfHz), fmt(roundTripUs), fmt(q))));
-            }
+    /** The wrap-around PRF limit, with its warnings. */
+    private static double wraparoundLimit(double prfHz, double roundTripUs, double q, List<Warning> warnings,
+            List<Reference> references) {
+        double maxPrfHz = maxPrfWithoutWraparoundHz(roundTripUs, q);
+        references.add(Reference.of("wrap-around PRF limit", Sources.WRAPAROUND));
+        if (q == 1.0) {
+            warnings.add(AcquisitionMessages.decayFactorBareLimit());
         }
-
-        AcquisitionOptions options = new AcquisitionOptions(
-                decimationFactor, focalLawsUsed, captureUsed, averaging, decayFactorUsed);
-        return new AcquisitionResult(samples, bytesPerSample, bytesPerAScan, firings, aScans, bytesPerPosition,
-                megabytesPerMetre, fileSizeMegabytes, maxScanSpeedMmPerS, dataRateMegabytesPerS, maxPrfHz,
-                maxScanLengthPerFileMm, effectiveMhz, gateUs, periodUs, dataRateSpeedMmPerS, roundTripUs,
-                options, warnings, references);
+        if (exceeds(prfHz, maxPrfHz)) {
+            warnings.add(AcquisitionMessages.prfAboveWraparoundLimit(prfHz, maxPrfHz, roundTripUs, q));
+        }
+        return maxPrfHz;
     }
 
     /**
@@ -241,10 +247,7 @@ public final class AcquisitionCalculator {
     public static double checkGateWithinPeriod(String gateField, double gateUs, double prfHz) {
         double periodUs = 1e6 / prfHz;
         if (exceeds(gateUs, periodUs)) {
-            throw CalculationException.impossible(String.format(Locale.ROOT,
-                    "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
-                            + " (%s us at %s Hz): the next firing would start before the gate ends",
-                    gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
+            throw AcquisitionMessages.gateLongerThanPeriod(gateField, gateUs, periodUs, prfHz);
         }
         return periodUs;
     }
@@ -339,13 +342,6 @@ public final class AcquisitionCalculator {
         return value > limit * (1.0 + RELATIVE_TOLERANCE);
     }
 
-    /** A number for a message: six significant digits, no trailing zeros, no exponent. */
-    private static final MathContext MESSAGE_DIGITS = new MathContext(6, RoundingMode.HALF_EVEN);
-
-    private static String fmt(double x) {
-        return MessageNumbers.plain(x, MESSAGE_DIGITS);
-    }
-
     private static Double checkVelocity(AcquisitionInput in) {
         boolean needed = in.gateLengthMm() != null || in.maxSoundPathMm() != null;
         if (in.velocityMPerS() == null) {
@@ -377,9 +373,6 @@ public final class AcquisitionCalculator {
     }
 
     private static CalculationException tooLarge(String gateField, String countField) {
-        return CalculationException.impossible(
-                "one scan position would hold more than 2^63 - 1 bytes (9.2e18): no instrument records that; "
-                        + "reduce " + gateField + ", sampling_frequency_mhz or " + countField,
-                gateField, "sampling_frequency_mhz", countField);
+        return AcquisitionMessages.tooLarge(gateField, countField);
     }
 }

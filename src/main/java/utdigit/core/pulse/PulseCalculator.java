@@ -1,12 +1,10 @@
 package utdigit.core.pulse;
 
-import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import utdigit.core.common.CalculationException;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
@@ -98,92 +96,12 @@ public final class PulseCalculator {
         Band band = in.bandwidthPercent() == null
                 ? Band.NONE
                 : band(in, warnings, references);
-
-        Double nearFieldLengthMm = null;
-        Optional<Double> nearFieldLengthExactMm = null;
-        Optional<Double> beamSpread6dbDeg = null;
-        Optional<Double> beamSpread20dbDeg = null;
-        Optional<Double> beamSpreadNullDeg = null;
-        Optional<Double> beamDiameter6dbMm = null;
-        Double nearFieldInPartMm = null;
-        if (in.elementDiameterMm() != null) {
-            double diameterMm = in.elementDiameterMm();
-            nearFieldLengthMm = PistonBeam.nearFieldLengthMm(diameterMm, wavelengthMm);
-            references.add(Reference.of("near field length", Sources.NEAR_FIELD_PRACTICE));
-            nearFieldLengthExactMm = PistonBeam.exactNearFieldLengthMm(diameterMm, wavelengthMm);
-            references.add(Reference.of("exact near field length", Sources.PISTON_NEAR_FIELD));
-            if (nearFieldLengthExactMm.isEmpty()) {
-                warnings.add(Warning.of(NO_EXACT_NEAR_FIELD, "element_diameter_mm " + fmt(diameterMm)
-                        + " is not larger than the wavelength " + fmt(wavelengthMm)
-                        + " mm: the on-axis pressure has no maximum in front of the element, so "
-                        + "near_field_length_exact_mm does not exist"));
-            }
-
-            beamSpread6dbDeg = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
-                    wavelengthMm, diameterMm, NO_BEAM_SPREAD_6DB, "beam_spread_6db_deg",
-                    "the pulse-echo -6 dB level", warnings);
-            beamSpread20dbDeg = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
-                    wavelengthMm, diameterMm, NO_BEAM_SPREAD_20DB, "beam_spread_20db_deg",
-                    "the pulse-echo -20 dB level", warnings);
-            beamSpreadNullDeg = beamSpread(PistonDirectivity.firstNullConstant(),
-                    wavelengthMm, diameterMm, NO_BEAM_SPREAD_NULL, "beam_spread_null_deg",
-                    "the first null", warnings);
-            references.add(Reference.of("beam spread", Sources.PISTON_DIRECTIVITY));
-
-            if (in.wedgePathMm() != null) {
-                nearFieldInPartMm = PistonBeam.nearFieldInPartMm(
-                        nearFieldLengthMm, in.wedgePathMm(), in.wedgeVelocityMPerS(), velocityMPerS);
-                references.add(Reference.of("near field in the part", Sources.NEAR_FIELD_PRACTICE));
-                if (nearFieldInPartMm < 0) {
-                    warnings.add(Warning.of(PART_IN_FAR_FIELD_ONLY, "the near field ("
-                            + fmt(nearFieldLengthMm) + " mm in the part's material) ends inside the wedge "
-                            + "or delay line (wedge_path_mm " + fmt(in.wedgePathMm())
-                            + " at wedge_velocity_m_per_s " + fmt(in.wedgeVelocityMPerS())
-                            + "): near_field_in_part_mm is negative and the part sees only far field"));
-                }
-            }
-
-            if (in.distanceMm() != null) {
-                double distanceMm = in.distanceMm();
-                double nearFieldAheadMm = nearFieldInPartMm != null ? nearFieldInPartMm : nearFieldLengthMm;
-                references.add(Reference.of("beam diameter", Sources.NEAR_FIELD_PRACTICE));
-                if (beamSpread6dbDeg.isEmpty()) {
-                    beamDiameter6dbMm = Optional.empty();
-                    warnings.add(Warning.of(NO_BEAM_DIAMETER_6DB, "without a pulse-echo -6 dB beam-spread "
-                            + "angle the far-field beam does not narrow to a -6 dB width: "
-                            + "beam_diameter_6db_mm does not exist"));
-                } else if (distanceMm < nearFieldAheadMm) {
-                    beamDiameter6dbMm = Optional.empty();
-                } else {
-                    beamDiameter6dbMm = Optional.of(PistonBeam.beamDiameterMm(distanceMm, beamSpread6dbDeg.get()));
-                }
-                if (distanceMm < nearFieldAheadMm) {
-                    warnings.add(Warning.of(DISTANCE_IN_NEAR_FIELD, "distance_mm " + fmt(distanceMm)
-                            + " lies inside the near field (" + fmt(nearFieldAheadMm) + " mm"
-                            + (nearFieldInPartMm != null ? " left in the part" : "")
-                            + "): the far-field cone 2 z tan(theta) does not hold there, so beam_diameter_6db_mm "
-                            + "is null (there the beam is of the order of the element's diameter and narrows towards "
-                            + "the end of the near field)"));
-                }
-            }
-        }
-
-        Optional<Double> refractedAngleDeg = null;
-        if (in.incidentAngleDeg() != null) {
-            double incidentDeg = in.incidentAngleDeg();
-            double wedgeVelocityMPerS = in.wedgeVelocityMPerS();
-            refractedAngleDeg = Snell.refractedAngleDeg(incidentDeg, wedgeVelocityMPerS, velocityMPerS);
-            references.add(Reference.of("refracted angle", Sources.SNELL));
-            if (refractedAngleDeg.isEmpty()) {
-                double criticalDeg = Snell.criticalAngleDeg(wedgeVelocityMPerS, velocityMPerS).orElseThrow();
-                warnings.add(Warning.of(PAST_CRITICAL_ANGLE, "incident_angle_deg " + fmt(incidentDeg)
-                        + " is at or past the critical angle " + fmt(criticalDeg) + " deg (wedge_velocity_m_per_s "
-                        + fmt(wedgeVelocityMPerS) + " into velocity_m_per_s " + fmt(velocityMPerS)
-                        + "): no refracted wave of this mode enters the part, refracted_angle_deg does not exist"
-                        + (in.elementDiameterMm() != null ? ", nor do the incidence_plane_* figures" : "")));
-            }
-        }
-
+        Element element = in.elementDiameterMm() == null
+                ? Element.NONE
+                : element(in, wavelengthMm, warnings, references);
+        Optional<Double> refractedAngleDeg = in.incidentAngleDeg() == null
+                ? null
+                : refractedAngleDeg(in, warnings, references);
         PulseResult.IncidencePlane incidencePlane = null;
         if (in.incidentAngleDeg() != null && in.elementDiameterMm() != null) {
             incidencePlane = incidencePlane(in, wavelengthMm, refractedAngleDeg, warnings, references);
@@ -205,17 +123,101 @@ public final class PulseCalculator {
                 band.cycles6db,
                 band.spatialPulseLengthMm,
                 band.axialResolutionMm,
-                nearFieldLengthMm,
-                nearFieldLengthExactMm,
-                beamSpread6dbDeg,
-                beamSpread20dbDeg,
-                beamSpreadNullDeg,
-                beamDiameter6dbMm,
-                nearFieldInPartMm,
+                element.nearFieldLengthMm,
+                element.nearFieldLengthExactMm,
+                element.beamSpread6dbDeg,
+                element.beamSpread20dbDeg,
+                element.beamSpreadNullDeg,
+                element.beamDiameter6dbMm,
+                element.nearFieldInPartMm,
                 refractedAngleDeg,
                 incidencePlane,
                 warnings,
                 references);
+    }
+
+    /** The element's results (near field, beam spread, beam diameter, near field in the part), all null without a diameter. */
+    private record Element(
+            Double nearFieldLengthMm,
+            Optional<Double> nearFieldLengthExactMm,
+            Optional<Double> beamSpread6dbDeg,
+            Optional<Double> beamSpread20dbDeg,
+            Optional<Double> beamSpreadNullDeg,
+            Optional<Double> beamDiameter6dbMm,
+            Double nearFieldInPartMm) {
+        static final Element NONE = new Element(null, null, null, null, null, null, null);
+    }
+
+    private static Element element(PulseInput in, double wavelengthMm, List<Warning> warnings,
+            List<Reference> references) {
+        double diameterMm = in.elementDiameterMm();
+        double nearFieldLengthMm = PistonBeam.nearFieldLengthMm(diameterMm, wavelengthMm);
+        references.add(Reference.of("near field length", Sources.NEAR_FIELD_PRACTICE));
+        Optional<Double> nearFieldLengthExactMm = PistonBeam.exactNearFieldLengthMm(diameterMm, wavelengthMm);
+        references.add(Reference.of("exact near field length", Sources.PISTON_NEAR_FIELD));
+        if (nearFieldLengthExactMm.isEmpty()) {
+            warnings.add(PulseMessages.noExactNearField(diameterMm, wavelengthMm));
+        }
+
+        PulseEchoSpread spread = pulseEchoSpread(wavelengthMm, diameterMm, "", warnings);
+        Optional<Double> beamSpreadNullDeg = beamSpread(PistonDirectivity.firstNullConstant(),
+                wavelengthMm, diameterMm, NO_BEAM_SPREAD_NULL, "beam_spread_null_deg",
+                "the first null", warnings);
+        references.add(Reference.of("beam spread", Sources.PISTON_DIRECTIVITY));
+
+        Double nearFieldInPartMm = null;
+        if (in.wedgePathMm() != null) {
+            nearFieldInPartMm = PistonBeam.nearFieldInPartMm(
+                    nearFieldLengthMm, in.wedgePathMm(), in.wedgeVelocityMPerS(), in.velocityMPerS());
+            references.add(Reference.of("near field in the part", Sources.NEAR_FIELD_PRACTICE));
+            if (nearFieldInPartMm < 0) {
+                warnings.add(PulseMessages.partInFarFieldOnly(nearFieldLengthMm, in.wedgePathMm(),
+                        in.wedgeVelocityMPerS()));
+            }
+        }
+        Optional<Double> beamDiameter6dbMm = null;
+        if (in.distanceMm() != null) {
+            double nearFieldAheadMm = nearFieldInPartMm != null ? nearFieldInPartMm : nearFieldLengthMm;
+            beamDiameter6dbMm = beamDiameter(in.distanceMm(), nearFieldAheadMm, nearFieldInPartMm != null,
+                    spread.at6db(), warnings, references);
+        }
+        return new Element(nearFieldLengthMm, nearFieldLengthExactMm, spread.at6db(), spread.at20db(),
+                beamSpreadNullDeg, beamDiameter6dbMm, nearFieldInPartMm);
+    }
+
+    /** The far-field -6 dB beam diameter at a distance; empty inside the near field or without a -6 dB angle. */
+    private static Optional<Double> beamDiameter(double distanceMm, double nearFieldAheadMm, boolean inPart,
+            Optional<Double> beamSpread6dbDeg, List<Warning> warnings, List<Reference> references) {
+        Optional<Double> beamDiameter6dbMm;
+        references.add(Reference.of("beam diameter", Sources.NEAR_FIELD_PRACTICE));
+        if (beamSpread6dbDeg.isEmpty()) {
+            beamDiameter6dbMm = Optional.empty();
+            warnings.add(PulseMessages.noBeamDiameter6db());
+        } else if (distanceMm < nearFieldAheadMm) {
+            beamDiameter6dbMm = Optional.empty();
+        } else {
+            beamDiameter6dbMm = Optional.of(PistonBeam.beamDiameterMm(distanceMm, beamSpread6dbDeg.get()));
+        }
+        if (distanceMm < nearFieldAheadMm) {
+            warnings.add(PulseMessages.distanceInNearField(distanceMm, nearFieldAheadMm, inPart));
+        }
+        return beamDiameter6dbMm;
+    }
+
+    /** The refracted angle behind the wedge (Snell); empty at or past the critical angle. */
+    private static Optional<Double> refractedAngleDeg(PulseInput in, List<Warning> warnings,
+            List<Reference> references) {
+        double incidentDeg = in.incidentAngleDeg();
+        double wedgeVelocityMPerS = in.wedgeVelocityMPerS();
+        double velocityMPerS = in.velocityMPerS();
+        Optional<Double> refractedAngleDeg = Snell.refractedAngleDeg(incidentDeg, wedgeVelocityMPerS, velocityMPerS);
+        references.add(Reference.of("refracted angle", Sources.SNELL));
+        if (refractedAngleDeg.isEmpty()) {
+            double criticalDeg = Snell.criticalAngleDeg(wedgeVelocityMPerS, velocityMPerS).orElseThrow();
+            warnings.add(PulseMessages.pastCriticalAngle(incidentDeg, criticalDeg, wedgeVelocityMPerS, velocityMPerS,
+                    in.elementDiameterMm() != null));
+        }
+        return refractedAngleDeg;
     }
 
     /**
@@ -235,12 +237,8 @@ public final class PulseCalculator {
         double apertureMm = PistonBeam.projectedApertureMm(in.elementDiameterMm(), alphaDeg, betaDeg);
         double nearFieldMm = PistonBeam.nearFieldLengthMm(apertureMm, wavelengthMm);
         references.add(Reference.of("incidence plane of an angle beam", Sources.INCIDENCE_PLANE));
-        Optional<Double> beamSpread6 = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
-                wavelengthMm, apertureMm, NO_BEAM_SPREAD_6DB, "incidence_plane_beam_spread_6db_deg",
-                "the pulse-echo -6 dB level", warnings);
-        Optional<Double> beamSpread20 = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
-                wavelengthMm, apertureMm, NO_BEAM_SPREAD_20DB, "incidence_plane_beam_spread_20db_deg",
-                "the pulse-echo -20 dB level", warnings);
+        PulseEchoSpread spread = pulseEchoSpread(wavelengthMm, apertureMm, "incidence_plane_", warnings);
+        Optional<Double> beamSpread6 = spread.at6db();
         Optional<Double> nearFieldInPart = null;
         if (in.wedgePathMm() != null) {
             nearFieldInPart = Optional.of(nearFieldMm - PistonBeam.incidencePlaneWedgePathInPartMm(in.wedgePathMm(),
@@ -253,22 +251,17 @@ public final class PulseCalculator {
             double nearFieldAheadMm = nearFieldInPart != null ? nearFieldInPart.get() : nearFieldMm;
             if (beamSpread6.isEmpty()) {
                 beamDiameter = Optional.empty();
-                warnings.add(Warning.of(NO_INCIDENCE_PLANE_BEAM_DIAMETER_6DB, "without a pulse-echo -6 dB beam-spread "
-                        + "angle of the projected aperture (" + fmt(apertureMm) + " mm) the beam does not narrow to a "
-                        + "-6 dB width in the incidence plane: incidence_plane_beam_diameter_6db_mm does not exist"));
+                warnings.add(PulseMessages.noIncidencePlaneBeamDiameter(apertureMm));
             } else if (distanceMm < nearFieldAheadMm) {
                 beamDiameter = Optional.empty();
-                warnings.add(Warning.of(DISTANCE_IN_INCIDENCE_PLANE_NEAR_FIELD, "distance_mm " + fmt(distanceMm)
-                        + " lies inside the incidence plane's near field (" + fmt(nearFieldAheadMm) + " mm"
-                        + (nearFieldInPart != null ? " left in the part" : "") + ", projected aperture "
-                        + fmt(apertureMm) + " mm): the far-field cone does not hold there, so "
-                        + "incidence_plane_beam_diameter_6db_mm is null"));
+                warnings.add(PulseMessages.distanceInIncidencePlaneNearField(distanceMm, nearFieldAheadMm,
+                        nearFieldInPart != null, apertureMm));
             } else {
                 beamDiameter = Optional.of(PistonBeam.beamDiameterMm(distanceMm, beamSpread6.get()));
             }
         }
         return new PulseResult.IncidencePlane(Optional.of(apertureMm), Optional.of(nearFieldMm), nearFieldInPart,
-                beamSpread6, beamSpread20, beamDiameter);
+                beamSpread6, spread.at20db(), beamDiameter);
     }
 
     /** The band results, all null without a bandwidth. */
@@ -304,12 +297,7 @@ public final class PulseCalculator {
 
         if (bandwidthPercent > IMAGE_WARNING_BANDWIDTH_PERCENT) {
             Optional<Double> realLowerMhz = RealPulseSpectrum.lowerEdgeMhz(model, LEVEL_6DB);
-            warnings.add(Warning.of(BANDWIDTH_ABOVE_100_PERCENT, "bandwidth_percent " + fmt(bandwidthPercent)
-                    + " is above 100 %: the real model pulse's negative-frequency image raises its spectrum at "
-                    + "low frequencies, so its -6 dB lower edge is not at lower_frequency_mhz (" + fmt(edgesMhz[0])
-                    + " MHz) but " + realLowerMhz.map(f -> fmt(f) + " MHz").orElse("absent (it stays above -6 dB "
-                    + "down to 0 Hz)") + "; the model values (durations, cycles, -20 and -40 dB edges) then "
-                    + "describe a pulse whose real band is wider than the stated one"));
+            warnings.add(PulseMessages.bandwidthAbove100Percent(bandwidthPercent, edgesMhz[0], realLowerMhz));
             references.add(REAL_LOWER_EDGE_REFERENCE);
         }
         Optional<Double> lower20 = lowerEdge(model, LEVEL_20DB, NO_LOWER_FREQUENCY_20DB,
@@ -340,9 +328,7 @@ public final class PulseCalculator {
             List<Warning> warnings, List<Reference> references) {
         double edgeMhz = model.lowerEdgeMhz(levelDb);
         if (!(edgeMhz > 0)) {
-            warnings.add(Warning.of(code, "the pulse model's spectrum does not fall " + fmt(-levelDb)
-                    + " dB below its peak above 0 Hz (the edge would lie at " + fmt(edgeMhz) + " MHz): "
-                    + field + " does not exist"));
+            warnings.add(PulseMessages.noLowerEdge(code, levelDb, edgeMhz, field));
             return Optional.empty();
         }
         if (RealPulseSpectrum.estimatedLowerEdgeShiftFraction(model, levelDb) > REAL_LOWER_EDGE_SOLVE_FRACTION) {
@@ -353,28 +339,33 @@ public final class PulseCalculator {
                 if (!references.contains(REAL_LOWER_EDGE_REFERENCE)) {
                     references.add(REAL_LOWER_EDGE_REFERENCE);
                 }
-                String why = realMhz.isEmpty()
-                        ? "keeps its spectrum above " + fmt(levelDb) + " dB down to 0 Hz, so the real pulse has "
-                                + "no such lower edge"
-                        : "lifts its spectrum at low frequencies, so its " + fmt(levelDb) + " dB lower edge lies at "
-                                + fmt(realMhz.get()) + " MHz, " + fmt(100.0 * (edgeMhz - realMhz.get()) / edgeMhz)
-                                + " % lower";
-                warnings.add(Warning.of(REAL_LOWER_EDGE_BELOW_MODEL, field + " " + fmt(edgeMhz)
-                        + " MHz is the one-sided model's edge; the real pulse's negative-frequency image " + why));
+                warnings.add(PulseMessages.realLowerEdgeBelowModel(field, levelDb, edgeMhz, realMhz));
             }
         }
         return Optional.of(edgeMhz);
+    }
+
+    /** The pulse-echo -6 dB and -20 dB beam-spread half angles of an aperture. */
+    private record PulseEchoSpread(Optional<Double> at6db, Optional<Double> at20db) {}
+
+    /** Both pulse-echo beam spreads of an aperture; {@code fieldPrefix} names their fields in the warnings. */
+    private static PulseEchoSpread pulseEchoSpread(double wavelengthMm, double apertureMm, String fieldPrefix,
+            List<Warning> warnings) {
+        Optional<Double> at6db = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_6DB),
+                wavelengthMm, apertureMm, NO_BEAM_SPREAD_6DB, fieldPrefix + "beam_spread_6db_deg",
+                "the pulse-echo -6 dB level", warnings);
+        Optional<Double> at20db = beamSpread(PistonDirectivity.twoWayConstant(BEAM_SPREAD_20DB),
+                wavelengthMm, apertureMm, NO_BEAM_SPREAD_20DB, fieldPrefix + "beam_spread_20db_deg",
+                "the pulse-echo -20 dB level", warnings);
+        return new PulseEchoSpread(at6db, at20db);
     }
 
     private static Optional<Double> beamSpread(double constant, double wavelengthMm, double diameterMm,
             String code, String field, String what, List<Warning> warnings) {
         Optional<Double> angleDeg = PistonDirectivity.halfAngleDeg(constant, wavelengthMm, diameterMm);
         if (angleDeg.isEmpty()) {
-            warnings.add(Warning.of(code, "element_diameter_mm " + fmt(diameterMm) + " is too small for the "
-                    + "wavelength " + fmt(wavelengthMm) + " mm: k lambda / D = "
-                    + fmt(PistonDirectivity.sineOfHalfAngle(constant, wavelengthMm, diameterMm))
-                    + " is not below 1, so the beam does not fall to " + what + " at any angle and "
-                    + field + " does not exist"));
+            warnings.add(PulseMessages.noBeamSpread(code, diameterMm, wavelengthMm,
+                    PistonDirectivity.sineOfHalfAngle(constant, wavelengthMm, diameterMm), what, field));
         }
         return angleDeg;
     }
@@ -405,12 +396,5 @@ public final class PulseCalculator {
             throw CalculationException.notApplicable("wedge_velocity_m_per_s",
                     "wedge_velocity_m_per_s applies only together with wedge_path_mm or incident_angle_deg");
         }
-    }
-
-    /** A number for a message: 4 significant digits, no exponent. */
-    private static final MathContext MESSAGE_DIGITS = new MathContext(4);
-
-    private static String fmt(double x) {
-        return MessageNumbers.plain(x, MESSAGE_DIGITS);
     }
 }

@@ -2,12 +2,10 @@ package utdigit.core.quantization;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Decibels;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
@@ -79,7 +77,55 @@ public final class QuantizationCalculator {
         Quantizer quantizer = in.quantizer() == null ? Quantizer.ROUNDING : in.quantizer();
         CodeMapping mapping = in.codeMapping() == null ? CodeMapping.FSR_OVER_2N : in.codeMapping();
         double gainDb = in.digitalGainDb() == null ? 0.0 : Checks.finite("digital_gain_db", in.digitalGainDb());
+        checkOptionalInputs(in);
+        Double signalHeight = in.signalHeightPercentFsh();
+        Double toleranceDb = in.amplitudeToleranceDb();
+        Double referenceHeight = in.referenceHeightPercentFsh();
+        Integer averaging = in.averaging();
 
+        List<Warning> warnings = new ArrayList<>();
+        List<Reference> references = new ArrayList<>();
+        Scale scale = scale(bitDepth, signal, quantizer, mapping, gainDb, references);
+        Optional<Double> idealSqnrDb = idealSqnrDb(signal, bitDepth);
+        if (idealSqnrDb.isPresent()) {
+            references.add(Reference.of("ideal SQNR", Sources.IDEAL_SQNR));
+        } else {
+            warnings.add(QuantizationMessages.idealSqnrNotApplicable());
+        }
+        Double errorOverDb = null;
+        Optional<Double> errorUnderDb = null;
+        if (signalHeight != null) {
+            requireReachable(signalHeight, scale.gainRatio(), gainDb, "signal_height_percent_fsh");
+            references.add(errorReference(quantizer, signal));
+            errorOverDb = overErrorDb(signalHeight, scale.highBoundPercentFsh());
+            errorUnderDb = underErrorDb(signalHeight, scale.lowBoundPercentFsh());
+            signalHeightWarnings(signalHeight, errorUnderDb, scale, quantizer, warnings);
+        }
+        Double minimumHeight = null;
+        Double minimumHeightDb = null;
+        if (toleranceDb != null) {
+            minimumHeight = minimumHeightPercentFsh(scale.lowBoundPercentFsh(), toleranceDb);
+            minimumHeightDb = Decibels.fromRatio(minimumHeight / FULL_SCREEN_PERCENT_FSH);
+            references.add(minimumHeightReference(quantizer));
+            minimumHeightWarnings(minimumHeight, toleranceDb, signalHeight, scale, warnings);
+        }
+        Evaluation evaluation = Evaluation.NONE;
+        if (referenceHeight != null) {
+            evaluation = evaluation(in, minimumHeight, scale, quantizer, signal, gainDb, warnings, references);
+        }
+        Double averagingSnrGainDb = null;
+        if (averaging != null) {
+            averagingSnrGainDb = averagingSnrGainDb(averaging);
+            references.add(Reference.of("averaging", Sources.SOFT_GAIN));
+            warnings.add(QuantizationMessages.averagingNoiseOnly(averaging, averagingSnrGainDb));
+        }
+        return new QuantizationResult(signal, quantizer, mapping, gainDb, scale.levels(), scale.lsb(),
+                scale.dynamicRangeDb(), idealSqnrDb, errorOverDb, errorUnderDb, minimumHeight, minimumHeightDb,
+                evaluation.height(), evaluation.errorUnderDb(), averagingSnrGainDb, warnings, references);
+    }
+
+    /** The optional inputs' own checks, and the reference height and evaluation level that go together. */
+    private static void checkOptionalInputs(QuantizationInput in) {
         Double signalHeight = in.signalHeightPercentFsh();
         if (signalHeight != null) {
             Checks.positive("signal_height_percent_fsh", signalHeight);
@@ -106,10 +152,17 @@ public final class QuantizationCalculator {
         if (averaging != null) {
             Checks.atLeastOne("averaging", averaging);
         }
+    }
 
-        List<Warning> warnings = new ArrayList<>();
-        List<Reference> references = new ArrayList<>();
+    /**
+     * The converter's scale as displayed: levels, the gain as a ratio, the displayed LSB, the dynamic
+     * range, and how far below and above a height the quantizer can read (%FSH).
+     */
+    private record Scale(long levels, double gainRatio, double lsb, double dynamicRangeDb,
+            double lowBoundPercentFsh, double highBoundPercentFsh) {}
 
+    private static Scale scale(int bitDepth, DigitizedSignal signal, Quantizer quantizer, CodeMapping mapping,
+            double gainDb, List<Reference> references) {
         long levels = 1L << bitDepth;
         double gainRatio = Decibels.toRatio(gainDb);
         double converterLsb = mapping.lsbPercentFsh(signal, bitDepth);
@@ -126,107 +179,66 @@ public final class QuantizationCalculator {
             references.add(Reference.of("digital gain", Sources.SOFT_GAIN));
         }
         references.add(Reference.of("dynamic range", Sources.DYNAMIC_RANGE));
+        return new Scale(levels, gainRatio, lsb, dynamicRangeDb, lowBoundPercentFsh, highBoundPercentFsh);
+    }
 
-        Optional<Double> idealSqnrDb = idealSqnrDb(signal, bitDepth);
-        if (idealSqnrDb.isPresent()) {
-            references.add(Reference.of("ideal SQNR", Sources.IDEAL_SQNR));
-        } else {
-            warnings.add(Warning.of(IDEAL_SQNR_NOT_APPLICABLE,
-                    "ideal_sqnr_db is the ratio of a full-scale sine to its quantization noise and does not apply to"
-                            + " digitized_signal RECTIFIED; it is null"));
+    private static void signalHeightWarnings(double signalHeight, Optional<Double> errorUnderDb, Scale scale,
+            Quantizer quantizer, List<Warning> warnings) {
+        if (signalHeight < scale.lsb()) {
+            warnings.add(QuantizationMessages.signalHeightBelowOneLsb(signalHeight, scale.lsb()));
         }
+        if (errorUnderDb.isEmpty()) {
+            warnings.add(QuantizationMessages.errorUnderUndefined(signalHeight, scale.lowBoundPercentFsh(),
+                    quantizer));
+        }
+    }
 
-        Double errorOverDb = null;
-        Optional<Double> errorUnderDb = null;
-        if (signalHeight != null) {
-            requireReachable(signalHeight, gainRatio, gainDb, "signal_height_percent_fsh");
+    private static void minimumHeightWarnings(double minimumHeight, double toleranceDb, Double signalHeight,
+            Scale scale, List<Warning> warnings) {
+        double highestDisplayable = FULL_SCREEN_PERCENT_FSH * StrictMath.min(1.0, scale.gainRatio());
+        if (minimumHeight > highestDisplayable) {
+            warnings.add(QuantizationMessages.minimumHeightAboveFullScreen(minimumHeight, highestDisplayable,
+                    toleranceDb));
+        }
+        if (signalHeight != null && signalHeight < minimumHeight) {
+            warnings.add(QuantizationMessages.signalHeightBelowMinimum(signalHeight, minimumHeight, toleranceDb));
+        }
+    }
+
+    /** The evaluation height (reference height at the evaluation level) and its worst reading below. */
+    private record Evaluation(Double height, Optional<Double> errorUnderDb) {
+        static final Evaluation NONE = new Evaluation(null, null);
+    }
+
+    private static Evaluation evaluation(QuantizationInput in, Double minimumHeight, Scale scale,
+            Quantizer quantizer, DigitizedSignal signal, double gainDb, List<Warning> warnings,
+            List<Reference> references) {
+        double referenceHeight = in.referenceHeightPercentFsh();
+        double evaluationLevelDb = in.evaluationLevelDb();
+        requireReachable(referenceHeight, scale.gainRatio(), gainDb, "reference_height_percent_fsh");
+        double evaluationHeight = referenceHeight * Decibels.toRatio(evaluationLevelDb);
+        requireReachableEvaluation(evaluationHeight, referenceHeight, evaluationLevelDb, scale.gainRatio(), gainDb);
+        references.add(Reference.of("evaluation height", Sources.DEFINITIONS));
+        if (in.signalHeightPercentFsh() == null) {
             references.add(errorReference(quantizer, signal));
-            errorOverDb = overErrorDb(signalHeight, highBoundPercentFsh);
-            errorUnderDb = underErrorDb(signalHeight, lowBoundPercentFsh);
-            if (signalHeight < lsb) {
-                warnings.add(Warning.of(SIGNAL_HEIGHT_BELOW_ONE_LSB, String.format(Locale.ROOT,
-                        "signal_height_percent_fsh %s is below one LSB (%s %%FSH displayed): the echo spans"
-                                + " less than one code", fmt(signalHeight), fmt(lsb))));
-            }
-            if (errorUnderDb.isEmpty()) {
-                warnings.add(Warning.of(AMPLITUDE_ERROR_UNDER_UNDEFINED, String.format(Locale.ROOT,
-                        "signal_height_percent_fsh %s is at or below the quantizer's low bound (%s %%FSH with %s):"
-                                + " it can read as 0, so amplitude_error_under_db has no finite value; it is null",
-                        fmt(signalHeight), fmt(lowBoundPercentFsh), quantizer)));
-            }
         }
-
-        Double minimumHeight = null;
-        Double minimumHeightDb = null;
-        if (toleranceDb != null) {
-            minimumHeight = minimumHeightPercentFsh(lowBoundPercentFsh, toleranceDb);
-            minimumHeightDb = Decibels.fromRatio(minimumHeight / FULL_SCREEN_PERCENT_FSH);
-            references.add(minimumHeightReference(quantizer));
-            double highestDisplayable = FULL_SCREEN_PERCENT_FSH * StrictMath.min(1.0, gainRatio);
-            if (minimumHeight > highestDisplayable) {
-                warnings.add(Warning.of(MINIMUM_HEIGHT_ABOVE_FULL_SCREEN, String.format(Locale.ROOT,
-                        "minimum_height_percent_fsh %s is above the highest height that can be displayed and"
-                                + " recorded (%s %%FSH): no echo is read within amplitude_tolerance_db %s",
-                        fmt(minimumHeight), fmt(highestDisplayable), fmt(toleranceDb))));
-            }
-            if (signalHeight != null && signalHeight < minimumHeight) {
-                warnings.add(Warning.of(SIGNAL_HEIGHT_BELOW_MINIMUM, String.format(Locale.ROOT,
-                        "signal_height_percent_fsh %s is below minimum_height_percent_fsh %s: its reading can be"
-                                + " off by more than amplitude_tolerance_db %s",
-                        fmt(signalHeight), fmt(minimumHeight), fmt(toleranceDb))));
-            }
+        Optional<Double> evaluationErrorUnderDb = underErrorDb(evaluationHeight, scale.lowBoundPercentFsh());
+        if (evaluationHeight > FULL_SCREEN_PERCENT_FSH) {
+            warnings.add(QuantizationMessages.evaluationHeightAboveFullScreen(evaluationHeight));
         }
-
-        Double evaluationHeight = null;
-        Optional<Double> evaluationErrorUnderDb = null;
-        if (referenceHeight != null) {
-            requireReachable(referenceHeight, gainRatio, gainDb, "reference_height_percent_fsh");
-            evaluationHeight = referenceHeight * Decibels.toRatio(evaluationLevelDb);
-            requireReachableEvaluation(evaluationHeight, referenceHeight, evaluationLevelDb, gainRatio, gainDb);
-            references.add(Reference.of("evaluation height", Sources.DEFINITIONS));
-            if (signalHeight == null) {
-                references.add(errorReference(quantizer, signal));
-            }
-            evaluationErrorUnderDb = underErrorDb(evaluationHeight, lowBoundPercentFsh);
-            if (evaluationHeight > FULL_SCREEN_PERCENT_FSH) {
-                warnings.add(Warning.of(EVALUATION_HEIGHT_ABOVE_FULL_SCREEN, String.format(Locale.ROOT,
-                        "evaluation_height_percent_fsh %s is above full screen on the display: digital_gain_db lifts"
-                                + " it off the screen; the recorded data hold it",
-                        fmt(evaluationHeight))));
-            }
-            if (evaluationHeight < lsb) {
-                warnings.add(Warning.of(EVALUATION_HEIGHT_BELOW_ONE_LSB, String.format(Locale.ROOT,
-                        "evaluation_height_percent_fsh %s (reference_height_percent_fsh %s at evaluation_level_db"
-                                + " %s) is below one LSB (%s %%FSH displayed)",
-                        fmt(evaluationHeight), fmt(referenceHeight), fmt(evaluationLevelDb), fmt(lsb))));
-            }
-            if (evaluationErrorUnderDb.isEmpty()) {
-                warnings.add(Warning.of(EVALUATION_ERROR_UNDER_UNDEFINED, String.format(Locale.ROOT,
-                        "evaluation_height_percent_fsh %s is at or below the quantizer's low bound (%s %%FSH with"
-                                + " %s): it can read as 0, so evaluation_error_under_db has no finite value; it is null",
-                        fmt(evaluationHeight), fmt(lowBoundPercentFsh), quantizer)));
-            }
-            if (minimumHeight != null && evaluationHeight < minimumHeight) {
-                warnings.add(Warning.of(EVALUATION_HEIGHT_BELOW_MINIMUM, String.format(Locale.ROOT,
-                        "evaluation_height_percent_fsh %s is below minimum_height_percent_fsh %s: the evaluation"
-                                + " level is not read within amplitude_tolerance_db %s",
-                        fmt(evaluationHeight), fmt(minimumHeight), fmt(toleranceDb))));
-            }
+        if (evaluationHeight < scale.lsb()) {
+            warnings.add(QuantizationMessages.evaluationHeightBelowOneLsb(evaluationHeight, referenceHeight,
+                    evaluationLevelDb, scale.lsb()));
         }
-
-        Double averagingSnrGainDb = null;
-        if (averaging != null) {
-            averagingSnrGainDb = averagingSnrGainDb(averaging);
-            references.add(Reference.of("averaging", Sources.SOFT_GAIN));
-            warnings.add(Warning.of(AVERAGING_NOISE_ONLY, String.format(Locale.ROOT,
-                    "averaging %d improves the SNR of uncorrelated noise by averaging_snr_gain_db %s; it does not"
-                            + " shrink the quantization step of a single shot, which every other figure here holds",
-                    averaging, fmt(averagingSnrGainDb))));
+        if (evaluationErrorUnderDb.isEmpty()) {
+            warnings.add(QuantizationMessages.evaluationErrorUnderUndefined(evaluationHeight,
+                    scale.lowBoundPercentFsh(), quantizer));
         }
-
-        return new QuantizationResult(signal, quantizer, mapping, gainDb, levels, lsb, dynamicRangeDb, idealSqnrDb,
-                errorOverDb, errorUnderDb, minimumHeight, minimumHeightDb, evaluationHeight, evaluationErrorUnderDb,
-                averagingSnrGainDb, warnings, references);
+        if (minimumHeight != null && evaluationHeight < minimumHeight) {
+            warnings.add(QuantizationMessages.evaluationHeightBelowMinimum(evaluationHeight, minimumHeight,
+                    in.amplitudeToleranceDb()));
+        }
+        return new Evaluation(evaluationHeight, evaluationErrorUnderDb);
     }
 
     /**
@@ -326,13 +338,7 @@ public final class QuantizationCalculator {
     private static void requireReachable(double heightPercentFsh, double gainRatio, double gainDb, String field) {
         double atConverterPercentFsh = heightPercentFsh / gainRatio;
         if (atConverterPercentFsh > FULL_SCREEN_PERCENT_FSH * (1.0 + FULL_SCALE_RELATIVE_ALLOWANCE)) {
-            String message = String.format(Locale.ROOT,
-                    "%s %s displayed with digital_gain_db %s needs %s %%FSH at the converter, above its full scale"
-                            + " of 100 %%FSH: the converter could not have recorded it",
-                    field, fmt(heightPercentFsh), fmt(gainDb), fmt(atConverterPercentFsh));
-            throw gainDb == 0.0
-                    ? CalculationException.impossible(message, field)
-                    : CalculationException.impossible(message, field, "digital_gain_db");
+            throw QuantizationMessages.heightNotReachable(field, heightPercentFsh, gainDb, atConverterPercentFsh);
         }
     }
 
@@ -340,16 +346,8 @@ public final class QuantizationCalculator {
             double evaluationLevelDb, double gainRatio, double gainDb) {
         double atConverterPercentFsh = evaluationHeightPercentFsh / gainRatio;
         if (atConverterPercentFsh > FULL_SCREEN_PERCENT_FSH * (1.0 + FULL_SCALE_RELATIVE_ALLOWANCE)) {
-            String message = String.format(Locale.ROOT,
-                    "the evaluation height (reference_height_percent_fsh %s at evaluation_level_db %s) is %s %%FSH"
-                            + " displayed and needs %s %%FSH at the converter with digital_gain_db %s, above its full"
-                            + " scale of 100 %%FSH: the converter could not have recorded it",
-                    fmt(referenceHeightPercentFsh), fmt(evaluationLevelDb), fmt(evaluationHeightPercentFsh),
-                    fmt(atConverterPercentFsh), fmt(gainDb));
-            throw gainDb == 0.0
-                    ? CalculationException.impossible(message, "evaluation_level_db", "reference_height_percent_fsh")
-                    : CalculationException.impossible(message,
-                            "evaluation_level_db", "reference_height_percent_fsh", "digital_gain_db");
+            throw QuantizationMessages.evaluationNotReachable(referenceHeightPercentFsh, evaluationLevelDb,
+                    evaluationHeightPercentFsh, atConverterPercentFsh, gainDb);
         }
     }
 
@@ -366,9 +364,5 @@ public final class QuantizationCalculator {
 
     private static Reference minimumHeightReference(Quantizer quantizer) {
         return Reference.of("minimum height", Sources.QUANTIZATION_ERROR);
-    }
-
-    private static String fmt(double value) {
-        return MessageNumbers.plain(value, 4);
     }
 }

@@ -2,12 +2,10 @@ package utdigit.core.sampling;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import org.apache.commons.math3.special.Erf;
 import utdigit.core.common.CalculationException;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.SearchBudget;
 import utdigit.core.common.Sources;
@@ -72,38 +70,89 @@ public final class SamplingCalculator {
         Objects.requireNonNull(in, "input");
         List<Warning> warnings = new ArrayList<>();
         List<Reference> references = new ArrayList<>();
+        Options o = Options.of(in);
+        SampleClock clock = SampleClock.of(in.samplingFrequencyMhz(), o.m(), o.mode());
+        Period period = period(clock, in.frequencyMhz(), o.signal(), warnings, references);
+        Optional<Double> sineLoss = sineLoss(o.signal(), period.amplitudeSamplesPerPeriod(), warnings, references);
+        PulseFigures pulse = PulseFigures.NONE;
+        if (o.withBandwidth()) {
+            pulse = pulseFigures(in, o, clock, period.nyquistMhz(), warnings, references);
+        }
+        if (!o.withBandwidth() && o.signal() == SampledSignal.RF) {
+            compressedDataAliasing(clock, in.frequencyMhz(), "frequency_mhz", warnings);
+        }
+        RequiredRates required = RequiredRates.NONE;
+        if (in.amplitudeToleranceDb() != null) {
+            required = requiredRates(in, o, clock, pulse.model(), warnings, references);
+        }
+        TfmFigures tfm = tfmFigures(in, o, pulse.model(), warnings, references);
+        return new SamplingResult(
+                clock.effectiveSamplingFrequencyMhz(),
+                clock.samplingIntervalNs(),
+                period.samplesPerPeriod(),
+                period.nyquistMhz(),
+                sineLoss,
+                clock.singleInstantWorstCaseNs(),
+                clock.singleInstantStandardUncertaintyNs(),
+                pulse.samplesPerPeriodUpper(),
+                pulse.spectralLevelAtNyquistDb(),
+                pulse.energyAboveNyquistFraction(),
+                pulse.loss(),
+                required.samplesPerPeriod(),
+                required.samplingFrequencyMhz(),
+                required.samplingFrequencyPulseMhz(),
+                tfm.gridLoss(),
+                tfm.maxGridSpacingMm(),
+                tfm.lateralLossDb(),
+                o.m(),
+                o.mode(),
+                o.signal(),
+                o.reading(),
+                o.convention(),
+                tfm.image(),
+                warnings,
+                references);
+    }
 
-        // Options and their parents.
-        int m = in.decimationFactor() == null ? 1 : in.decimationFactor();
-        DecimationMode mode = in.decimationMode() == null ? DecimationMode.DROP : in.decimationMode();
-        SampledSignal signal = in.signal() == null ? SampledSignal.RF : in.signal();
-        if (signal == SampledSignal.ENVELOPE && in.peakReading() != null) {
-            throw CalculationException.notApplicable("peak_reading",
-                    "peak_reading applies only to signal RF; with signal ENVELOPE the envelope samples are read");
+    /** The options with their defaults, after the checks of their parents. */
+    private record Options(int m, DecimationMode mode, SampledSignal signal, PeakReading reading,
+            boolean withBandwidth, CentreFrequencyConvention convention, TfmInputs tfm) {
+        static Options of(SamplingInput in) {
+            int m = in.decimationFactor() == null ? 1 : in.decimationFactor();
+            DecimationMode mode = in.decimationMode() == null ? DecimationMode.DROP : in.decimationMode();
+            SampledSignal signal = in.signal() == null ? SampledSignal.RF : in.signal();
+            if (signal == SampledSignal.ENVELOPE && in.peakReading() != null) {
+                throw CalculationException.notApplicable("peak_reading",
+                        "peak_reading applies only to signal RF; with signal ENVELOPE the envelope samples are read");
+            }
+            PeakReading reading = signal == SampledSignal.RF
+                    ? (in.peakReading() == null ? PeakReading.ABSOLUTE : in.peakReading())
+                    : null;
+            boolean withBandwidth = in.bandwidthPercent() != null;
+            if (!withBandwidth && in.centreFrequencyConvention() != null) {
+                throw CalculationException.notApplicable("centre_frequency_convention",
+                        "centre_frequency_convention applies only with bandwidth_percent");
+            }
+            CentreFrequencyConvention convention = withBandwidth
+                    ? (in.centreFrequencyConvention() == null
+                            ? CentreFrequencyConvention.ARITHMETIC : in.centreFrequencyConvention())
+                    : null;
+            TfmInputs tfm = TfmInputs.check(in, withBandwidth);
+            if (withBandwidth && in.amplitudeToleranceDb() != null && signal == SampledSignal.RF
+                    && !(in.bandwidthPercent() >= MIN_BANDWIDTH_PERCENT_FOR_PULSE_RATE)) {
+                throw CalculationException.invalid("bandwidth_percent", in.bandwidthPercent(),
+                        "must be >= 1 with amplitude_tolerance_db and signal RF: the search for "
+                                + "required_sampling_frequency_pulse_mhz covers bandwidths of 1 % and above");
+            }
+            return new Options(m, mode, signal, reading, withBandwidth, convention, tfm);
         }
-        PeakReading reading = signal == SampledSignal.RF
-                ? (in.peakReading() == null ? PeakReading.ABSOLUTE : in.peakReading())
-                : null;
-        boolean withBandwidth = in.bandwidthPercent() != null;
-        if (!withBandwidth && in.centreFrequencyConvention() != null) {
-            throw CalculationException.notApplicable("centre_frequency_convention",
-                    "centre_frequency_convention applies only with bandwidth_percent");
-        }
-        CentreFrequencyConvention convention = withBandwidth
-                ? (in.centreFrequencyConvention() == null
-                        ? CentreFrequencyConvention.ARITHMETIC : in.centreFrequencyConvention())
-                : null;
-        TfmInputs tfm = TfmInputs.check(in, withBandwidth);
-        if (withBandwidth && in.amplitudeToleranceDb() != null && signal == SampledSignal.RF
-                && !(in.bandwidthPercent() >= MIN_BANDWIDTH_PERCENT_FOR_PULSE_RATE)) {
-            throw CalculationException.invalid("bandwidth_percent", in.bandwidthPercent(),
-                    "must be >= 1 with amplitude_tolerance_db and signal RF: the search for "
-                            + "required_sampling_frequency_pulse_mhz covers bandwidths of 1 % and above");
-        }
+    }
 
-        // Clock, period and timing.
-        SampleClock clock = SampleClock.of(in.samplingFrequencyMhz(), m, mode);
-        double f = in.frequencyMhz();
+    /** Samples per period at the effective rate and at the rate that decides amplitude, and the Nyquist frequency. */
+    private record Period(double samplesPerPeriod, double amplitudeSamplesPerPeriod, double nyquistMhz) {}
+
+    private static Period period(SampleClock clock, double f, SampledSignal signal, List<Warning> warnings,
+            List<Reference> references) {
         double effectiveMhz = clock.effectiveSamplingFrequencyMhz();
         double amplitudeMhz = clock.amplitudeSamplingFrequencyMhz();
         double samplesPerPeriod = effectiveMhz / f;
@@ -112,111 +161,110 @@ public final class SamplingCalculator {
         references.add(Reference.of("sampling interval, samples per period, decimation", Sources.DECIMATION));
         references.add(Reference.of("timing error and uncertainty", Sources.GUM_RECTANGULAR));
         if (samplesPerPeriod <= 2.0) {
-            warnings.add(Warning.of(SAMPLES_PER_PERIOD_AT_MOST_2, String.format(Locale.ROOT,
-                    "samples_per_period is %s: 2 or fewer samples per period of frequency_mhz undersample the "
-                            + "carrier (an echo can be missed or read at an alias)%s",
-                    num(samplesPerPeriod),
-                    signal == SampledSignal.RF && amplitudeSamplesPerPeriod <= 2.0
-                            ? "; sine_amplitude_loss_db is null: the sine bound has no value at n <= 2" : "")));
+            warnings.add(SamplingMessages.samplesPerPeriodAtMost2(samplesPerPeriod,
+                    signal == SampledSignal.RF && amplitudeSamplesPerPeriod <= 2.0));
         }
+        return new Period(samplesPerPeriod, amplitudeSamplesPerPeriod, nyquistMhz);
+    }
 
-        Optional<Double> sineLoss;
+    private static Optional<Double> sineLoss(SampledSignal signal, double amplitudeSamplesPerPeriod,
+            List<Warning> warnings, List<Reference> references) {
         if (signal == SampledSignal.ENVELOPE) {
-            sineLoss = Optional.empty();
-            warnings.add(Warning.of(SINE_BOUND_NOT_APPLICABLE,
-                    "sine_amplitude_loss_db is null: with signal ENVELOPE the envelope is sampled, not the carrier, "
-                            + "so the sine bound does not apply (see pulse_amplitude_loss_db, which needs "
-                            + "bandwidth_percent); required_samples_per_period and required_sampling_frequency_mhz "
-                            + "stay the sine model's figures for comparison with code rules"));
+            warnings.add(SamplingMessages.sineBoundNotApplicable());
+            return Optional.empty();
         } else if (amplitudeSamplesPerPeriod > 2.0) {
-            sineLoss = Optional.of(PulseSamplingLoss.sineBoundLossDb(amplitudeSamplesPerPeriod));
+            Optional<Double> sineLoss = Optional.of(PulseSamplingLoss.sineBoundLossDb(amplitudeSamplesPerPeriod));
             references.add(Reference.of("sine amplitude loss", Sources.SINE_BOUND));
+            return sineLoss;
         } else {
-            sineLoss = Optional.empty(); // explained by SAMPLES_PER_PERIOD_AT_MOST_2 (n_amp <= 2 implies n <= 2)
+            return Optional.empty(); // explained by SAMPLES_PER_PERIOD_AT_MOST_2 (n_amp <= 2 implies n <= 2)
         }
+    }
 
-        // With a bandwidth: the pulse model.
-        Double samplesPerPeriodUpper = null;
-        Double spectralLevelAtNyquistDb = null;
-        Double energyAboveNyquistFraction = null;
-        Optional<Double> pulseLoss = null;
-        GaussianPulse pulse = null;
-        if (withBandwidth) {
-            double bandwidthFraction = in.bandwidthPercent() / 100.0;
-            double upperMhz = convention.bandEdgesMhz(f, bandwidthFraction)[1];
-            pulse = convention.pulseModel(f, bandwidthFraction);
-            references.add(Reference.of("band edges and centre frequency", Sources.CENTRE_FREQUENCY));
-            references.add(Reference.of("pulse model", Sources.SCIPY_GAUSSPULSE));
-            if (in.bandwidthPercent() > 100.0) {
-                warnings.add(Warning.of(BANDWIDTH_ABOVE_100_PERCENT,
-                        "bandwidth_percent is above 100: the real pulse's negative-frequency image moves the lower "
-                                + "band edge of the one-sided model; pulse figures are less reliable"));
-            }
-            samplesPerPeriodUpper = effectiveMhz / upperMhz;
-            boolean envelope = signal == SampledSignal.ENVELOPE;
-            // The sampled spectrum: the carrier band for RF, the detected envelope's (centred at 0 Hz) for ENVELOPE.
-            double envelopeEdgeMhz = pulse.edgeOffsetMhz(-6.0);
-            double bandTopMhz = envelope ? envelopeEdgeMhz : upperMhz;
-            if (amplitudeMhz <= 2.0 * bandTopMhz) {
-                warnings.add(Warning.of(BAND_ALIASING, envelope
-                        ? String.format(Locale.ROOT,
-                                "the rate that decides amplitude (%s MHz) is at or below twice the -6 dB edge of the "
-                                        + "detected envelope's spectrum (%s MHz, centred at 0 Hz): the envelope aliases",
-                                num(amplitudeMhz), num(envelopeEdgeMhz))
-                        : String.format(Locale.ROOT,
-                                "the rate that decides amplitude (%s MHz) is at or below twice the upper -6 dB band edge "
-                                        + "(%s MHz): the probe's band aliases", num(amplitudeMhz), num(upperMhz))));
-            }
-            spectralLevelAtNyquistDb = envelope
-                    ? pulse.envelopeSpectralLevelDb(nyquistMhz)
-                    : pulse.spectralLevelDb(nyquistMhz);
-            if (spectralLevelAtNyquistDb > NYQUIST_LEVEL_WARNING_DB) {
-                warnings.add(Warning.of(NYQUIST_LEVEL_ABOVE_MINUS_40_DB, String.format(Locale.ROOT,
-                        "spectral_level_at_nyquist_db is %s, above %s dB: the pulse model%s has significant energy "
-                                + "at the Nyquist frequency (a model value; the anti-alias filter decides)",
-                        num(spectralLevelAtNyquistDb), num(NYQUIST_LEVEL_WARNING_DB),
-                        envelope ? "'s detected envelope" : "")));
-            }
-            energyAboveNyquistFraction = envelope
-                    ? envelopeEnergyAboveFraction(pulse, nyquistMhz)
-                    : energyAboveFraction(pulse, nyquistMhz);
-            references.add(Reference.of("spectral level at Nyquist", envelope ? Sources.ENVELOPE_SPECTRAL_MODEL : Sources.SPECTRAL_MODEL));
-            references.add(Reference.of("energy above Nyquist", envelope ? Sources.ENVELOPE_SPECTRAL_MODEL : Sources.SPECTRAL_MODEL));
-            compressedDataAliasing(clock, bandTopMhz, envelope ? "the detected envelope's -6 dB edge"
-                    : "the upper -6 dB band edge", warnings);
-            pulseLoss = pulseLoss(pulse, signal, reading, clock, warnings, references);
+    /** The pulse model's figures (with a bandwidth); the boxed ones null and the model absent without. */
+    private record PulseFigures(Double samplesPerPeriodUpper, Double spectralLevelAtNyquistDb,
+            Double energyAboveNyquistFraction, Optional<Double> loss, GaussianPulse model) {
+        static final PulseFigures NONE = new PulseFigures(null, null, null, null, null);
+    }
+
+    private static PulseFigures pulseFigures(SamplingInput in, Options o, SampleClock clock, double nyquistMhz,
+            List<Warning> warnings, List<Reference> references) {
+        double f = in.frequencyMhz();
+        double amplitudeMhz = clock.amplitudeSamplingFrequencyMhz();
+        double bandwidthFraction = in.bandwidthPercent() / 100.0;
+        double upperMhz = o.convention().bandEdgesMhz(f, bandwidthFraction)[1];
+        GaussianPulse pulse = o.convention().pulseModel(f, bandwidthFraction);
+        references.add(Reference.of("band edges and centre frequency", Sources.CENTRE_FREQUENCY));
+        references.add(Reference.of("pulse model", Sources.SCIPY_GAUSSPULSE));
+        if (in.bandwidthPercent() > 100.0) {
+            warnings.add(SamplingMessages.bandwidthAbove100Percent());
         }
-
-        if (!withBandwidth && signal == SampledSignal.RF) {
-            compressedDataAliasing(clock, f, "frequency_mhz", warnings);
+        double samplesPerPeriodUpper = clock.effectiveSamplingFrequencyMhz() / upperMhz;
+        boolean envelope = o.signal() == SampledSignal.ENVELOPE;
+        // The sampled spectrum: the carrier band for RF, the detected envelope's (centred at 0 Hz) for ENVELOPE.
+        double envelopeEdgeMhz = pulse.edgeOffsetMhz(-6.0);
+        double bandTopMhz = envelope ? envelopeEdgeMhz : upperMhz;
+        if (amplitudeMhz <= 2.0 * bandTopMhz) {
+            warnings.add(envelope ? SamplingMessages.envelopeAliasing(amplitudeMhz, envelopeEdgeMhz)
+                    : SamplingMessages.bandAliasing(amplitudeMhz, upperMhz));
         }
+        double spectralLevelAtNyquistDb = envelope
+                ? pulse.envelopeSpectralLevelDb(nyquistMhz)
+                : pulse.spectralLevelDb(nyquistMhz);
+        if (spectralLevelAtNyquistDb > NYQUIST_LEVEL_WARNING_DB) {
+            warnings.add(SamplingMessages.nyquistLevelAboveLimit(spectralLevelAtNyquistDb, envelope));
+        }
+        double energyAboveNyquistFraction = envelope
+                ? envelopeEnergyAboveFraction(pulse, nyquistMhz)
+                : energyAboveFraction(pulse, nyquistMhz);
+        references.add(Reference.of("spectral level at Nyquist", envelope ? Sources.ENVELOPE_SPECTRAL_MODEL : Sources.SPECTRAL_MODEL));
+        references.add(Reference.of("energy above Nyquist", envelope ? Sources.ENVELOPE_SPECTRAL_MODEL : Sources.SPECTRAL_MODEL));
+        compressedDataAliasing(clock, bandTopMhz, envelope ? "the detected envelope's -6 dB edge"
+                : "the upper -6 dB band edge", warnings);
+        Optional<Double> pulseLoss = pulseLoss(pulse, o.signal(), o.reading(), clock, warnings, references);
+        return new PulseFigures(samplesPerPeriodUpper, spectralLevelAtNyquistDb, energyAboveNyquistFraction,
+                pulseLoss, pulse);
+    }
 
-        // With a tolerance: the required rates.
-        Double requiredSamplesPerPeriod = null;
-        Double requiredSamplingFrequencyMhz = null;
+    /** The rates needed for the amplitude tolerance: the sine model's, and the pulse model's with a bandwidth. */
+    private record RequiredRates(Double samplesPerPeriod, Double samplingFrequencyMhz,
+            Optional<Double> samplingFrequencyPulseMhz) {
+        static final RequiredRates NONE = new RequiredRates(null, null, null);
+    }
+
+    private static RequiredRates requiredRates(SamplingInput in, Options o, SampleClock clock, GaussianPulse pulse,
+            List<Warning> warnings, List<Reference> references) {
+        double toleranceDb = in.amplitudeToleranceDb();
+        double requiredSamplesPerPeriod = PulseSamplingLoss.requiredSamplesPerPeriod(toleranceDb);
+        double requiredSamplingFrequencyMhz =
+                clock.rawFrequencyForAmplitudeRateMhz(requiredSamplesPerPeriod * in.frequencyMhz());
+        references.add(Reference.of("required samples per period and sampling frequency", Sources.REQUIRED_RATE));
         Optional<Double> requiredSamplingFrequencyPulseMhz = null;
-        if (in.amplitudeToleranceDb() != null) {
-            double toleranceDb = in.amplitudeToleranceDb();
-            requiredSamplesPerPeriod = PulseSamplingLoss.requiredSamplesPerPeriod(toleranceDb);
-            requiredSamplingFrequencyMhz = clock.rawFrequencyForAmplitudeRateMhz(requiredSamplesPerPeriod * f);
-            references.add(Reference.of("required samples per period and sampling frequency", Sources.REQUIRED_RATE));
-            if (withBandwidth) {
-                requiredSamplingFrequencyPulseMhz =
-                        requiredPulseRate(pulse, signal, reading, toleranceDb, clock, warnings, references);
-            }
+        if (o.withBandwidth()) {
+            requiredSamplingFrequencyPulseMhz =
+                    requiredPulseRate(pulse, o.signal(), o.reading(), toleranceDb, clock, warnings, references);
         }
+        return new RequiredRates(requiredSamplesPerPeriod, requiredSamplingFrequencyMhz,
+                requiredSamplingFrequencyPulseMhz);
+    }
 
-        // TFM spatial sampling.
+    /** The TFM image's spatial sampling figures; null where their inputs were not given. */
+    private record TfmFigures(Optional<Double> gridLoss, Double maxGridSpacingMm, Double lateralLossDb,
+            TfmImage image) {}
+
+    private static TfmFigures tfmFigures(SamplingInput in, Options o, GaussianPulse pulse, List<Warning> warnings,
+            List<Reference> references) {
         Optional<Double> tfmGridLoss = null;
         Double tfmMaxGridSpacingMm = null;
         Double tfmLateralLossDb = null;
         TfmImage image = null;
-        if (tfm.withGrid() || tfm.withLateral()) {
-            double wavelengthMm = Waves.wavelengthMm(in.velocityMPerS(), f);
+        if (o.tfm().withGrid() || o.tfm().withLateral()) {
+            double wavelengthMm = Waves.wavelengthMm(in.velocityMPerS(), in.frequencyMhz());
             references.add(Reference.of("wavelength", Sources.DEFINITIONS));
-            if (tfm.withGrid()) {
+            if (o.tfm().withGrid()) {
                 image = in.tfmImage() == null ? TfmImage.RF : in.tfmImage();
-                Double widthMm = withBandwidth ? TfmGridSampling.depthResponseWidthMm(in.velocityMPerS(), pulse) : null;
+                Double widthMm = o.withBandwidth()
+                        ? TfmGridSampling.depthResponseWidthMm(in.velocityMPerS(), pulse) : null;
                 double stepMm = in.tfmGridSpacingMm();
                 tfmGridLoss = tfmDepthLoss(image, stepMm, wavelengthMm, widthMm, warnings);
                 if (in.amplitudeToleranceDb() != null) {
@@ -227,44 +275,19 @@ public final class SamplingCalculator {
                 }
                 references.add(Reference.of("TFM depth grid", Sources.TFM_GRID));
             }
-            if (tfm.withLateral()) {
+            if (o.tfm().withLateral()) {
                 double lateralWidthMm = TfmGridSampling.lateralWidthMm(
                         wavelengthMm, in.tfmDepthMm(), in.tfmApertureMm());
                 double stepMm = in.tfmLateralGridSpacingMm();
                 tfmLateralLossDb = TfmGridSampling.gaussianStepLossDb(stepMm, lateralWidthMm);
                 if (stepMm >= lateralWidthMm) {
-                    warnings.add(stepNotBelowWidth("tfm_lateral_grid_spacing_mm", stepMm, lateralWidthMm));
+                    warnings.add(SamplingMessages.stepNotBelowWidth("tfm_lateral_grid_spacing_mm", stepMm,
+                            lateralWidthMm));
                 }
                 references.add(Reference.of("TFM lateral grid", Sources.TFM_GRID));
             }
         }
-
-        return new SamplingResult(
-                effectiveMhz,
-                clock.samplingIntervalNs(),
-                samplesPerPeriod,
-                nyquistMhz,
-                sineLoss,
-                clock.singleInstantWorstCaseNs(),
-                clock.singleInstantStandardUncertaintyNs(),
-                samplesPerPeriodUpper,
-                spectralLevelAtNyquistDb,
-                energyAboveNyquistFraction,
-                pulseLoss,
-                requiredSamplesPerPeriod,
-                requiredSamplingFrequencyMhz,
-                requiredSamplingFrequencyPulseMhz,
-                tfmGridLoss,
-                tfmMaxGridSpacingMm,
-                tfmLateralLossDb,
-                m,
-                mode,
-                signal,
-                reading,
-                convention,
-                image,
-                warnings,
-                references);
+        return new TfmFigures(tfmGridLoss, tfmMaxGridSpacingMm, tfmLateralLossDb, image);
     }
 
     /**
@@ -299,12 +322,8 @@ public final class SamplingCalculator {
                                                List<Warning> warnings) {
         if (clock.decimationFactor() > 1 && clock.decimationMode() == DecimationMode.PEAK_PRESERVING
                 && clock.effectiveSamplingFrequencyMhz() <= 2.0 * bandTopMhz) {
-            warnings.add(Warning.of(COMPRESSED_DATA_ALIASING, String.format(Locale.ROOT,
-                    "decimation_mode PEAK_PRESERVING keeps each group's largest sample, so the amplitude figures follow "
-                            + "the raw rate; but processing of the compressed data (TFM, SAFT, filtering, FFT) sees "
-                            + "fs/m = %s MHz and aliases above fs/(2m) = %s MHz, at or below %s (%s MHz)",
-                    num(clock.effectiveSamplingFrequencyMhz()), num(clock.effectiveSamplingFrequencyMhz() / 2.0),
-                    what, num(bandTopMhz))));
+            warnings.add(SamplingMessages.compressedDataAliasing(clock.effectiveSamplingFrequencyMhz(), what,
+                    bandTopMhz));
         }
     }
 
@@ -319,30 +338,19 @@ public final class SamplingCalculator {
         }
         double carrierSamples = 1.0 / (pulse.carrierMhz() * intervalUs);
         if (!(carrierSamples > 2.0)) {
-            warnings.add(Warning.of(PULSE_LOSS_NOT_DEFINED, String.format(Locale.ROOT,
-                    "pulse_amplitude_loss_db is null: the rate that decides amplitude (%s MHz) gives %s samples per "
-                            + "period of the pulse model's carrier (%s MHz); at 2 or fewer a sample can fall on every "
-                            + "zero crossing and no worst case exists",
-                    num(amplitudeMhz), num(carrierSamples), num(pulse.carrierMhz()))));
+            warnings.add(SamplingMessages.pulseLossNotDefined(amplitudeMhz, carrierSamples, pulse.carrierMhz()));
             return Optional.empty();
         }
         if (clock.decimationFactor() > 1 && clock.decimationMode() == DecimationMode.PEAK_PRESERVING
                 && reading == PeakReading.POSITIVE_PEAK) {
-            warnings.add(Warning.of(PEAK_PRESERVING_POSITIVE_PEAK,
-                    "decimation_mode PEAK_PRESERVING keeps the largest |sample| of each group of decimation_factor "
-                            + "samples: a positive peak can be displaced by a larger negative half-wave of the same group, "
-                            + "which pulse_amplitude_loss_db (at the raw rate) does not model"));
+            warnings.add(SamplingMessages.peakPreservingPositivePeak());
         }
         references.add(Reference.of("pulse amplitude loss", Sources.PULSE_SAMPLING_LOSS));
         try {
             return Optional.of(PulseSamplingLoss.rfLossDb(pulse, intervalUs, reading,
                     SearchBudget.of(PulseSamplingLoss.PHASE_SEARCH_BUDGET)));
         } catch (SearchBudget.Exhausted e) {
-            warnings.add(Warning.of(SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
-                    "pulse_amplitude_loss_db is null: the search over the sampling phase reached its bound of %d "
-                            + "pulse values (the pulse model is close to a continuous wave at this bandwidth and "
-                            + "frequency); the closed form cos(pi/n) exp(-a dt^2/4) bounds the loss from above",
-                    e.limit())));
+            warnings.add(SamplingMessages.lossSearchBound(e.limit()));
             return Optional.empty();
         }
     }
@@ -358,62 +366,37 @@ public final class SamplingCalculator {
         try {
             solution = RequiredPulseRate.forRf(pulse, reading, toleranceDb);
         } catch (SearchBudget.Exhausted e) {
-            warnings.add(Warning.of(SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
-                    "required_sampling_frequency_pulse_mhz is null: no finite rate was found within the search's "
-                            + "bound of %d pulse values (amplitude_tolerance_db too small to resolve, or a pulse "
-                            + "model too close to a continuous wave); required_sampling_frequency_mhz gives the sine "
-                            + "model's rate", e.limit())));
+            warnings.add(SamplingMessages.rateSearchBound(e.limit()));
             return Optional.empty();
         }
         double rawMhz = clock.rawFrequencyForAmplitudeRateMhz(solution.amplitudeSamplingFrequencyMhz());
         references.add(Reference.of("required sampling frequency for the pulse", Sources.REQUIRED_RATE));
-        solution.slowerPassingRateMhz().ifPresent(slowerMhz -> warnings.add(Warning.of(SLOWER_RATES_ALSO_PASS,
-                String.format(Locale.ROOT,
-                        "the pulse loss is not monotonic in the sampling frequency: slower rates than "
-                                + "required_sampling_frequency_pulse_mhz (%s MHz) also pass, e.g. %s MHz, but some rates "
-                                + "in between do not",
-                        num(rawMhz), num(clock.rawFrequencyForAmplitudeRateMhz(slowerMhz))))));
+        solution.slowerPassingRateMhz().ifPresent(slowerMhz -> warnings.add(SamplingMessages.slowerRatesAlsoPass(
+                rawMhz, clock.rawFrequencyForAmplitudeRateMhz(slowerMhz))));
         return Optional.of(rawMhz);
     }
 
     private static Optional<Double> tfmDepthLoss(TfmImage image, double stepMm, double wavelengthMm, Double widthMm,
                                                  List<Warning> warnings) {
         if (widthMm != null && stepMm >= widthMm) {
-            warnings.add(stepNotBelowWidth("tfm_grid_spacing_mm", stepMm, widthMm));
+            warnings.add(SamplingMessages.stepNotBelowWidth("tfm_grid_spacing_mm", stepMm, widthMm));
         }
         if (image == TfmImage.ENVELOPE) {
             return Optional.of(TfmGridSampling.gaussianStepLossDb(stepMm, widthMm));
         }
         if (!(stepMm < wavelengthMm / 4.0)) {
-            warnings.add(Warning.of(TFM_GRID_STEP_AT_OR_ABOVE_QUARTER_WAVELENGTH, String.format(Locale.ROOT,
-                    "tfm_grid_amplitude_loss_db is null: tfm_grid_spacing_mm (%s mm) is at or above a quarter "
-                            + "wavelength (%s mm); a grid point can fall on a zero of the RF image, so no bound exists",
-                    num(stepMm), num(wavelengthMm / 4.0))));
+            warnings.add(SamplingMessages.tfmStepAtOrAboveQuarterWavelength(stepMm, wavelengthMm / 4.0));
             return Optional.empty();
         }
         double lossDb = TfmGridSampling.carrierDepthLossDb(stepMm, wavelengthMm);
         if (widthMm == null) {
-            warnings.add(Warning.of(TFM_ENVELOPE_TERM_OMITTED,
-                    "tfm_grid_amplitude_loss_db holds the carrier term only: without bandwidth_percent the envelope "
-                            + "term 6 (dz/w)^2 is omitted and the loss is underestimated"));
+            warnings.add(SamplingMessages.tfmEnvelopeTermOmitted());
         } else {
             lossDb += TfmGridSampling.gaussianStepLossDb(stepMm, widthMm);
         }
         return Optional.of(lossDb);
     }
 
-    private static Warning stepNotBelowWidth(String field, double stepMm, double widthMm) {
-        return Warning.of(TFM_STEP_NOT_BELOW_RESPONSE_WIDTH, String.format(Locale.ROOT,
-                "%s (%s mm) is not below the image response's -6 dB width (%s mm): the quadratic loss 6 (d/w)^2 "
-                        + "is a rough model there, and the reflector may be missed",
-                field, num(stepMm), num(widthMm)));
-    }
-
-
-    /** A number for a message: 6 significant digits, no exponent for ordinary magnitudes. */
-    private static String num(double value) {
-        return MessageNumbers.plain(value, 6);
-    }
 
     /** The TFM inputs after the checks of their parents. */
     private record TfmInputs(boolean withGrid, boolean withLateral) {

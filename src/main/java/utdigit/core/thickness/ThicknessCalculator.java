@@ -2,10 +2,8 @@ package utdigit.core.thickness;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
@@ -95,11 +93,38 @@ public final class ThicknessCalculator {
 
         boolean echoToEcho = measurement == Measurement.ECHO_TO_ECHO;
         SampleClock.Timing timing = clock.timing(echoToEcho);
+        references.add(Reference.of(echoToEcho ? "timing, echo to echo" : "timing, first echo", timing.source()));
+        Uncertainty u = uncertainty(measurement, echoSpacing, coverageFactor, roundTripTimeUs, velocityMmPerUs,
+                velocityUncertaintyMmPerUs, timing, warnings, references);
+
+        Double requiredSamplingFrequencyMhz = null;
+        if (requiredResolutionMm != null) {
+            requiredSamplingFrequencyMhz = requiredSamplingFrequencyMhz(echoSpacing, velocityMmPerUs,
+                    requiredResolutionMm, thicknessResolutionMm, clock, warnings, references);
+        }
+        if (in.frequencyMhz() != null) {
+            checkPulseLength(in, thicknessMm, velocityMmPerUs, warnings, references);
+        }
+
+        return new ThicknessResult(measurement, echoSpacing, decimationFactor, coverageFactor,
+                velocityUncertaintyMPerS, thicknessResolutionMm, Units.mmToIn(thicknessResolutionMm),
+                roundTripTimeUs, samplesAcrossThickness, relativeResolutionPercent, timing.standardUncertaintyNs(),
+                timing.worstCaseNs(), u.standardMm(), u.expandedMm(), requiredSamplingFrequencyMhz,
+                warnings, references);
+    }
+
+    /** The combined standard and the expanded uncertainty of the thickness. */
+    private record Uncertainty(double standardMm, double expandedMm) {}
+
+    /**
+     * JCGM 100:2008 eq. 10 for d = v t / (2m): c_v = t / (2m), c_t = v / (2m), t = m round trips;
+     * warns when the (not normal) sampling term dominates.
+     */
+    private static Uncertainty uncertainty(Measurement measurement, int echoSpacing, double coverageFactor,
+            double roundTripTimeUs, double velocityMmPerUs, double velocityUncertaintyMmPerUs,
+            SampleClock.Timing timing, List<Warning> warnings, List<Reference> references) {
         double timingStandardUncertaintyNs = timing.standardUncertaintyNs();
         double timingWorstCaseErrorNs = timing.worstCaseNs();
-        references.add(Reference.of(echoToEcho ? "timing, echo to echo" : "timing, first echo", timing.source()));
-
-        // JCGM 100:2008 eq. 10 for d = v t / (2m): c_v = t / (2m), c_t = v / (2m), t = m round trips.
         double measuredTimeUs = echoSpacing * roundTripTimeUs;
         double velocityTermMm = measuredTimeUs / (2.0 * echoSpacing) * velocityUncertaintyMmPerUs;
         double samplingTermMm = velocityMmPerUs / (2.0 * echoSpacing) * (timingStandardUncertaintyNs / 1000.0);
@@ -111,42 +136,24 @@ public final class ThicknessCalculator {
             double worstCaseMm = velocityMmPerUs / (2.0 * echoSpacing) * (timingWorstCaseErrorNs / 1000.0);
             double coveragePercent = 100.0 * samplingAloneCoverageFraction(
                     measurement, coverageFactor, timingStandardUncertaintyNs, timingWorstCaseErrorNs);
-            warnings.add(Warning.of("SAMPLING_TERM_DOMINATES",
-                    String.format(Locale.ROOT,
-                            "the sampling term dominates standard_uncertainty_mm; its distribution is %s, not"
-                                    + " normal, so coverage_factor %s does not give a 95 %% coverage probability:"
-                                    + " for the sampling term alone k u covers %s %% and the worst case is"
-                                    + " +/- %s mm",
-                            measurement == Measurement.ECHO_TO_ECHO ? "triangular" : "rectangular",
-                            MessageNumbers.exact(coverageFactor), MessageNumbers.plain(coveragePercent, 3),
-                            MessageNumbers.plain(worstCaseMm, 4))));
+            warnings.add(ThicknessMessages.samplingTermDominates(measurement, coverageFactor, coveragePercent,
+                    worstCaseMm));
         }
+        return new Uncertainty(standardUncertaintyMm, expandedUncertaintyMm);
+    }
 
-        Double requiredSamplingFrequencyMhz = null;
-        if (requiredResolutionMm != null) {
-            double effectiveRateMhz = velocityMmPerUs / (2.0 * echoSpacing * requiredResolutionMm);
-            requiredSamplingFrequencyMhz = effectiveRateMhz * clock.decimationFactor();
-            references.add(Reference.of("required sampling frequency", Sources.DEFINITIONS));
-            if (thicknessResolutionMm > requiredResolutionMm * (1.0 + REQUIRED_RESOLUTION_RELATIVE_MARGIN)) {
-                warnings.add(Warning.of("RESOLUTION_COARSER_THAN_REQUIRED",
-                        String.format(Locale.ROOT,
-                                "thickness_resolution_mm (%s mm) is coarser than required_resolution (%s mm):"
-                                        + " sampling_frequency_mhz %s or more is needed",
-                                MessageNumbers.plain(thicknessResolutionMm, 4),
-                                MessageNumbers.plain(requiredResolutionMm, 4),
-                                MessageNumbers.plain(requiredSamplingFrequencyMhz, 6))));
-            }
+    /** The raw sampling frequency whose sample is worth the required resolution, warned when not met. */
+    private static double requiredSamplingFrequencyMhz(int echoSpacing, double velocityMmPerUs,
+            double requiredResolutionMm, double thicknessResolutionMm, SampleClock clock, List<Warning> warnings,
+            List<Reference> references) {
+        double effectiveRateMhz = velocityMmPerUs / (2.0 * echoSpacing * requiredResolutionMm);
+        double requiredSamplingFrequencyMhz = effectiveRateMhz * clock.decimationFactor();
+        references.add(Reference.of("required sampling frequency", Sources.DEFINITIONS));
+        if (thicknessResolutionMm > requiredResolutionMm * (1.0 + REQUIRED_RESOLUTION_RELATIVE_MARGIN)) {
+            warnings.add(ThicknessMessages.resolutionCoarserThanRequired(thicknessResolutionMm,
+                    requiredResolutionMm, requiredSamplingFrequencyMhz));
         }
-
-        if (in.frequencyMhz() != null) {
-            checkPulseLength(in, thicknessMm, velocityMmPerUs, warnings, references);
-        }
-
-        return new ThicknessResult(measurement, echoSpacing, decimationFactor, coverageFactor,
-                velocityUncertaintyMPerS, thicknessResolutionMm, Units.mmToIn(thicknessResolutionMm),
-                roundTripTimeUs, samplesAcrossThickness, relativeResolutionPercent, timingStandardUncertaintyNs,
-                timingWorstCaseErrorNs, standardUncertaintyMm, expandedUncertaintyMm, requiredSamplingFrequencyMhz,
-                warnings, references);
+        return requiredSamplingFrequencyMhz;
     }
 
     /**
@@ -183,10 +190,7 @@ public final class ThicknessCalculator {
             uncertaintyMPerS = 0.0;
         }
         if (uncertaintyMPerS == 0.0) {
-            warnings.add(Warning.of("VELOCITY_UNCERTAINTY_ZERO",
-                    "the velocity uncertainty is 0 (velocity_uncertainty_m_per_s or velocity_uncertainty_percent"
-                            + " not given or 0): standard_uncertainty_mm and expanded_uncertainty_mm then hold the"
-                            + " sampling alone; a velocity known to p % adds p % of the thickness"));
+            warnings.add(ThicknessMessages.velocityUncertaintyZero());
         }
         return uncertaintyMPerS;
     }
@@ -219,12 +223,7 @@ public final class ThicknessCalculator {
         double axialResolutionMm = velocityMmPerUs * durationUs / 2.0;
         references.add(Reference.of("wall-echo overlap", Sources.PULSE_LENGTH));
         if (thicknessMm < axialResolutionMm) {
-            warnings.add(Warning.of(THICKNESS_BELOW_AXIAL_RESOLUTION,
-                    String.format(Locale.ROOT,
-                            "nominal_thickness (%s mm) is below the axial resolution v tau(-6 dB)/2 (%s mm,"
-                                    + " model value from frequency_mhz and bandwidth_percent): successive wall echoes,"
-                                    + " 2d/v apart, overlap and the reading depends on how the instrument picks them",
-                            MessageNumbers.plain(thicknessMm, 4), MessageNumbers.plain(axialResolutionMm, 4))));
+            warnings.add(ThicknessMessages.thicknessBelowAxialResolution(thicknessMm, axialResolutionMm));
         }
     }
 }

@@ -2,10 +2,8 @@ package utdigit.core.timing;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Units;
@@ -68,83 +66,91 @@ public final class TimeOfFlightCalculator {
 
         double samplingIntervalUs = clock.samplingIntervalUs();
         double soundPathResolutionMm = soundPathResolutionMm(technique, velocityMmPerUs, samplingIntervalUs);
-
-        Double depthResolutionMm = null;
-        Double surfaceDistanceResolutionMm = null;
-        Double lateralWaveTimeUs = null;
-        Double timeOfFlightUs = null;
-        Double pulseLimitedDepthResolutionMm = null;
-        Double deadZoneDepthMm = null;
-        Double backwallDeadZoneMm = null;
-        Double pulseDurationUsedUs = null;
-
-        switch (technique) {
-            case PULSE_ECHO -> {
-                references.add(Reference.of("sound path per sample, pulse-echo", Sources.DEFINITIONS));
-                if (in.refractedAngleDeg() != null) {
-                    double angleDeg = Checks.inRangeHalfOpen("refracted_angle_deg", in.refractedAngleDeg(), 0.0, 90.0);
-                    double angleRad = StrictMath.toRadians(angleDeg);
-                    depthResolutionMm = soundPathResolutionMm * StrictMath.cos(angleRad);
-                    surfaceDistanceResolutionMm = soundPathResolutionMm * StrictMath.sin(angleRad);
-                    references.add(Reference.of("angle beam", Sources.DEFINITIONS));
-                }
+        Geometry g = switch (technique) {
+            case PULSE_ECHO -> pulseEcho(in, soundPathResolutionMm, references);
+            case THROUGH_TRANSMISSION -> {
+                references.add(Reference.of("sound path per sample, through-transmission", Sources.DEFINITIONS));
+                yield Geometry.NONE;
             }
-            case THROUGH_TRANSMISSION -> references.add(Reference.of("sound path per sample, through-transmission", Sources.DEFINITIONS));
-            case TOFD -> {
-                references.add(Reference.of("sound path per sample, TOFD", Sources.DEFINITIONS));
-                double halfSeparationMm = Checks.positive("probe_centre_separation", in.probeCentreSeparationMm()) / 2.0;
-                Double depthMm = in.depthMm() == null ? null : Checks.positive("depth", in.depthMm());
-                Double thicknessMm = in.thicknessMm() == null ? null : Checks.positive("thickness", in.thicknessMm());
-                if (depthMm != null && thicknessMm != null && depthMm > thicknessMm) {
-                    throw CalculationException.impossible(
-                            "depth (" + mm(depthMm) + ") lies below the back wall: it exceeds thickness ("
-                                    + mm(thicknessMm) + ")",
-                            "depth", "thickness");
-                }
-                pulseDurationUsedUs = pulseDurationUs(in, references);
-
-                lateralWaveTimeUs = TofdGeometry.lateralWaveTimeUs(halfSeparationMm, velocityMmPerUs);
-                references.add(Reference.of("TOFD geometry", Sources.TOFD_GEOMETRY));
-                references.add(Reference.of("flaw off the centre line", Sources.TOFD_GEOMETRY));
-
-                if (depthMm != null) {
-                    timeOfFlightUs = TofdGeometry.timeOfFlightUs(halfSeparationMm, depthMm, velocityMmPerUs);
-                    depthResolutionMm = TofdGeometry.depthStepMm(
-                            halfSeparationMm, depthMm, samplingIntervalUs, velocityMmPerUs);
-                    references.add(Reference.of("TOFD depth step per sample", Sources.TOFD_GEOMETRY));
-                    double ratio = TofdGeometry.depthPerHalfSeparationRatio(halfSeparationMm, depthMm);
-                    references.add(Reference.of(String.format(Locale.ROOT,
-                            "probe centre separation error: dd/dS = -S/d = %s here, an error e in 2S moves the"
-                                    + " depth by %s e", MessageNumbers.plain(ratio, 4), MessageNumbers.plain(ratio / 2.0, 4)),
-                            Sources.TOFD_GEOMETRY));
-                }
-                if (pulseDurationUsedUs != null) {
-                    deadZoneDepthMm = TofdGeometry.deadZoneDepthMm(halfSeparationMm, pulseDurationUsedUs, velocityMmPerUs);
-                    references.add(Reference.of("TOFD near-surface dead zone", Sources.TOFD_GEOMETRY));
-                    if (depthMm != null) {
-                        pulseLimitedDepthResolutionMm = TofdGeometry.pulseLimitedDepthResolutionMm(
-                                halfSeparationMm, depthMm, pulseDurationUsedUs, velocityMmPerUs);
-                        references.add(Reference.of("TOFD pulse-limited depth resolution", Sources.TOFD_GEOMETRY));
-                        if (depthMm < deadZoneDepthMm) {
-                            warnings.add(Warning.of("DEPTH_IN_DEAD_ZONE",
-                                    "depth (" + mm(depthMm) + ") lies inside the near-surface dead zone ("
-                                            + mm(deadZoneDepthMm) + "): its tip signal arrives within the pulse"
-                                            + " duration of the lateral wave and is hidden by it"));
-                        }
-                    }
-                    if (thicknessMm != null) {
-                        backwallDeadZoneMm = backwallDeadZone(halfSeparationMm, thicknessMm, depthMm,
-                                pulseDurationUsedUs, velocityMmPerUs, deadZoneDepthMm, warnings, references);
-                    }
-                }
-            }
-        }
+            case TOFD -> tofd(in, velocityMmPerUs, samplingIntervalUs, warnings, references);
+        };
 
         return new TimeOfFlightResult(technique, timeReference, decimationFactor,
                 clock.samplingIntervalNs(), timingErrorNs, timingStandardUncertaintyNs, soundPathResolutionMm,
-                depthResolutionMm, surfaceDistanceResolutionMm, lateralWaveTimeUs, timeOfFlightUs,
-                pulseLimitedDepthResolutionMm, deadZoneDepthMm, backwallDeadZoneMm, pulseDurationUsedUs,
-                warnings, references);
+                g.depthResolutionMm(), g.surfaceDistanceResolutionMm(), g.lateralWaveTimeUs(), g.timeOfFlightUs(),
+                g.pulseLimitedDepthResolutionMm(), g.deadZoneDepthMm(), g.backwallDeadZoneMm(),
+                g.pulseDurationUsedUs(), warnings, references);
+    }
+
+    /** The figures of the technique's geometry; null where the technique or its inputs give none. */
+    private record Geometry(Double depthResolutionMm, Double surfaceDistanceResolutionMm, Double lateralWaveTimeUs,
+            Double timeOfFlightUs, Double pulseLimitedDepthResolutionMm, Double deadZoneDepthMm,
+            Double backwallDeadZoneMm, Double pulseDurationUsedUs) {
+        static final Geometry NONE = new Geometry(null, null, null, null, null, null, null, null);
+    }
+
+    /** Pulse-echo: with a refracted angle, the depth and surface distance of one sample's sound path. */
+    private static Geometry pulseEcho(TimeOfFlightInput in, double soundPathResolutionMm,
+            List<Reference> references) {
+        references.add(Reference.of("sound path per sample, pulse-echo", Sources.DEFINITIONS));
+        if (in.refractedAngleDeg() == null) {
+            return Geometry.NONE;
+        }
+        double angleDeg = Checks.inRangeHalfOpen("refracted_angle_deg", in.refractedAngleDeg(), 0.0, 90.0);
+        double angleRad = StrictMath.toRadians(angleDeg);
+        double depthResolutionMm = soundPathResolutionMm * StrictMath.cos(angleRad);
+        double surfaceDistanceResolutionMm = soundPathResolutionMm * StrictMath.sin(angleRad);
+        references.add(Reference.of("angle beam", Sources.DEFINITIONS));
+        return new Geometry(depthResolutionMm, surfaceDistanceResolutionMm, null, null, null, null, null, null);
+    }
+
+    /** TOFD: the lateral wave, and at a depth its time and depth step; with a pulse duration the dead zones. */
+    private static Geometry tofd(TimeOfFlightInput in, double velocityMmPerUs, double samplingIntervalUs,
+            List<Warning> warnings, List<Reference> references) {
+        references.add(Reference.of("sound path per sample, TOFD", Sources.DEFINITIONS));
+        double halfSeparationMm = Checks.positive("probe_centre_separation", in.probeCentreSeparationMm()) / 2.0;
+        Double depthMm = in.depthMm() == null ? null : Checks.positive("depth", in.depthMm());
+        Double thicknessMm = in.thicknessMm() == null ? null : Checks.positive("thickness", in.thicknessMm());
+        if (depthMm != null && thicknessMm != null && depthMm > thicknessMm) {
+            throw TimingMessages.depthBelowThickness(depthMm, thicknessMm);
+        }
+        Double pulseDurationUsedUs = pulseDurationUs(in, references);
+
+        double lateralWaveTimeUs = TofdGeometry.lateralWaveTimeUs(halfSeparationMm, velocityMmPerUs);
+        references.add(Reference.of("TOFD geometry", Sources.TOFD_GEOMETRY));
+        references.add(Reference.of("flaw off the centre line", Sources.TOFD_GEOMETRY));
+
+        Double timeOfFlightUs = null;
+        Double depthResolutionMm = null;
+        if (depthMm != null) {
+            timeOfFlightUs = TofdGeometry.timeOfFlightUs(halfSeparationMm, depthMm, velocityMmPerUs);
+            depthResolutionMm = TofdGeometry.depthStepMm(
+                    halfSeparationMm, depthMm, samplingIntervalUs, velocityMmPerUs);
+            references.add(Reference.of("TOFD depth step per sample", Sources.TOFD_GEOMETRY));
+            double ratio = TofdGeometry.depthPerHalfSeparationRatio(halfSeparationMm, depthMm);
+            references.add(Reference.of(TimingMessages.separationErrorTopic(ratio), Sources.TOFD_GEOMETRY));
+        }
+        Double pulseLimitedDepthResolutionMm = null;
+        Double deadZoneDepthMm = null;
+        Double backwallDeadZoneMm = null;
+        if (pulseDurationUsedUs != null) {
+            deadZoneDepthMm = TofdGeometry.deadZoneDepthMm(halfSeparationMm, pulseDurationUsedUs, velocityMmPerUs);
+            references.add(Reference.of("TOFD near-surface dead zone", Sources.TOFD_GEOMETRY));
+            if (depthMm != null) {
+                pulseLimitedDepthResolutionMm = TofdGeometry.pulseLimitedDepthResolutionMm(
+                        halfSeparationMm, depthMm, pulseDurationUsedUs, velocityMmPerUs);
+                references.add(Reference.of("TOFD pulse-limited depth resolution", Sources.TOFD_GEOMETRY));
+                if (depthMm < deadZoneDepthMm) {
+                    warnings.add(TimingMessages.depthInDeadZone(depthMm, deadZoneDepthMm));
+                }
+            }
+            if (thicknessMm != null) {
+                backwallDeadZoneMm = backwallDeadZone(halfSeparationMm, thicknessMm, depthMm,
+                        pulseDurationUsedUs, velocityMmPerUs, deadZoneDepthMm, warnings, references);
+            }
+        }
+        return new Geometry(depthResolutionMm, null, lateralWaveTimeUs, timeOfFlightUs,
+                pulseLimitedDepthResolutionMm, deadZoneDepthMm, backwallDeadZoneMm, pulseDurationUsedUs);
     }
 
     /**
@@ -162,22 +168,13 @@ public final class TimeOfFlightCalculator {
         double zoneMm = TofdGeometry.backwallDeadZoneMm(halfSeparationMm, thicknessMm, pulseDurationUs, velocityMmPerUs);
         references.add(Reference.of("TOFD back-wall dead zone", Sources.TOFD_GEOMETRY));
         if (TofdGeometry.backwallPulseReachesLateralWave(halfSeparationMm, thicknessMm, pulseDurationUs, velocityMmPerUs)) {
-            warnings.add(Warning.of("WHOLE_THICKNESS_DEAD",
-                    "the back-wall signal less the pulse duration falls at or before the lateral wave:"
-                            + " the back-wall dead zone covers the whole thickness (" + mm(thicknessMm)
-                            + "); a shorter pulse or a smaller probe_centre_separation widens the window between"
-                            + " the lateral wave and the back wall"));
+            warnings.add(TimingMessages.wholeThicknessDead(thicknessMm));
             return zoneMm;
         }
         if (deadZoneDepthMm + zoneMm >= thicknessMm) {
-            warnings.add(Warning.of("DEAD_ZONES_COVER_THICKNESS",
-                    "the near-surface dead zone (" + mm(deadZoneDepthMm) + ") and the back-wall dead zone ("
-                            + mm(zoneMm) + ") together cover the whole thickness (" + mm(thicknessMm) + ")"));
+            warnings.add(TimingMessages.deadZonesCoverThickness(deadZoneDepthMm, zoneMm, thicknessMm));
         } else if (depthMm != null && depthMm > thicknessMm - zoneMm) {
-            warnings.add(Warning.of("DEPTH_IN_BACKWALL_DEAD_ZONE",
-                    "depth (" + mm(depthMm) + ") lies inside the back-wall dead zone (the last " + mm(zoneMm)
-                            + " above the back wall): its tip signal arrives within the pulse duration before"
-                            + " the back-wall signal and is hidden by it"));
+            warnings.add(TimingMessages.depthInBackwallDeadZone(depthMm, zoneMm));
         }
         return zoneMm;
     }
@@ -243,9 +240,5 @@ public final class TimeOfFlightCalculator {
             throw CalculationException.notApplicable(field,
                     field + " applies only to technique TOFD (here " + technique + ")");
         }
-    }
-
-    private static String mm(double lengthMm) {
-        return MessageNumbers.plain(lengthMm, 4) + " mm";
     }
 }

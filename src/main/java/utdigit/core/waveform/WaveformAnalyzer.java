@@ -1,14 +1,11 @@
 package utdigit.core.waveform;
 
-import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Decibels;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.SearchBudget;
 import utdigit.core.common.Sources;
@@ -67,8 +64,6 @@ public final class WaveformAnalyzer {
     /** The tapered fraction of the Tukey window. */
     public static final double TUKEY_FRACTION = 0.2;
 
-    private static final MathContext DIGITS = new MathContext(6);
-
     /** The analysis of {@code in}, with the contract's defaults applied. */
     public static WaveformResult analyse(WaveformInput in) {
         Objects.requireNonNull(in, "input");
@@ -76,16 +71,38 @@ public final class WaveformAnalyzer {
         List<Reference> references = new ArrayList<>();
         boolean withTarget = in.samplingFrequencyMhz() != null;
         if (!withTarget) {
-            notWithoutTarget("decimation_factor", in.decimationFactor());
-            notWithoutTarget("decimation_mode", in.decimationMode());
-            notWithoutTarget("peak_reading", in.peakReading());
-            notWithoutTarget("amplitude_tolerance_db", in.amplitudeToleranceDb());
+            refuseTargetOptions(in);
         }
         CentreFrequencyConvention convention = in.centreFrequencyConvention() == null
                 ? CentreFrequencyConvention.ARITHMETIC : in.centreFrequencyConvention();
-
         double fsRec = in.recordSamplingFrequencyMhz();
-        double[] x = in.samples();
+        double[] y = meanRemoved(in.samples());
+        Echo echo = echo(y, warnings, references);
+        Spectrum spectrum = spectrum(y, echo.cut(), fsRec, references);
+        double near = recordAdequacy(spectrum, fsRec, warnings, references);
+        Band band = band(spectrum, convention, warnings, references);
+        Durations durations = durations(echo, fsRec, band.centreMhz(), warnings, references);
+        GaussianPulse pulse = gaussianModel(band, convention, warnings, references);
+        WaveformResult.ModelFigures model = modelFigures(pulse);
+        BandLimitedRecord record = new BandLimitedRecord(y, fsRec);
+        Target target = withTarget
+                ? target(in, spectrum, record, band, convention, pulse, warnings, references) : Target.NONE;
+        WaveformResult.Figure figure = figure(y, echo.envelope(), target.loss(), spectrum, fsRec);
+        return new WaveformResult(y.length, spectrum.resolutionMhz(), echo.window(), spectrum.peakFrequencyMhz(),
+                band.lowerMhz(), band.upperMhz(), band.lower20(), band.upper20(), band.centreMhz(),
+                band.bandwidthPercent(), durations.duration6(), durations.duration20(), durations.cycles6(), near,
+                model, target.figures(), convention, figure, warnings, references);
+    }
+
+    private static void refuseTargetOptions(WaveformInput in) {
+        notWithoutTarget("decimation_factor", in.decimationFactor());
+        notWithoutTarget("decimation_mode", in.decimationMode());
+        notWithoutTarget("peak_reading", in.peakReading());
+        notWithoutTarget("amplitude_tolerance_db", in.amplitudeToleranceDb());
+    }
+
+    /** The record with its mean removed; refused when nothing is left (no pulse). */
+    private static double[] meanRemoved(double[] x) {
         int n = x.length;
         double mean = 0.0;
         for (double v : x) {
@@ -102,29 +119,47 @@ public final class WaveformAnalyzer {
             throw CalculationException.notApplicable("samples",
                     "the record holds no pulse: its samples are all equal (all zero or a constant offset)");
         }
+        return y;
+    }
 
-        // Envelope, and whether the echo lies wholly inside the record.
+    /** The envelope, its peak, and whether the echo lies wholly inside the record. */
+    private record Echo(double[] envelope, int peak, double max, boolean cut) {
+        WaveformResult.SpectrumWindow window() {
+            return cut ? WaveformResult.SpectrumWindow.TUKEY_20 : WaveformResult.SpectrumWindow.NONE;
+        }
+    }
+
+    private static Echo echo(double[] y, List<Warning> warnings, List<Reference> references) {
+        int n = y.length;
         double[] envelope = envelope(y);
         int envelopePeak = argmax(envelope, 0, n - 1);
         double envelopeMax = envelope[envelopePeak];
         double cutRatio = Decibels.toRatio(-CUT_LEVEL_DB);
         boolean cut = envelope[0] >= cutRatio * envelopeMax || envelope[n - 1] >= cutRatio * envelopeMax;
-        WaveformResult.SpectrumWindow window = cut ? WaveformResult.SpectrumWindow.TUKEY_20
-                : WaveformResult.SpectrumWindow.NONE;
         if (cut) {
-            warnings.add(Warning.of(ECHO_CUT_BY_RECORD, String.format(Locale.ROOT,
-                    "the envelope at an end of the record is within %s dB of its peak: the echo is cut by the record, "
-                            + "so the spectrum is taken through a Tukey window (%s %% tapered) and its figures are "
-                            + "approximate; record the whole echo", num(CUT_LEVEL_DB), num(100 * TUKEY_FRACTION))));
+            warnings.add(WaveformMessages.echoCut());
         }
         references.add(Reference.of("record preparation", Sources.WAVEFORM_PREPARATION));
+        return new Echo(envelope, envelopePeak, envelopeMax, cut);
+    }
 
-        // Spectrum.
+    /** The one-sided spectrum of the record: magnitude and power per bin, their sum, and the peak bin. */
+    private record Spectrum(double[] magnitude, double[] power, double total, double resolutionMhz, int peakBin) {
+        double peakMagnitude() {
+            return magnitude[peakBin];
+        }
+
+        double peakFrequencyMhz() {
+            return peakBin * resolutionMhz;
+        }
+    }
+
+    private static Spectrum spectrum(double[] y, boolean cut, double fsRec, List<Reference> references) {
         double[] spectral = y.clone();
         if (cut) {
             tukey(spectral, TUKEY_FRACTION);
         }
-        int length = StrictMath.max(1024, SPECTRUM_PADDING * Fft.powerOfTwoAtLeast(n));
+        int length = StrictMath.max(1024, SPECTRUM_PADDING * Fft.powerOfTwoAtLeast(y.length));
         double[][] transform = Fft.forward(spectral, length);
         int bins = length / 2 + 1;
         double[] magnitude = new double[bins];
@@ -139,27 +174,35 @@ public final class WaveformAnalyzer {
         }
         double resolutionMhz = fsRec / length;
         int peakBin = argmax(magnitude, 0, bins - 1);
-        double peakMagnitude = magnitude[peakBin];
-        double peakFrequencyMhz = peakBin * resolutionMhz;
         references.add(Reference.of("measured spectrum", Sources.WAVEFORM_SPECTRUM));
+        return new Spectrum(magnitude, power, total, resolutionMhz, peakBin);
+    }
 
-        double near = energyAbove(power, total, NEAR_NYQUIST_FRACTION * fsRec / 2.0, resolutionMhz);
+    /** The energy fraction near the record's own Nyquist frequency: refused above a limit, warned above another. */
+    private static double recordAdequacy(Spectrum spectrum, double fsRec, List<Warning> warnings,
+            List<Reference> references) {
+        double near = energyAbove(spectrum.power(), spectrum.total(), NEAR_NYQUIST_FRACTION * fsRec / 2.0,
+                spectrum.resolutionMhz());
         references.add(Reference.of("record adequacy", Sources.WAVEFORM_ADEQUACY));
         if (near > RECORD_NYQUIST_REFUSAL_FRACTION) {
-            throw CalculationException.impossible(String.format(Locale.ROOT,
-                    "the record holds %s of its spectral energy above %s MHz (0.8 of its own Nyquist frequency, "
-                            + "record_sampling_frequency_mhz %s): it is sampled too slowly for its pulse (or the "
-                            + "rate is wrong), so its spectrum may be aliased; record it at a higher rate",
-                    num(near), num(NEAR_NYQUIST_FRACTION * fsRec / 2.0), num(fsRec)),
-                    "samples", "record_sampling_frequency_mhz");
+            throw WaveformMessages.recordAliased(near, NEAR_NYQUIST_FRACTION * fsRec / 2.0, fsRec);
         }
         if (near > RECORD_NYQUIST_WARNING_FRACTION) {
-            warnings.add(Warning.of(RECORD_ENERGY_NEAR_NYQUIST, String.format(Locale.ROOT,
-                    "the record holds %s of its spectral energy above 0.8 of its own Nyquist frequency (%s MHz): "
-                            + "noise or an under-sampled record; the measured figures may be affected",
-                    num(near), num(fsRec / 2.0))));
+            warnings.add(WaveformMessages.energyNearNyquist(near, fsRec / 2.0));
         }
+        return near;
+    }
 
+    /** The -6 dB and -20 dB edges, and the centre and bandwidth by the convention. */
+    private record Band(double lowerMhz, double upperMhz, Optional<Double> lower20, Optional<Double> upper20,
+            double centreMhz, double bandwidthPercent) {}
+
+    private static Band band(Spectrum spectrum, CentreFrequencyConvention convention, List<Warning> warnings,
+            List<Reference> references) {
+        double[] magnitude = spectrum.magnitude();
+        int peakBin = spectrum.peakBin();
+        double peakMagnitude = spectrum.peakMagnitude();
+        double resolutionMhz = spectrum.resolutionMhz();
         Optional<Double> lower6 = lowerEdge(magnitude, peakBin, peakMagnitude * Decibels.toRatio(-6.0), resolutionMhz);
         Optional<Double> upper6 = upperEdge(magnitude, peakBin, peakMagnitude * Decibels.toRatio(-6.0), resolutionMhz);
         if (lower6.isEmpty() || upper6.isEmpty() || !(lower6.get() > 0.0)) {
@@ -172,165 +215,213 @@ public final class WaveformAnalyzer {
         Optional<Double> lower20 = lowerEdge(magnitude, peakBin, peakMagnitude * Decibels.toRatio(-20.0), resolutionMhz);
         Optional<Double> upper20 = upperEdge(magnitude, peakBin, peakMagnitude * Decibels.toRatio(-20.0), resolutionMhz);
         if (lower20.isEmpty() || upper20.isEmpty()) {
-            warnings.add(Warning.of(EDGE_20DB_NOT_FOUND, "the spectrum does not fall 20 dB below its peak "
-                    + (lower20.isEmpty() ? "above 0 Hz" : "below the record's Nyquist frequency")
-                    + ": that -20 dB edge is null"));
+            warnings.add(WaveformMessages.edge20NotFound(lower20.isEmpty()));
         }
         double centreMhz = convention.centreFromEdgesMhz(lowerMhz, upperMhz);
         double bandwidthPercent = (upperMhz - lowerMhz) / centreMhz * 100.0;
         references.add(Reference.of("centre frequency and bandwidth", Sources.CENTRE_FREQUENCY));
+        return new Band(lowerMhz, upperMhz, lower20, upper20, centreMhz, bandwidthPercent);
+    }
 
-        // Envelope durations.
+    /** The envelope's -6 dB and -20 dB durations and the -6 dB cycles. */
+    private record Durations(Optional<Double> duration6, Optional<Double> duration20, Optional<Double> cycles6) {}
+
+    private static Durations durations(Echo echo, double fsRec, double centreMhz, List<Warning> warnings,
+            List<Reference> references) {
         double intervalRecUs = 1.0 / fsRec;
-        Optional<Double> duration6 = duration(envelope, envelopePeak, envelopeMax * Decibels.toRatio(-6.0), intervalRecUs);
-        Optional<Double> duration20 = duration(envelope, envelopePeak, envelopeMax * Decibels.toRatio(-20.0), intervalRecUs);
+        Optional<Double> duration6 = duration(echo.envelope(), echo.peak(), echo.max() * Decibels.toRatio(-6.0),
+                intervalRecUs);
+        Optional<Double> duration20 = duration(echo.envelope(), echo.peak(), echo.max() * Decibels.toRatio(-20.0),
+                intervalRecUs);
         if (duration6.isEmpty() || duration20.isEmpty()) {
-            warnings.add(Warning.of(ENVELOPE_LEVEL_NOT_REACHED, "the envelope does not fall "
-                    + (duration6.isEmpty() ? "6" : "20") + " dB below its peak on both sides inside the record: "
-                    + (duration6.isEmpty() ? "pulse_duration_6db_us, cycles_6db and pulse_duration_20db_us are null"
-                    : "pulse_duration_20db_us is null")));
+            warnings.add(WaveformMessages.envelopeLevelNotReached(duration6.isEmpty()));
         }
         Optional<Double> cycles6 = duration6.map(d -> d * centreMhz);
         references.add(Reference.of("envelope and durations", Sources.WAVEFORM_ENVELOPE));
+        return new Durations(duration6, duration20, cycles6);
+    }
 
-        // The Gaussian model of the same centre and bandwidth.
-        GaussianPulse pulse = bandwidthPercent < SamplingInput.MAX_BANDWIDTH_PERCENT_EXCLUSIVE
-                ? convention.pulseModel(centreMhz, bandwidthPercent / 100.0) : null;
-        WaveformResult.ModelFigures model = pulse == null
-                ? new WaveformResult.ModelFigures(Optional.empty(), Optional.empty())
-                : new WaveformResult.ModelFigures(Optional.of(pulse.envelopeDurationUs(6.0)),
-                        Optional.of(pulse.cycles(6.0)));
+    /** The Gaussian model of the same centre and bandwidth; null (with a warning) at 200 % or more. */
+    private static GaussianPulse gaussianModel(Band band, CentreFrequencyConvention convention,
+            List<Warning> warnings, List<Reference> references) {
+        GaussianPulse pulse = band.bandwidthPercent() < SamplingInput.MAX_BANDWIDTH_PERCENT_EXCLUSIVE
+                ? convention.pulseModel(band.centreMhz(), band.bandwidthPercent() / 100.0) : null;
         if (pulse == null) {
-            warnings.add(Warning.of(MODEL_NOT_AVAILABLE, "the measured bandwidth is 200 % or more: no Gaussian "
-                    + "pulse model of it is formed, so the model_ figures are null"));
+            warnings.add(WaveformMessages.modelNotAvailable());
         } else {
             references.add(Reference.of("Gaussian model beside the record", Sources.WAVEFORM_MODEL));
         }
+        return pulse;
+    }
 
-        BandLimitedRecord record = new BandLimitedRecord(y, fsRec);
-        WaveformResult.TargetFigures target = null;
-        double[] targetTimes = new double[0];
-        double[] targetValues = new double[0];
-        if (withTarget) {
-            int m = in.decimationFactor() == null ? 1 : in.decimationFactor();
-            DecimationMode mode = in.decimationMode() == null ? DecimationMode.DROP : in.decimationMode();
-            PeakReading reading = in.peakReading() == null ? PeakReading.ABSOLUTE : in.peakReading();
-            SampleClock clock = SampleClock.of(in.samplingFrequencyMhz(), m, mode);
-            double amplitudeMhz = clock.amplitudeSamplingFrequencyMhz();
-            double nyquistMhz = amplitudeMhz / 2.0;
-            double samplesPerPeriod = clock.effectiveSamplingFrequencyMhz() / centreMhz;
-            double above = energyAbove(power, total, nyquistMhz, resolutionMhz);
-            references.add(Reference.of("energy above the target Nyquist frequency", Sources.WAVEFORM_ENERGY));
-            double peak = record.peak(reading);
-            double m2 = record.secondDerivativeBound();
-            Optional<Double> loss = Optional.empty();
-            Optional<Double> phaseNs = Optional.empty();
-            if (!(amplitudeMhz > 2.0 * centreMhz)) {
-                warnings.add(Warning.of(PULSE_LOSS_NOT_DEFINED, String.format(Locale.ROOT,
-                        "pulse_amplitude_loss_db is null: the rate that decides amplitude (%s MHz) gives 2 or fewer "
-                                + "samples per period of the measured centre frequency (%s MHz)",
-                        num(amplitudeMhz), num(centreMhz))));
-            } else {
-                double[] worst;
-                try {
-                    worst = record.worstCase(1.0 / amplitudeMhz, reading, peak, m2,
-                            SearchBudget.of(BandLimitedRecord.LOSS_SEARCH_BUDGET));
-                } catch (SearchBudget.Exhausted e) {
-                    worst = null;
-                    warnings.add(Warning.of(SamplingCalculator.SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
-                            "pulse_amplitude_loss_db is null: the search over the sampling phase reached its bound "
-                                    + "of %d values of the reconstructed record", e.limit())));
-                }
-                if (worst == null) {
-                    // reported above
-                } else if (worst[0] > 0.0) {
-                    loss = Optional.of(-Decibels.fromRatio(worst[0]));
-                    phaseNs = Optional.of(worst[1] * 1000.0);
-                    double intervalUs = 1.0 / amplitudeMhz;
-                    int count = (int) StrictMath.floor((record.spanUs() - worst[1]) / intervalUs) + 1;
-                    targetTimes = new double[count];
-                    targetValues = new double[count];
-                    for (int k = 0; k < count; k++) {
-                        targetTimes[k] = worst[1] + k * intervalUs;
-                        targetValues[k] = record.value(targetTimes[k]);
-                    }
-                } else {
-                    warnings.add(Warning.of(PULSE_LOSS_NOT_DEFINED, "pulse_amplitude_loss_db is null: at some "
-                            + "sampling phase no sample reads above zero"));
-                }
-            }
-            references.add(Reference.of("pulse amplitude loss of the record", Sources.WAVEFORM_LOSS));
+    private static WaveformResult.ModelFigures modelFigures(GaussianPulse pulse) {
+        return pulse == null
+                ? new WaveformResult.ModelFigures(Optional.empty(), Optional.empty())
+                : new WaveformResult.ModelFigures(Optional.of(pulse.envelopeDurationUs(6.0)),
+                        Optional.of(pulse.cycles(6.0)));
+    }
 
-            Optional<Double> required = null;
-            if (in.amplitudeToleranceDb() != null) {
-                required = Optional.empty();
-                try {
-                    double rateMhz = record.requiredRateMhz(in.amplitudeToleranceDb(), reading, 2.0 * centreMhz,
-                            RequiredPulseRate.SCAN_STEP_FRACTION, RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE,
-                            SearchBudget.of(BandLimitedRecord.RATE_SEARCH_BUDGET));
-                    required = Optional.of(clock.rawFrequencyForAmplitudeRateMhz(rateMhz));
-                } catch (SearchBudget.Exhausted e) {
-                    warnings.add(Warning.of(SamplingCalculator.SEARCH_BOUND_REACHED, String.format(Locale.ROOT,
-                            "required_sampling_frequency_pulse_mhz is null: the search for the record's rate reached "
-                                    + "its bound of %d values of the reconstructed record (amplitude_tolerance_db too "
-                                    + "small to resolve on this record)", e.limit())));
-                }
-                references.add(Reference.of("required sampling frequency for the record", Sources.WAVEFORM_REQUIRED_RATE));
-            }
+    /** The figures at the target rate, and the record's loss there (whose samples the figure shows). */
+    private record Target(WaveformResult.TargetFigures figures, RecordLoss loss) {
+        static final Target NONE = new Target(null, RecordLoss.NONE);
+    }
 
-            Optional<Double> modelLoss = Optional.empty();
-            Optional<Double> modelAbove = Optional.empty();
-            Optional<Double> modelRequired = in.amplitudeToleranceDb() == null ? null : Optional.empty();
-            if (pulse != null) {
-                boolean searchable = bandwidthPercent >= SamplingCalculator.MIN_BANDWIDTH_PERCENT_FOR_PULSE_RATE;
-                SamplingResult s = SamplingCalculator.compute(SamplingInput
-                        .builder(in.samplingFrequencyMhz(), centreMhz)
-                        .decimationFactor(m)
-                        .decimationMode(mode)
-                        .bandwidthPercent(bandwidthPercent)
-                        .centreFrequencyConvention(convention)
-                        .peakReading(reading)
-                        .amplitudeToleranceDb(searchable ? in.amplitudeToleranceDb() : null).build());
-                modelLoss = s.pulseAmplitudeLossDb();
-                modelAbove = Optional.ofNullable(s.energyAboveNyquistFraction());
-                if (in.amplitudeToleranceDb() != null) {
-                    modelRequired = s.requiredSamplingFrequencyPulseMhz() == null ? Optional.empty() : s.requiredSamplingFrequencyPulseMhz();
-                    if (!searchable) {
-                        warnings.add(Warning.of(MODEL_NOT_AVAILABLE, "model_required_sampling_frequency_pulse_mhz is "
-                                + "null: the model's rate search covers bandwidths of 1 % and above"));
-                    }
-                }
-                for (Warning w : s.warnings()) {
-                    warnings.add(Warning.of(w.code(), "Gaussian model: " + w.message()));
-                }
-                if (loss.isPresent() && modelLoss.isPresent() && loss.get() > modelLoss.get() + 0.1) {
-                    warnings.add(Warning.of(MODEL_OPTIMISTIC, String.format(Locale.ROOT,
-                            "the record loses %s dB at this rate, the Gaussian model of its band %s dB: the model is "
-                                    + "optimistic for this probe; judge the setting on the record",
-                            num(loss.get()), num(modelLoss.get()))));
-                }
-            }
-            target = new WaveformResult.TargetFigures(clock.effectiveSamplingFrequencyMhz(), samplesPerPeriod,
-                    nyquistMhz, loss, phaseNs, above, required, modelLoss, modelAbove, modelRequired, m, mode,
-                    reading);
+    private static Target target(WaveformInput in, Spectrum spectrum, BandLimitedRecord record, Band band,
+            CentreFrequencyConvention convention, GaussianPulse pulse, List<Warning> warnings,
+            List<Reference> references) {
+        TargetClock at = targetClock(in);
+        double above = energyAbove(spectrum.power(), spectrum.total(), at.nyquistMhz(), spectrum.resolutionMhz());
+        references.add(Reference.of("energy above the target Nyquist frequency", Sources.WAVEFORM_ENERGY));
+        RecordLoss loss = recordLoss(record, at, band.centreMhz(), warnings, references);
+        Optional<Double> required = recordRequiredRate(in, record, at, band.centreMhz(), warnings, references);
+        ModelAtTarget modelAt = pulse == null ? ModelAtTarget.none(in)
+                : modelAtTarget(in, at, band, convention, loss.loss(), warnings);
+        WaveformResult.TargetFigures figures = new WaveformResult.TargetFigures(
+                at.clock().effectiveSamplingFrequencyMhz(), at.clock().effectiveSamplingFrequencyMhz() / band.centreMhz(),
+                at.nyquistMhz(), loss.loss(), loss.phaseNs(), above, required, modelAt.loss(), modelAt.above(),
+                modelAt.required(), at.m(), at.mode(), at.reading());
+        return new Target(figures, loss);
+    }
+
+    /** The target clock with its options' defaults. */
+    private record TargetClock(int m, DecimationMode mode, PeakReading reading, SampleClock clock) {
+        double amplitudeMhz() {
+            return clock.amplitudeSamplingFrequencyMhz();
         }
 
-        // Figure series.
+        double nyquistMhz() {
+            return amplitudeMhz() / 2.0;
+        }
+    }
+
+    private static TargetClock targetClock(WaveformInput in) {
+        int m = in.decimationFactor() == null ? 1 : in.decimationFactor();
+        DecimationMode mode = in.decimationMode() == null ? DecimationMode.DROP : in.decimationMode();
+        PeakReading reading = in.peakReading() == null ? PeakReading.ABSOLUTE : in.peakReading();
+        return new TargetClock(m, mode, reading, SampleClock.of(in.samplingFrequencyMhz(), m, mode));
+    }
+
+    /** The record's worst-phase loss at the target rate, its phase, and the target's samples at that phase. */
+    private record RecordLoss(Optional<Double> loss, Optional<Double> phaseNs, double[] times, double[] values) {
+        static final RecordLoss NONE = new RecordLoss(Optional.empty(), Optional.empty(), new double[0],
+                new double[0]);
+    }
+
+    private static RecordLoss recordLoss(BandLimitedRecord record, TargetClock at, double centreMhz,
+            List<Warning> warnings, List<Reference> references) {
+        double amplitudeMhz = at.amplitudeMhz();
+        RecordLoss result = RecordLoss.NONE;
+        if (!(amplitudeMhz > 2.0 * centreMhz)) {
+            warnings.add(WaveformMessages.pulseLossTooFewSamples(amplitudeMhz, centreMhz));
+        } else {
+            double[] worst;
+            try {
+                worst = record.worstCase(1.0 / amplitudeMhz, at.reading(), record.peak(at.reading()),
+                        record.secondDerivativeBound(), SearchBudget.of(BandLimitedRecord.LOSS_SEARCH_BUDGET));
+            } catch (SearchBudget.Exhausted e) {
+                worst = null;
+                warnings.add(WaveformMessages.lossSearchBound(e.limit()));
+            }
+            if (worst == null) {
+                // reported above
+            } else if (worst[0] > 0.0) {
+                double intervalUs = 1.0 / amplitudeMhz;
+                int count = (int) StrictMath.floor((record.spanUs() - worst[1]) / intervalUs) + 1;
+                double[] targetTimes = new double[count];
+                double[] targetValues = new double[count];
+                for (int k = 0; k < count; k++) {
+                    targetTimes[k] = worst[1] + k * intervalUs;
+                    targetValues[k] = record.value(targetTimes[k]);
+                }
+                result = new RecordLoss(Optional.of(-Decibels.fromRatio(worst[0])), Optional.of(worst[1] * 1000.0),
+                        targetTimes, targetValues);
+            } else {
+                warnings.add(WaveformMessages.noSampleAboveZero());
+            }
+        }
+        references.add(Reference.of("pulse amplitude loss of the record", Sources.WAVEFORM_LOSS));
+        return result;
+    }
+
+    /** The raw rate at which the record loses the tolerance; null without a tolerance. */
+    private static Optional<Double> recordRequiredRate(WaveformInput in, BandLimitedRecord record, TargetClock at,
+            double centreMhz, List<Warning> warnings, List<Reference> references) {
+        if (in.amplitudeToleranceDb() == null) {
+            return null;
+        }
+        Optional<Double> required = Optional.empty();
+        try {
+            double rateMhz = record.requiredRateMhz(in.amplitudeToleranceDb(), at.reading(), 2.0 * centreMhz,
+                    RequiredPulseRate.SCAN_STEP_FRACTION, RequiredPulseRate.BISECTION_RELATIVE_TOLERANCE,
+                    SearchBudget.of(BandLimitedRecord.RATE_SEARCH_BUDGET));
+            required = Optional.of(at.clock().rawFrequencyForAmplitudeRateMhz(rateMhz));
+        } catch (SearchBudget.Exhausted e) {
+            warnings.add(WaveformMessages.rateSearchBound(e.limit()));
+        }
+        references.add(Reference.of("required sampling frequency for the record", Sources.WAVEFORM_REQUIRED_RATE));
+        return required;
+    }
+
+    /** The Gaussian model's figures at the target rate (from the sampling assessment). */
+    private record ModelAtTarget(Optional<Double> loss, Optional<Double> above, Optional<Double> required) {
+        static ModelAtTarget none(WaveformInput in) {
+            return new ModelAtTarget(Optional.empty(), Optional.empty(),
+                    in.amplitudeToleranceDb() == null ? null : Optional.empty());
+        }
+    }
+
+    private static ModelAtTarget modelAtTarget(WaveformInput in, TargetClock at, Band band,
+            CentreFrequencyConvention convention, Optional<Double> loss, List<Warning> warnings) {
+        int m = at.m();
+        DecimationMode mode = at.mode();
+        PeakReading reading = at.reading();
+        double centreMhz = band.centreMhz();
+        double bandwidthPercent = band.bandwidthPercent();
+        Optional<Double> modelRequired = in.amplitudeToleranceDb() == null ? null : Optional.empty();
+        boolean searchable = bandwidthPercent >= SamplingCalculator.MIN_BANDWIDTH_PERCENT_FOR_PULSE_RATE;
+        SamplingResult s = SamplingCalculator.compute(SamplingInput
+                .builder(in.samplingFrequencyMhz(), centreMhz)
+                .decimationFactor(m)
+                .decimationMode(mode)
+                .bandwidthPercent(bandwidthPercent)
+                .centreFrequencyConvention(convention)
+                .peakReading(reading)
+                .amplitudeToleranceDb(searchable ? in.amplitudeToleranceDb() : null).build());
+        Optional<Double> modelLoss = s.pulseAmplitudeLossDb();
+        Optional<Double> modelAbove = Optional.ofNullable(s.energyAboveNyquistFraction());
+        if (in.amplitudeToleranceDb() != null) {
+            modelRequired = s.requiredSamplingFrequencyPulseMhz() == null ? Optional.empty() : s.requiredSamplingFrequencyPulseMhz();
+            if (!searchable) {
+                warnings.add(WaveformMessages.modelRateNotSearched());
+            }
+        }
+        for (Warning w : s.warnings()) {
+            warnings.add(WaveformMessages.ofModel(w));
+        }
+        if (loss.isPresent() && modelLoss.isPresent() && loss.get() > modelLoss.get() + 0.1) {
+            warnings.add(WaveformMessages.modelOptimistic(loss.get(), modelLoss.get()));
+        }
+        return new ModelAtTarget(modelLoss, modelAbove, modelRequired);
+    }
+
+    /** The series of the report figure: the record and its envelope, the target's samples, the spectrum in dB. */
+    private static WaveformResult.Figure figure(double[] y, double[] envelope, RecordLoss loss, Spectrum spectrum,
+            double fsRec) {
+        int n = y.length;
+        double intervalRecUs = 1.0 / fsRec;
         double[] times = new double[n];
         for (int i = 0; i < n; i++) {
             times[i] = i * intervalRecUs;
         }
+        double[] magnitude = spectrum.magnitude();
+        int bins = magnitude.length;
         double[] frequencies = new double[bins];
         double[] levels = new double[bins];
         for (int k = 0; k < bins; k++) {
-            frequencies[k] = k * resolutionMhz;
-            levels[k] = magnitude[k] > 0.0 ? Decibels.fromRatio(magnitude[k] / peakMagnitude) : -400.0;
+            frequencies[k] = k * spectrum.resolutionMhz();
+            levels[k] = magnitude[k] > 0.0 ? Decibels.fromRatio(magnitude[k] / spectrum.peakMagnitude()) : -400.0;
         }
-        WaveformResult.Figure figure = new WaveformResult.Figure(times, y, envelope, targetTimes, targetValues,
-                frequencies, levels);
-        return new WaveformResult(n, resolutionMhz, window, peakFrequencyMhz, lowerMhz, upperMhz, lower20, upper20,
-                centreMhz, bandwidthPercent, duration6, duration20, cycles6, near, model, target, convention, figure,
-                warnings, references);
+        return new WaveformResult.Figure(times, y, envelope, loss.times(), loss.values(), frequencies, levels);
     }
 
     private static void notWithoutTarget(String field, Object value) {
@@ -419,9 +510,5 @@ public final class WaveformAnalyzer {
         Optional<Double> left = lowerEdge(envelope, peak, threshold, intervalUs);
         Optional<Double> right = upperEdge(envelope, peak, threshold, intervalUs);
         return left.isPresent() && right.isPresent() ? Optional.of(right.get() - left.get()) : Optional.empty();
-    }
-
-    private static String num(double value) {
-        return MessageNumbers.plain(value, DIGITS);
     }
 }
