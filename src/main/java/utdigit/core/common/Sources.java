@@ -257,6 +257,9 @@ public final class Sources {
             "L^2/(4 lambda) in the plane of the side L (steering plane of a linear array)");
     public static final Source TOFD_GATE = practice("tofd-gate", "16 TOFD set-up",
             "the gate opens before the lateral wave and closes after the back wall, a pulse duration's margin each side");
+    public static final Source BEAM_ANGLE_TOLERANCE = practice("beam-angle-tolerance", "8 Technique sheets",
+            "an angle probe's beam angle measured on a reference block is usually accepted within 2 degrees of the "
+                    + "angle the technique states; beyond that the stated angle and the wedge disagree");
     public static final Source NEAR_FIELD_PRACTICE = practice("near-field-practice", "2.5 Near field, 2.7 Beam diameter",
             "N = D^2/(4 lambda); the near field left in the part behind a wedge N - w v_w/v; beam diameter "
                     + "2 z tan(theta) in the far field");

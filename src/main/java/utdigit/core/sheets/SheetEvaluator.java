@@ -13,8 +13,8 @@ import utdigit.core.acquisition.AcquisitionResult;
 import utdigit.core.acquisition.CaptureMode;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Reference;
-import utdigit.core.common.Sources;
 import utdigit.core.common.ReportingFloors;
+import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
 import utdigit.core.pulse.PulseCalculator;
 import utdigit.core.pulse.PulseInput;
@@ -122,6 +122,10 @@ public final class SheetEvaluator {
             v.put("beam_spread_6db_deg", r.beamSpread6dbDeg());
             SheetSetupMetrics.putIncidencePlane(r.incidencePlane(), v::put);
             v.notes("pulse", r.warnings(), r.references());
+            List<Warning> angle = RefractedAngleCheck.check(part.refractedAngleDeg(), r.refractedAngleDeg(),
+                    sheet.setup(), c);
+            v.notes("pulse", angle, angle.isEmpty() ? List.of()
+                    : List.of(Reference.of("refracted angle tolerance", Sources.BEAM_ANGLE_TOLERANCE)));
         }
         boolean hasGrid = tfm.gridSpacingMm() != null && c != null;
         boolean hasLateral = tfm.lateralGridSpacingMm() != null && tfm.apertureMm() != null && tfm.depthMm() != null;
