@@ -1,16 +1,14 @@
 package utdigit.core.acquisition;
 
+import static utdigit.core.common.MessageNumbers.rounded;
 import static utdigit.core.acquisition.AcquisitionCalculator.FILE_SIZE_ABOVE_LIMIT;
 import static utdigit.core.acquisition.AcquisitionCalculator.PLANNED_SPEED_ABOVE_MAXIMUM;
 import static utdigit.core.acquisition.AcquisitionCalculator.PRF_ABOVE_WRAPAROUND_LIMIT;
 import static utdigit.core.acquisition.AcquisitionCalculator.SAMPLE_STORAGE_ASSUMED;
 import static utdigit.core.acquisition.AcquisitionCalculator.WRAPAROUND_DECAY_FACTOR_BARE_LIMIT;
 
-import java.math.MathContext;
-import java.math.RoundingMode;
 import java.util.Locale;
 import utdigit.core.common.CalculationException;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Warning;
 
 /** Every warning and failure text of the acquisition budget, one factory per condition. */
@@ -19,14 +17,11 @@ final class AcquisitionMessages {
 
     private static final String COMMON_PRACTICE = "common practice, no published source";
 
-    /** A number for a message: six significant digits, no trailing zeros, no exponent. */
-    private static final MathContext MESSAGE_DIGITS = new MathContext(6, RoundingMode.HALF_EVEN);
-
     static CalculationException gateLongerThanPeriod(String gateField, double gateUs, double periodUs, double prfHz) {
         return CalculationException.impossible(String.format(Locale.ROOT,
                 "the gate (%s, %s us) is longer than the pulse repetition period 1/pulse_repetition_frequency_hz"
                         + " (%s us at %s Hz): the next firing would start before the gate ends",
-                gateField, fmt(gateUs), fmt(periodUs), fmt(prfHz)), gateField, "pulse_repetition_frequency_hz");
+                gateField, rounded(gateUs), rounded(periodUs), rounded(prfHz)), gateField, "pulse_repetition_frequency_hz");
     }
 
     static CalculationException tooLarge(String gateField, String countField) {
@@ -40,7 +35,7 @@ final class AcquisitionMessages {
         return Warning.of(SAMPLE_STORAGE_ASSUMED, String.format(Locale.ROOT,
                 "bit_depth %d is counted as %d whole byte(s) per sample; an instrument that packs samples "
                         + "(e.g. two 12-bit samples in 3 bytes) stores %s bytes per sample: check its "
-                        + "file format", bitDepth, bytesPerSample, fmt(bitDepth / 8.0)));
+                        + "file format", bitDepth, bytesPerSample, rounded(bitDepth / 8.0)));
     }
 
     static Warning fileSizeAboveLimit(double scanLengthMm, double fileSizeMegabytes, double fileSizeLimitMegabytes,
@@ -48,8 +43,8 @@ final class AcquisitionMessages {
         return Warning.of(FILE_SIZE_ABOVE_LIMIT, String.format(Locale.ROOT,
                 "the file of scan_length_mm %s mm holds %s MB, above file_size_limit_megabytes "
                         + "%s MB; one file holds at most %s mm of scan",
-                fmt(scanLengthMm), fmt(fileSizeMegabytes), fmt(fileSizeLimitMegabytes),
-                fmt(maxScanLengthPerFileMm)));
+                rounded(scanLengthMm), rounded(fileSizeMegabytes), rounded(fileSizeLimitMegabytes),
+                rounded(maxScanLengthPerFileMm)));
     }
 
     static Warning plannedSpeedAboveMaximum(double plannedSpeedMmPerS, double maxScanSpeedMmPerS, double prfHz,
@@ -58,8 +53,8 @@ final class AcquisitionMessages {
                 "planned_scan_speed_mm_per_s %s mm/s is above the PRF-limited maximum %s mm/s "
                         + "(pulse_repetition_frequency_hz %s Hz, %d firing(s) per position x averaging %d, "
                         + "scan_increment_mm %s mm): positions would be missed",
-                fmt(plannedSpeedMmPerS), fmt(maxScanSpeedMmPerS), fmt(prfHz), firings, averaging,
-                fmt(scanIncrementMm)));
+                rounded(plannedSpeedMmPerS), rounded(maxScanSpeedMmPerS), rounded(prfHz), firings, averaging,
+                rounded(scanIncrementMm)));
     }
 
     static Warning decayFactorBareLimit() {
@@ -74,10 +69,6 @@ final class AcquisitionMessages {
                 "pulse_repetition_frequency_hz %s Hz is above the wrap-around limit %s Hz "
                         + "(round trip %s us x wraparound_decay_factor %s): echoes of one firing may "
                         + "appear as ghost echoes after the next",
-                fmt(prfHz), fmt(maxPrfHz), fmt(roundTripUs), fmt(q)));
-    }
-
-    private static String fmt(double x) {
-        return MessageNumbers.plain(x, MESSAGE_DIGITS);
+                rounded(prfHz), rounded(maxPrfHz), rounded(roundTripUs), rounded(q)));
     }
 }

@@ -1,13 +1,13 @@
 package utdigit.core.arrays;
 
-import java.math.MathContext;
+import static utdigit.core.common.MessageNumbers.rounded;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
@@ -27,8 +27,6 @@ public final class ArrayApertureCalculator {
     public static final String NO_PASSIVE_BEAM_SPREAD_6DB = "NO_PASSIVE_BEAM_SPREAD_6DB";
     public static final String GRATING_LOBE = "GRATING_LOBE";
     public static final String STEERED_BEAM_WIDER = "STEERED_BEAM_WIDER";
-
-    private static final MathContext DIGITS = new MathContext(4);
 
     /**
      * @throws CalculationException notApplicable (400) for both active_elements and
@@ -57,8 +55,8 @@ public final class ArrayApertureCalculator {
         } else if (in.activeApertureMm() != null) {
             apertureMm = Checks.positive("active_aperture", in.activeApertureMm());
             if (apertureMm < pitchMm) {
-                throw CalculationException.impossible("active_aperture (" + fmt(apertureMm) + " mm) is shorter "
-                        + "than one element_pitch (" + fmt(pitchMm) + " mm): an aperture holds at least one element",
+                throw CalculationException.impossible("active_aperture (" + rounded(apertureMm) + " mm) is shorter "
+                        + "than one element_pitch (" + rounded(pitchMm) + " mm): an aperture holds at least one element",
                         "active_aperture", "element_pitch");
             }
         }
@@ -102,9 +100,9 @@ public final class ArrayApertureCalculator {
         if (!free) {
             double sine = StrictMath.sin(StrictMath.toRadians(steeringDeg)) - wavelengthMm / pitchMm;
             double lobeDeg = StrictMath.toDegrees(StrictMath.asin(StrictMath.max(-1.0, sine)));
-            warnings.add(Warning.of(GRATING_LOBE, "element_pitch " + fmt(pitchMm) + " mm is not below "
-                    + fmt(maxPitchMm) + " mm (lambda / (1 + sin " + fmt(steeringDeg) + " deg)): steered to "
-                    + fmt(steeringDeg) + " deg the array sends a grating lobe at " + fmt(lobeDeg)
+            warnings.add(Warning.of(GRATING_LOBE, "element_pitch " + rounded(pitchMm) + " mm is not below "
+                    + rounded(maxPitchMm) + " mm (lambda / (1 + sin " + rounded(steeringDeg) + " deg)): steered to "
+                    + rounded(steeringDeg) + " deg the array sends a grating lobe at " + rounded(lobeDeg)
                     + " deg, on the other side of the normal; echoes it returns are misplaced"));
         }
         return new ArrayApertureResult(steeringDeg, wavelengthMm, apertureMm, nearFieldMm, spread6, spread20,
@@ -134,14 +132,10 @@ public final class ArrayApertureCalculator {
                                            String field, String level, List<Warning> warnings) {
         Optional<Double> angle = RectangularDirectivity.halfAngleDeg(constant, wavelengthMm, lengthMm);
         if (angle.isEmpty()) {
-            warnings.add(Warning.of(code, "the aperture (" + fmt(lengthMm) + " mm) is too short for the wavelength ("
-                    + fmt(wavelengthMm) + " mm): the beam does not fall to its " + level + " level in front of it; "
+            warnings.add(Warning.of(code, "the aperture (" + rounded(lengthMm) + " mm) is too short for the wavelength ("
+                    + rounded(wavelengthMm) + " mm): the beam does not fall to its " + level + " level in front of it; "
                     + field + " is null"));
         }
         return angle;
-    }
-
-    private static String fmt(double x) {
-        return MessageNumbers.plain(x, DIGITS);
     }
 }

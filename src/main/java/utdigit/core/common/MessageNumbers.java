@@ -7,20 +7,24 @@ import java.math.MathContext;
 public final class MessageNumbers {
     private MessageNumbers() {}
 
+    /** The significant digits of a computed number in a message. */
+    private static final MathContext DIGITS = new MathContext(4);
+
     /**
-     * {@code x} rounded to the digits of {@code digits}, without trailing zeros or an exponent
-     * ("0.000125", "5920"); a value that is not finite is written in words.
+     * A computed number as every message writes it: rounded to 4 significant digits, without
+     * trailing zeros or an exponent ("0.000125", "5920", "1.184"); a value that is not finite is
+     * written in words. The answer's own field holds the full value; a value the caller gave, or a
+     * limit computed from one, is written {@link #exact}.
      */
-    public static String plain(double x, MathContext digits) {
+    public static String rounded(double x) {
+        return plain(x, DIGITS);
+    }
+
+    private static String plain(double x, MathContext digits) {
         if (!Double.isFinite(x)) {
             return x > 0 ? "infinity" : x < 0 ? "-infinity" : "not a number";
         }
         return new BigDecimal(x).round(digits).stripTrailingZeros().toPlainString();
-    }
-
-    /** {@code x} rounded to {@code significantDigits} digits, as {@link #plain(double, MathContext)}. */
-    public static String plain(double x, int significantDigits) {
-        return plain(x, new MathContext(significantDigits));
     }
 
     /**

@@ -1,13 +1,13 @@
 package utdigit.core.coverage;
 
-import java.math.MathContext;
+import static utdigit.core.common.MessageNumbers.rounded;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
@@ -35,7 +35,6 @@ public final class ScanCoverageCalculator {
 
     /** The loss at the edge of the -6 dB width, dB: the coefficient of the model. */
     static final double EDGE_LOSS_DB = 6.0;
-    private static final MathContext DIGITS = new MathContext(4);
 
     /**
      * @throws CalculationException notApplicable (400) for a beam width given together with probe
@@ -93,9 +92,9 @@ public final class ScanCoverageCalculator {
             @SuppressWarnings("unchecked")
             Optional<Double> loss = (Optional<Double>) s[2];
             if (loss != null && loss.isPresent() && loss.get() > EDGE_LOSS_DB) {
-                warnings.add(Warning.of(STEP_BEYOND_BEAM_WIDTH, s[0] + " moves the beam " + fmt((Double) s[1])
-                        + " mm, more than the -6 dB beam width " + fmt(widthMm.get()) + " mm: a reflector midway lies "
-                        + "outside the main lobe's -6 dB edge and the Gaussian figure (" + fmt(loss.get())
+                warnings.add(Warning.of(STEP_BEYOND_BEAM_WIDTH, s[0] + " moves the beam " + rounded((Double) s[1])
+                        + " mm, more than the -6 dB beam width " + rounded(widthMm.get()) + " mm: a reflector midway lies "
+                        + "outside the main lobe's -6 dB edge and the Gaussian figure (" + rounded(loss.get())
                         + " dB) only says it can be missed"));
             }
         }
@@ -143,8 +142,8 @@ public final class ScanCoverageCalculator {
         }
         Optional<Boolean> ok = loss.map(l -> l <= toleranceDb);
         if (ok.isPresent() && !ok.get()) {
-            warnings.add(Warning.of(STEP_OVER_TOLERANCE, field + " loses up to " + fmt(loss.get())
-                    + " dB, more than amplitude_tolerance_db " + fmt(toleranceDb)));
+            warnings.add(Warning.of(STEP_OVER_TOLERANCE, field + " loses up to " + rounded(loss.get())
+                    + " dB, more than amplitude_tolerance_db " + rounded(toleranceDb)));
         }
         return ok;
     }
@@ -158,21 +157,17 @@ public final class ScanCoverageCalculator {
         references.add(Reference.of("beam width of a round probe", Sources.PISTON_DIRECTIVITY));
         double nearFieldMm = pulse.nearFieldLengthMm();
         if (soundPathMm < nearFieldMm) {
-            warnings.add(Warning.of(BEAM_WIDTH_UNKNOWN, "sound_path " + fmt(soundPathMm) + " mm lies inside the "
-                    + "near field (" + fmt(nearFieldMm) + " mm): the far-field beam width does not hold there, so "
+            warnings.add(Warning.of(BEAM_WIDTH_UNKNOWN, "sound_path " + rounded(soundPathMm) + " mm lies inside the "
+                    + "near field (" + rounded(nearFieldMm) + " mm): the far-field beam width does not hold there, so "
                     + "beam_width_6db_mm and the losses are null; give beam_width_6db as measured at that depth"));
             return Optional.empty();
         }
         Optional<Double> width = pulse.beamDiameter6dbMm() == null ? Optional.empty() : pulse.beamDiameter6dbMm();
         if (width.isEmpty()) {
-            warnings.add(Warning.of(BEAM_WIDTH_UNKNOWN, "element_diameter " + fmt(in.elementDiameterMm())
+            warnings.add(Warning.of(BEAM_WIDTH_UNKNOWN, "element_diameter " + rounded(in.elementDiameterMm())
                     + " mm is too small for the wavelength: the beam has no -6 dB half-angle, so beam_width_6db_mm "
                     + "and the losses are null"));
         }
         return width;
-    }
-
-    private static String fmt(double x) {
-        return MessageNumbers.plain(x, DIGITS);
     }
 }

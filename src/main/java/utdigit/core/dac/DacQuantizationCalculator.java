@@ -1,6 +1,7 @@
 package utdigit.core.dac;
 
-import java.math.MathContext;
+import static utdigit.core.common.MessageNumbers.rounded;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
@@ -8,7 +9,6 @@ import java.util.Optional;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.Checks;
 import utdigit.core.common.Decibels;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Reference;
 import utdigit.core.common.Sources;
 import utdigit.core.common.Warning;
@@ -39,8 +39,6 @@ public final class DacQuantizationCalculator {
     public static final String READS_AS_ZERO = "READS_AS_ZERO";
     public static final String OUT_OF_TOLERANCE = "OUT_OF_TOLERANCE";
     public static final String NO_UNCORRECTED_SPAN = "NO_UNCORRECTED_SPAN";
-
-    private static final MathContext DIGITS = new MathContext(4);
 
     /**
      * @throws CalculationException invalid inputs outside a formula's domain (the web layer checks
@@ -82,9 +80,9 @@ public final class DacQuantizationCalculator {
             maxSpan = referencePercentFsh > minimum
                     ? Optional.of(Decibels.fromRatio(referencePercentFsh / minimum)) : Optional.empty();
             if (maxSpan.isEmpty()) {
-                warnings.add(Warning.of(NO_UNCORRECTED_SPAN, "reference_height_percent_fsh " + fmt(referencePercentFsh)
-                        + " is itself below minimum_height_percent_fsh " + fmt(minimum) + ": no span is read within "
-                        + "amplitude_tolerance_db " + fmt(toleranceDb) + " without correction; max_uncorrected_span_db is null"));
+                warnings.add(Warning.of(NO_UNCORRECTED_SPAN, "reference_height_percent_fsh " + rounded(referencePercentFsh)
+                        + " is itself below minimum_height_percent_fsh " + rounded(minimum) + ": no span is read within "
+                        + "amplitude_tolerance_db " + rounded(toleranceDb) + " without correction; max_uncorrected_span_db is null"));
             }
             uncorrectedOk = within(uncorrected, toleranceDb, "uncorrected", warnings);
             analogOk = within(analog, toleranceDb, "analog_tcg", warnings);
@@ -107,7 +105,7 @@ public final class DacQuantizationCalculator {
     private static void zeroWarning(Optional<Double> error, String field, double heightPercentFsh,
                                     List<Warning> warnings) {
         if (error.isEmpty()) {
-            warnings.add(Warning.of(READS_AS_ZERO, "the point read for " + field + " (" + fmt(heightPercentFsh)
+            warnings.add(Warning.of(READS_AS_ZERO, "the point read for " + field + " (" + rounded(heightPercentFsh)
                     + " %FSH displayed) is at or below the quantizer's low bound: it can read as 0, so " + field
                     + " has no finite value; it is null"));
         }
@@ -117,13 +115,9 @@ public final class DacQuantizationCalculator {
         boolean ok = error.isPresent() && -error.get() <= toleranceDb;
         if (!ok) {
             warnings.add(Warning.of(OUT_OF_TOLERANCE, setUp + ": the lowest reference point can read "
-                    + (error.isPresent() ? fmt(-error.get()) + " dB low" : "as 0") + ", more than "
-                    + "amplitude_tolerance_db " + fmt(toleranceDb) + " allows"));
+                    + (error.isPresent() ? rounded(-error.get()) + " dB low" : "as 0") + ", more than "
+                    + "amplitude_tolerance_db " + rounded(toleranceDb) + " allows"));
         }
         return ok;
-    }
-
-    private static String fmt(double x) {
-        return MessageNumbers.plain(x, DIGITS);
     }
 }

@@ -1,5 +1,6 @@
 package utdigit.core.quantization;
 
+import static utdigit.core.common.MessageNumbers.rounded;
 import static utdigit.core.quantization.QuantizationCalculator.AMPLITUDE_ERROR_UNDER_UNDEFINED;
 import static utdigit.core.quantization.QuantizationCalculator.AVERAGING_NOISE_ONLY;
 import static utdigit.core.quantization.QuantizationCalculator.EVALUATION_ERROR_UNDER_UNDEFINED;
@@ -13,7 +14,6 @@ import static utdigit.core.quantization.QuantizationCalculator.SIGNAL_HEIGHT_BEL
 
 import java.util.Locale;
 import utdigit.core.common.CalculationException;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Warning;
 
 /** Every warning and failure text of the amplitude digitization, one factory per condition. */
@@ -25,7 +25,7 @@ final class QuantizationMessages {
         String message = String.format(Locale.ROOT,
                 "%s %s displayed with digital_gain_db %s needs %s %%FSH at the converter, above its full scale"
                         + " of 100 %%FSH: the converter could not have recorded it",
-                field, fmt(heightPercentFsh), fmt(gainDb), fmt(atConverterPercentFsh));
+                field, rounded(heightPercentFsh), rounded(gainDb), rounded(atConverterPercentFsh));
         return gainDb == 0.0
                 ? CalculationException.impossible(message, field)
                 : CalculationException.impossible(message, field, "digital_gain_db");
@@ -37,8 +37,8 @@ final class QuantizationMessages {
                 "the evaluation height (reference_height_percent_fsh %s at evaluation_level_db %s) is %s %%FSH"
                         + " displayed and needs %s %%FSH at the converter with digital_gain_db %s, above its full"
                         + " scale of 100 %%FSH: the converter could not have recorded it",
-                fmt(referenceHeightPercentFsh), fmt(evaluationLevelDb), fmt(evaluationHeightPercentFsh),
-                fmt(atConverterPercentFsh), fmt(gainDb));
+                rounded(referenceHeightPercentFsh), rounded(evaluationLevelDb), rounded(evaluationHeightPercentFsh),
+                rounded(atConverterPercentFsh), rounded(gainDb));
         return gainDb == 0.0
                 ? CalculationException.impossible(message, "evaluation_level_db", "reference_height_percent_fsh")
                 : CalculationException.impossible(message,
@@ -54,7 +54,7 @@ final class QuantizationMessages {
     static Warning signalHeightBelowOneLsb(double signalHeight, double lsb) {
         return Warning.of(SIGNAL_HEIGHT_BELOW_ONE_LSB, String.format(Locale.ROOT,
                 "signal_height_percent_fsh %s is below one LSB (%s %%FSH displayed): the echo spans"
-                        + " less than one code", fmt(signalHeight), fmt(lsb)));
+                        + " less than one code", rounded(signalHeight), rounded(lsb)));
     }
 
     static Warning errorUnderUndefined(double signalHeight, double lowBoundPercentFsh, Quantizer quantizer) {
@@ -66,7 +66,7 @@ final class QuantizationMessages {
         return Warning.of(MINIMUM_HEIGHT_ABOVE_FULL_SCREEN, String.format(Locale.ROOT,
                 "minimum_height_percent_fsh %s is above the highest height that can be displayed and"
                         + " recorded (%s %%FSH): no echo is read within amplitude_tolerance_db %s",
-                fmt(minimumHeight), fmt(highestDisplayable), fmt(toleranceDb)));
+                rounded(minimumHeight), rounded(highestDisplayable), rounded(toleranceDb)));
     }
 
     static Warning signalHeightBelowMinimum(double signalHeight, double minimumHeight, double toleranceDb) {
@@ -78,7 +78,7 @@ final class QuantizationMessages {
         return Warning.of(EVALUATION_HEIGHT_ABOVE_FULL_SCREEN, String.format(Locale.ROOT,
                 "evaluation_height_percent_fsh %s is above full screen on the display: digital_gain_db lifts"
                         + " it off the screen; the recorded data hold it",
-                fmt(evaluationHeight)));
+                rounded(evaluationHeight)));
     }
 
     static Warning evaluationHeightBelowOneLsb(double evaluationHeight, double referenceHeight,
@@ -86,7 +86,7 @@ final class QuantizationMessages {
         return Warning.of(EVALUATION_HEIGHT_BELOW_ONE_LSB, String.format(Locale.ROOT,
                 "evaluation_height_percent_fsh %s (reference_height_percent_fsh %s at evaluation_level_db"
                         + " %s) is below one LSB (%s %%FSH displayed)",
-                fmt(evaluationHeight), fmt(referenceHeight), fmt(evaluationLevelDb), fmt(lsb)));
+                rounded(evaluationHeight), rounded(referenceHeight), rounded(evaluationLevelDb), rounded(lsb)));
     }
 
     static Warning evaluationErrorUnderUndefined(double evaluationHeight, double lowBoundPercentFsh,
@@ -106,7 +106,7 @@ final class QuantizationMessages {
         return Warning.of(code, String.format(Locale.ROOT,
                 "%s %s is at or below the quantizer's low bound (%s %%FSH with %s): it can read as 0, so %s has no"
                         + " finite value; it is null",
-                heightField, fmt(heightPercentFsh), fmt(lowBoundPercentFsh), quantizer, errorField));
+                heightField, rounded(heightPercentFsh), rounded(lowBoundPercentFsh), quantizer, errorField));
     }
 
     /** A height (signal or evaluation) below the minimum height read within the tolerance. */
@@ -114,17 +114,13 @@ final class QuantizationMessages {
             double minimumHeightPercentFsh, String consequence, double toleranceDb) {
         return Warning.of(code, String.format(Locale.ROOT,
                 "%s %s is below minimum_height_percent_fsh %s: %s amplitude_tolerance_db %s",
-                heightField, fmt(heightPercentFsh), fmt(minimumHeightPercentFsh), consequence, fmt(toleranceDb)));
+                heightField, rounded(heightPercentFsh), rounded(minimumHeightPercentFsh), consequence, rounded(toleranceDb)));
     }
 
     static Warning averagingNoiseOnly(int averaging, double averagingSnrGainDb) {
         return Warning.of(AVERAGING_NOISE_ONLY, String.format(Locale.ROOT,
                 "averaging %d improves the SNR of uncorrelated noise by averaging_snr_gain_db %s; it does not"
                         + " shrink the quantization step of a single shot, which every other figure here holds",
-                averaging, fmt(averagingSnrGainDb)));
-    }
-
-    private static String fmt(double value) {
-        return MessageNumbers.plain(value, 4);
+                averaging, rounded(averagingSnrGainDb)));
     }
 }

@@ -1,5 +1,6 @@
 package utdigit.core.sampling;
 
+import static utdigit.core.common.MessageNumbers.rounded;
 import static utdigit.core.sampling.SamplingCalculator.BANDWIDTH_ABOVE_100_PERCENT;
 import static utdigit.core.sampling.SamplingCalculator.BAND_ALIASING;
 import static utdigit.core.sampling.SamplingCalculator.COMPRESSED_DATA_ALIASING;
@@ -16,7 +17,6 @@ import static utdigit.core.sampling.SamplingCalculator.TFM_GRID_STEP_AT_OR_ABOVE
 import static utdigit.core.sampling.SamplingCalculator.TFM_STEP_NOT_BELOW_RESPONSE_WIDTH;
 
 import java.util.Locale;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Warning;
 
 /** Every warning and failure text of the sampling assessment, one factory per condition. */
@@ -27,7 +27,7 @@ final class SamplingMessages {
         return Warning.of(SAMPLES_PER_PERIOD_AT_MOST_2, String.format(Locale.ROOT,
                 "samples_per_period is %s: 2 or fewer samples per period of frequency_mhz undersample the "
                         + "carrier (an echo can be missed or read at an alias)%s",
-                num(samplesPerPeriod),
+                rounded(samplesPerPeriod),
                 sineBoundWithoutValue
                         ? "; sine_amplitude_loss_db is null: the sine bound has no value at n <= 2" : ""));
     }
@@ -50,20 +50,20 @@ final class SamplingMessages {
         return Warning.of(BAND_ALIASING, String.format(Locale.ROOT,
                 "the rate that decides amplitude (%s MHz) is at or below twice the -6 dB edge of the "
                         + "detected envelope's spectrum (%s MHz, centred at 0 Hz): the envelope aliases",
-                num(amplitudeMhz), num(envelopeEdgeMhz)));
+                rounded(amplitudeMhz), rounded(envelopeEdgeMhz)));
     }
 
     static Warning bandAliasing(double amplitudeMhz, double upperMhz) {
         return Warning.of(BAND_ALIASING, String.format(Locale.ROOT,
                 "the rate that decides amplitude (%s MHz) is at or below twice the upper -6 dB band edge "
-                        + "(%s MHz): the probe's band aliases", num(amplitudeMhz), num(upperMhz)));
+                        + "(%s MHz): the probe's band aliases", rounded(amplitudeMhz), rounded(upperMhz)));
     }
 
     static Warning nyquistLevelAboveLimit(double spectralLevelAtNyquistDb, boolean envelope) {
         return Warning.of(NYQUIST_LEVEL_ABOVE_MINUS_40_DB, String.format(Locale.ROOT,
                 "spectral_level_at_nyquist_db is %s, above %s dB: the pulse model%s has significant energy "
                         + "at the Nyquist frequency (a model value; the anti-alias filter decides)",
-                num(spectralLevelAtNyquistDb), num(NYQUIST_LEVEL_WARNING_DB),
+                rounded(spectralLevelAtNyquistDb), rounded(NYQUIST_LEVEL_WARNING_DB),
                 envelope ? "'s detected envelope" : ""));
     }
 
@@ -72,7 +72,7 @@ final class SamplingMessages {
                 "decimation_mode PEAK_PRESERVING keeps each group's largest sample, so the amplitude figures follow "
                         + "the raw rate; but processing of the compressed data (TFM, SAFT, filtering, FFT) sees "
                         + "fs/m = %s MHz and aliases above fs/(2m) = %s MHz, at or below %s (%s MHz)",
-                num(effectiveMhz), num(effectiveMhz / 2.0), what, num(bandTopMhz)));
+                rounded(effectiveMhz), rounded(effectiveMhz / 2.0), what, rounded(bandTopMhz)));
     }
 
     static Warning pulseLossNotDefined(double amplitudeMhz, double carrierSamples, double carrierMhz) {
@@ -80,7 +80,7 @@ final class SamplingMessages {
                 "pulse_amplitude_loss_db is null: the rate that decides amplitude (%s MHz) gives %s samples per "
                         + "period of the pulse model's carrier (%s MHz); at 2 or fewer a sample can fall on every "
                         + "zero crossing and no worst case exists",
-                num(amplitudeMhz), num(carrierSamples), num(carrierMhz)));
+                rounded(amplitudeMhz), rounded(carrierSamples), rounded(carrierMhz)));
     }
 
     static Warning peakPreservingPositivePeak() {
@@ -111,14 +111,14 @@ final class SamplingMessages {
                 "the pulse loss is not monotonic in the sampling frequency: slower rates than "
                         + "required_sampling_frequency_pulse_mhz (%s MHz) also pass, e.g. %s MHz, but some rates "
                         + "in between do not",
-                num(requiredMhz), num(slowerMhz)));
+                rounded(requiredMhz), rounded(slowerMhz)));
     }
 
     static Warning tfmStepAtOrAboveQuarterWavelength(double stepMm, double quarterWavelengthMm) {
         return Warning.of(TFM_GRID_STEP_AT_OR_ABOVE_QUARTER_WAVELENGTH, String.format(Locale.ROOT,
                 "tfm_grid_amplitude_loss_db is null: tfm_grid_spacing_mm (%s mm) is at or above a quarter "
                         + "wavelength (%s mm); a grid point can fall on a zero of the RF image, so no bound exists",
-                num(stepMm), num(quarterWavelengthMm)));
+                rounded(stepMm), rounded(quarterWavelengthMm)));
     }
 
     static Warning tfmEnvelopeTermOmitted() {
@@ -131,11 +131,6 @@ final class SamplingMessages {
         return Warning.of(TFM_STEP_NOT_BELOW_RESPONSE_WIDTH, String.format(Locale.ROOT,
                 "%s (%s mm) is not below the image response's -6 dB width (%s mm): the quadratic loss 6 (d/w)^2 "
                         + "is a rough model there, and the reflector may be missed",
-                field, num(stepMm), num(widthMm)));
-    }
-
-    /** A number for a message: 6 significant digits, no exponent for ordinary magnitudes. */
-    private static String num(double value) {
-        return MessageNumbers.plain(value, 6);
+                field, rounded(stepMm), rounded(widthMm)));
     }
 }

@@ -19,8 +19,8 @@ final class ThicknessMessages {
                                 + " for the sampling term alone k u covers %s %% and the worst case is"
                                 + " +/- %s mm",
                         measurement == Measurement.ECHO_TO_ECHO ? "triangular" : "rectangular",
-                        MessageNumbers.exact(coverageFactor), MessageNumbers.plain(coveragePercent, 3),
-                        MessageNumbers.plain(worstCaseMm, 4)));
+                        MessageNumbers.exact(coverageFactor), MessageNumbers.rounded(coveragePercent),
+                        MessageNumbers.rounded(worstCaseMm)));
     }
 
     static Warning resolutionCoarserThanRequired(double thicknessResolutionMm, double requiredResolutionMm,
@@ -29,9 +29,9 @@ final class ThicknessMessages {
                 String.format(Locale.ROOT,
                         "thickness_resolution_mm (%s mm) is coarser than required_resolution (%s mm):"
                                 + " sampling_frequency_mhz %s or more is needed",
-                        MessageNumbers.plain(thicknessResolutionMm, 4),
-                        MessageNumbers.plain(requiredResolutionMm, 4),
-                        MessageNumbers.plain(requiredSamplingFrequencyMhz, 6)));
+                        MessageNumbers.rounded(thicknessResolutionMm),
+                        MessageNumbers.rounded(requiredResolutionMm),
+                        MessageNumbers.rounded(requiredSamplingFrequencyMhz)));
     }
 
     static Warning velocityUncertaintyZero() {
@@ -47,6 +47,6 @@ final class ThicknessMessages {
                         "nominal_thickness (%s mm) is below the axial resolution v tau(-6 dB)/2 (%s mm,"
                                 + " model value from frequency_mhz and bandwidth_percent): successive wall echoes,"
                                 + " 2d/v apart, overlap and the reading depends on how the instrument picks them",
-                        MessageNumbers.plain(thicknessMm, 4), MessageNumbers.plain(axialResolutionMm, 4)));
+                        MessageNumbers.rounded(thicknessMm), MessageNumbers.rounded(axialResolutionMm)));
     }
 }

@@ -1,11 +1,11 @@
 package utdigit.core.timing;
 
+import static utdigit.core.common.MessageNumbers.rounded;
 import static utdigit.core.timing.TofdSetupCalculator.DEPTH_UNCERTAINTY_PARTIAL;
 import static utdigit.core.timing.TofdSetupCalculator.GATE_MISSES_WALL;
 import static utdigit.core.timing.TofdSetupCalculator.NO_GATE_MARGIN;
 import static utdigit.core.timing.TofdSetupCalculator.TIP_AT_SURFACE;
 
-import java.math.MathContext;
 import java.util.Locale;
 import utdigit.core.common.CalculationException;
 import utdigit.core.common.MessageNumbers;
@@ -18,8 +18,6 @@ import utdigit.core.common.Warning;
  */
 final class TimingMessages {
     private TimingMessages() {}
-
-    private static final MathContext SETUP_DIGITS = new MathContext(5);
 
     // Time-of-flight resolution.
 
@@ -34,7 +32,7 @@ final class TimingMessages {
     static String separationErrorTopic(double ratio) {
         return String.format(Locale.ROOT,
                 "probe centre separation error: dd/dS = -S/d = %s here, an error e in 2S moves the"
-                        + " depth by %s e", MessageNumbers.plain(ratio, 4), MessageNumbers.plain(ratio / 2.0, 4));
+                        + " depth by %s e", MessageNumbers.rounded(ratio), MessageNumbers.rounded(ratio / 2.0));
     }
 
     static Warning depthInDeadZone(double depthMm, double deadZoneDepthMm) {
@@ -68,19 +66,19 @@ final class TimingMessages {
     // TOFD set-up check.
 
     static CalculationException gateEndsBeforeStart(double startUs, double endUs) {
-        return CalculationException.impossible("gate_end_us (" + fmt(endUs) + " us) must be after gate_start_us ("
-                + fmt(startUs) + " us)", "gate_end_us", "gate_start_us");
+        return CalculationException.impossible("gate_end_us (" + MessageNumbers.exact(endUs) + " us) must be after gate_start_us ("
+                + MessageNumbers.exact(startUs) + " us)", "gate_end_us", "gate_start_us");
     }
 
     static CalculationException measuredTimeOutsideWall(double timeUs, double lateralUs, double backwallUs) {
-        return CalculationException.impossible("measured_time_us (" + fmt(timeUs) + " us) lies outside the wall: "
-                + "between the lateral wave (" + fmt(lateralUs) + " us) and the back wall (" + fmt(backwallUs)
+        return CalculationException.impossible("measured_time_us (" + MessageNumbers.exact(timeUs) + " us) lies outside the wall: "
+                + "between the lateral wave (" + rounded(lateralUs) + " us) and the back wall (" + rounded(backwallUs)
                 + " us) for this separation, thickness and velocity", "measured_time_us");
     }
 
     static CalculationException depthBelowBackWall(double depthMm, double thicknessMm) {
-        return CalculationException.impossible("depth (" + fmt(depthMm) + " mm) is below the back wall (thickness "
-                + fmt(thicknessMm) + " mm)", "depth", "thickness");
+        return CalculationException.impossible("depth (" + rounded(depthMm) + " mm) is below the back wall (thickness "
+                + rounded(thicknessMm) + " mm)", "depth", "thickness");
     }
 
     static Warning noGateMargin() {
@@ -90,10 +88,10 @@ final class TimingMessages {
 
     static Warning gateMissesWall(double startUs, double endUs, double lateralUs, double backwallUs, double marginUs,
             double requiredStartUs, double requiredEndUs) {
-        return Warning.of(GATE_MISSES_WALL, "the gate " + fmt(startUs) + "-" + fmt(endUs)
-                + " us does not span the lateral wave (" + fmt(lateralUs) + " us) to the back wall ("
-                + fmt(backwallUs) + " us) with a margin of " + fmt(marginUs) + " us: set it from "
-                + fmt(requiredStartUs) + " to " + fmt(requiredEndUs) + " us at least");
+        return Warning.of(GATE_MISSES_WALL, "the gate " + rounded(startUs) + "-" + rounded(endUs)
+                + " us does not span the lateral wave (" + rounded(lateralUs) + " us) to the back wall ("
+                + rounded(backwallUs) + " us) with a margin of " + rounded(marginUs) + " us: set it from "
+                + rounded(requiredStartUs) + " to " + rounded(requiredEndUs) + " us at least");
     }
 
     static Warning tipAtSurface() {
@@ -111,11 +109,6 @@ final class TimingMessages {
 
     /** A length of the resolution's messages: 4 significant digits and its unit. */
     private static String mm(double lengthMm) {
-        return MessageNumbers.plain(lengthMm, 4) + " mm";
-    }
-
-    /** A time or length of the set-up check's messages: 5 significant digits. */
-    private static String fmt(double x) {
-        return MessageNumbers.plain(x, SETUP_DIGITS);
+        return MessageNumbers.rounded(lengthMm) + " mm";
     }
 }

@@ -1,5 +1,6 @@
 package utdigit.core.waveform;
 
+import static utdigit.core.common.MessageNumbers.rounded;
 import static utdigit.core.waveform.WaveformAnalyzer.CUT_LEVEL_DB;
 import static utdigit.core.waveform.WaveformAnalyzer.ECHO_CUT_BY_RECORD;
 import static utdigit.core.waveform.WaveformAnalyzer.EDGE_20DB_NOT_FOUND;
@@ -10,10 +11,8 @@ import static utdigit.core.waveform.WaveformAnalyzer.PULSE_LOSS_NOT_DEFINED;
 import static utdigit.core.waveform.WaveformAnalyzer.RECORD_ENERGY_NEAR_NYQUIST;
 import static utdigit.core.waveform.WaveformAnalyzer.TUKEY_FRACTION;
 
-import java.math.MathContext;
 import java.util.Locale;
 import utdigit.core.common.CalculationException;
-import utdigit.core.common.MessageNumbers;
 import utdigit.core.common.Warning;
 import utdigit.core.sampling.SamplingCalculator;
 
@@ -21,13 +20,11 @@ import utdigit.core.sampling.SamplingCalculator;
 final class WaveformMessages {
     private WaveformMessages() {}
 
-    private static final MathContext DIGITS = new MathContext(6);
-
     static Warning echoCut() {
         return Warning.of(ECHO_CUT_BY_RECORD, String.format(Locale.ROOT,
                 "the envelope at an end of the record is within %s dB of its peak: the echo is cut by the record, "
                         + "so the spectrum is taken through a Tukey window (%s %% tapered) and its figures are "
-                        + "approximate; record the whole echo", num(CUT_LEVEL_DB), num(100 * TUKEY_FRACTION)));
+                        + "approximate; record the whole echo", rounded(CUT_LEVEL_DB), rounded(100 * TUKEY_FRACTION)));
     }
 
     static CalculationException recordAliased(double near, double nearLimitMhz, double fsRec) {
@@ -35,7 +32,7 @@ final class WaveformMessages {
                 "the record holds %s of its spectral energy above %s MHz (0.8 of its own Nyquist frequency, "
                         + "record_sampling_frequency_mhz %s): it is sampled too slowly for its pulse (or the "
                         + "rate is wrong), so its spectrum may be aliased; record it at a higher rate",
-                num(near), num(nearLimitMhz), num(fsRec)),
+                rounded(near), rounded(nearLimitMhz), rounded(fsRec)),
                 "samples", "record_sampling_frequency_mhz");
     }
 
@@ -43,7 +40,7 @@ final class WaveformMessages {
         return Warning.of(RECORD_ENERGY_NEAR_NYQUIST, String.format(Locale.ROOT,
                 "the record holds %s of its spectral energy above 0.8 of its own Nyquist frequency (%s MHz): "
                         + "noise or an under-sampled record; the measured figures may be affected",
-                num(near), num(recordNyquistMhz)));
+                rounded(near), rounded(recordNyquistMhz)));
     }
 
     static Warning edge20NotFound(boolean lowerMissing) {
@@ -68,7 +65,7 @@ final class WaveformMessages {
         return Warning.of(PULSE_LOSS_NOT_DEFINED, String.format(Locale.ROOT,
                 "pulse_amplitude_loss_db is null: the rate that decides amplitude (%s MHz) gives 2 or fewer "
                         + "samples per period of the measured centre frequency (%s MHz)",
-                num(amplitudeMhz), num(centreMhz)));
+                rounded(amplitudeMhz), rounded(centreMhz)));
     }
 
     static Warning lossSearchBound(long limit) {
@@ -103,10 +100,6 @@ final class WaveformMessages {
         return Warning.of(MODEL_OPTIMISTIC, String.format(Locale.ROOT,
                 "the record loses %s dB at this rate, the Gaussian model of its band %s dB: the model is "
                         + "optimistic for this probe; judge the setting on the record",
-                num(lossDb), num(modelLossDb)));
-    }
-
-    private static String num(double value) {
-        return MessageNumbers.plain(value, DIGITS);
+                rounded(lossDb), rounded(modelLossDb)));
     }
 }

@@ -63,7 +63,7 @@ class ThicknessResolutionCalculation implements Calculation<ThicknessResolutionR
                 && givenUncertaintyMPerS > MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS()) {
             double limitMPerS = MAX_VELOCITY_UNCERTAINTY_PERCENT / 100.0 * velocity.velocityMPerS();
             errors.add(uncertaintyName, q.velocityUncertaintyInPerUs() != null
-                    ? "must be at most 20 % of the velocity (" + MessageNumbers.plain(Units.mPerSToInPerUs(limitMPerS), 4)
+                    ? "must be at most 20 % of the velocity (" + MessageNumbers.rounded(Units.mPerSToInPerUs(limitMPerS))
                             + " in/us here)"
                     : "must be at most 20 % of the velocity (" + MessageNumbers.exact(limitMPerS) + " m/s here)");
         }

@@ -101,16 +101,14 @@ public final class Mirrors {
         }
         double converted = Units.inPerUsToMPerS(inPerUs);
         if (!(converted >= minMPerS && converted <= maxMPerS)) {
-            errors.add(inName, "must correspond to " + MessageNumbers.plain(minMPerS, SPEED_DIGITS) + " to "
-                    + MessageNumbers.plain(maxMPerS, SPEED_DIGITS) + " m/s ("
-                    + MessageNumbers.plain(Units.mPerSToInPerUs(minMPerS), SPEED_DIGITS) + " to "
-                    + MessageNumbers.plain(Units.mPerSToInPerUs(maxMPerS), SPEED_DIGITS) + " in/us)");
+            errors.add(inName, "must correspond to " + MessageNumbers.rounded(minMPerS) + " to "
+                    + MessageNumbers.rounded(maxMPerS) + " m/s ("
+                    + MessageNumbers.rounded(Units.mPerSToInPerUs(minMPerS)) + " to "
+                    + MessageNumbers.rounded(Units.mPerSToInPerUs(maxMPerS)) + " in/us)");
             return null;
         }
         return converted;
     }
-
-    private static final java.math.MathContext SPEED_DIGITS = new java.math.MathContext(6);
 
     /**
      * The velocity of {@code f}: the caller's (m/s or in/us) or a built-in material's; null when
@@ -246,7 +244,6 @@ public final class Mirrors {
     /** "planned_scan_speed_mm_per_s 50". */
     private static final java.util.regex.Pattern NAMED_SPEED =
             java.util.regex.Pattern.compile("\\b([a-z][a-z0-9_]*)_mm_per_s " + NUMBER + "(?![\\d.eE]| mm/s)");
-    private static final java.math.MathContext MESSAGE_DIGITS = new java.math.MathContext(4);
 
     /**
      * A message with the inch value beside every length (and speed) it quotes in mm: "12.5 mm" becomes
@@ -266,7 +263,7 @@ public final class Mirrors {
     }
 
     private static String inches(String mm) {
-        return MessageNumbers.plain(Units.mmToIn(Double.parseDouble(mm)), MESSAGE_DIGITS);
+        return MessageNumbers.rounded(Units.mmToIn(Double.parseDouble(mm)));
     }
 
     private static String replace(java.util.regex.Pattern pattern, String text,

@@ -39,7 +39,7 @@ public record VelocitySourceView(
         String how = v.uncertaintyKind() == UncertaintyKind.HALF_WIDTH
                 ? "the material's half-width +/- " + MessageNumbers.exact(v.statedUncertaintyMPerS())
                         + " m/s as rectangular: u = " + MessageNumbers.exact(v.statedUncertaintyMPerS()) + "/sqrt(3) = "
-                        + MessageNumbers.plain(v.standardUncertaintyMPerS(), 4) + " m/s (JCGM 100:2008 4.3.7)"
+                        + MessageNumbers.rounded(v.standardUncertaintyMPerS()) + " m/s (JCGM 100:2008 4.3.7)"
                 : "the material's standard uncertainty " + MessageNumbers.exact(v.standardUncertaintyMPerS()) + " m/s";
         return new VelocitySourceView(plain.kind(), plain.velocityMPerS(), plain.material(), plain.waveMode(),
                 plain.temperatureC(), plain.source(), plain.uncertaintyMPerS(), plain.uncertaintyKind(),

@@ -66,6 +66,6 @@ class IJsonApiTest extends ApiTest {
         utdigit.core.common.CalculationException e =
                 utdigit.core.common.CalculationException.invalid("x_mm", -0.0, "must be > 0");
         assertThat(e.getMessage()).contains("(0.0)").doesNotContain("-0");
-        assertThat(utdigit.core.common.MessageNumbers.plain(-0.0, new java.math.MathContext(4))).isEqualTo("0");
+        assertThat(utdigit.core.common.MessageNumbers.rounded(-0.0)).isEqualTo("0");
     }
 }
