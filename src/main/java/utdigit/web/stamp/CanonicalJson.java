@@ -130,9 +130,44 @@ public final class CanonicalJson {
             out.append('0');
             return;
         }
-        if (!appendShortDecimal(value, out)) {
+        if (!appendShortDecimal(value, out) && !appendPlainSchubfach(value, out)) {
             format(value < 0, shortestDigits(Math.abs(value)), out);
         }
+    }
+
+    /**
+     * A double from 1e-3 to below 1e7, not an integer, that Schubfach writes with more than two
+     * significant digits: its text is already ECMA-262's (the same digits, see {@link #shortestDigits},
+     * which corrects two-digit answers only; the same plain notation). Returns false (nothing
+     * appended) otherwise.
+     */
+    static boolean appendPlainSchubfach(double value, StringBuilder out) {
+        double abs = Math.abs(value);
+        if (abs < 1e-3 || abs >= 1e7) {
+            return false;
+        }
+        String text = NumberOutput.toString(abs, true);
+        if (text.endsWith(".0")) {
+            return false; // an integer: the other paths
+        }
+        int significant = 0;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == 'E') {
+                return false;
+            }
+            if (c >= '1' && c <= '9' || c == '0' && significant > 0) {
+                significant++;
+            }
+        }
+        if (significant <= 2) {
+            return false;
+        }
+        if (value < 0) {
+            out.append('-');
+        }
+        out.append(text);
+        return true;
     }
 
     /** Powers of ten, as exact doubles and as longs, up to 10^18. */

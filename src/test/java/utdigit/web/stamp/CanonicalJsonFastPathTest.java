@@ -86,6 +86,33 @@ class CanonicalJsonFastPathTest {
         assertThat(taken[0]).as("values the short-decimal path took").isGreaterThan(500_000);
     }
 
+    @Test
+    @DisplayName("plain Schubfach path equals the reference path on 2,000,000 seeded doubles from 1e-4 to 1e8")
+    void plainSchubfachPathEqualsReference() {
+        SplittableRandom random = new SplittableRandom(SEED + 2);
+        List<String> mismatches = new ArrayList<>();
+        int taken = 0;
+        for (int i = 0; i < 2_000_000; i++) {
+            double x = switch (i % 4) {
+                case 0 -> sign(random) * StrictMath.pow(10.0, -4.0 + 12.0 * random.nextDouble());
+                case 1 -> sign(random) * random.nextLong(1, 100_000) / StrictMath.pow(10.0, random.nextInt(0, 9));
+                case 2 -> Double.longBitsToDouble(Double.doubleToRawLongBits(random.nextLong(1, 1_000)
+                        / StrictMath.pow(10.0, random.nextInt(0, 7))) + random.nextLong(-3, 4));
+                default -> random.nextLong(1, 100_000) / 10.0 / (random.nextLong(1, 10_000) / 100.0);
+            };
+            StringBuilder out = new StringBuilder();
+            if (CanonicalJson.appendPlainSchubfach(x, out)) {
+                taken++;
+                String reference = CanonicalJson.referenceNumber(x);
+                if (!out.toString().equals(reference) && mismatches.size() < 20) {
+                    mismatches.add(x + ": plain " + out + ", reference " + reference);
+                }
+            }
+        }
+        assertThat(mismatches).isEmpty();
+        assertThat(taken).as("values the plain Schubfach path took").isGreaterThan(500_000);
+    }
+
     @ParameterizedTest(name = "{0} -> {1}")
     @DisplayName("where Schubfach writes two digits and one would do, the one-digit form ECMA-262 asks for")
     @CsvSource({
