@@ -66,7 +66,10 @@ class JsonConfiguration {
                     // slower and sometimes longer
                     .enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
                     .addMixIn(ProblemDetail.class, ProblemDetailJacksonMixin.class)
-                    .addModule(StrictScalars.module());
+                    .addModule(StrictScalars.module())
+                    // record accessors and canonical constructors called through generated lambdas,
+                    // not MethodHandle.invoke per member (measured: src/docs/performance.md)
+                    .addModule(new tools.jackson.module.blackbird.BlackbirdModule());
         }
     }
 }
