@@ -130,6 +130,9 @@ final class CanonicalWriter {
     static void checkWellFormed(String s) {
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
+            if ((c & 0xF800) != 0xD800) {
+                continue; // not a surrogate (U+D800 to U+DFFF): one test for almost every character
+            }
             if (Character.isHighSurrogate(c) && i + 1 < s.length() && Character.isLowSurrogate(s.charAt(i + 1))) {
                 i++;
             } else if (Character.isSurrogate(c)) {
