@@ -203,6 +203,11 @@ public final class CanonicalJson {
                 return q == 0 && appendInteger(value, abs, out);
             }
             long m = Math.round(scaled);
+            // m / 10^q reads back only if abs * 10^q is within 2^-52 of it, relatively (half an ulp of abs,
+            // and the rounding of the product): anything farther is no candidate, and needs no division
+            if (Math.abs(scaled - m) > scaled * 0x1p-51) {
+                continue;
+            }
             if (m != 0 && m / POW10[q] == abs) {
                 if (q > 0 && m % 10 == 0) {
                     return false; // not the smallest q: the proof above says this cannot happen; the slow path decides
