@@ -66,10 +66,7 @@ class JsonConfiguration {
                     // slower and sometimes longer
                     .enable(StreamWriteFeature.USE_FAST_DOUBLE_WRITER)
                     .addMixIn(ProblemDetail.class, ProblemDetailJacksonMixin.class)
-                    .addModule(StrictScalars.module())
-                    // record accessors and canonical constructors called through generated lambdas,
-                    // not MethodHandle.invoke per member (measured: src/docs/performance.md)
-                    .addModule(new tools.jackson.module.blackbird.BlackbirdModule());
+                    .addModule(StrictScalars.module());
         }
     }
 }
