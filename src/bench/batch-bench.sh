@@ -7,6 +7,7 @@
 #   src/bench/batch-bench.sh sampling-assessments 1000000
 #   ROWS_WARMUP=50000 JAVA_OPTS='-Xmx256m' src/bench/batch-bench.sh technique-sheet-validations 1000000
 #   JFR=1 src/bench/batch-bench.sh quantization-assessments 100000   # + a JFR profile of the measured batch
+#   JAR=/tmp/before.jar src/bench/batch-bench.sh sampling-assessments 1000000   # another build (A/B)
 #
 # The CSV is generated into a temporary directory (never committed) and removed afterwards; the
 # answer (CSV, Accept text/csv) is counted as it streams, not stored.
@@ -17,7 +18,7 @@ ROWS="${2:-1000000}"
 ROWS_WARMUP="${ROWS_WARMUP:-100000}"
 JAVA_OPTS="${JAVA_OPTS:--Xmx256m}"
 PORT="$(python3 -c 'import socket; s=socket.socket(); s.bind(("127.0.0.1",0)); print(s.getsockname()[1])')"
-JAR="$(ls target/ut-digitization-service-*.jar 2>/dev/null | grep -v plain | head -1 || true)"
+JAR="${JAR:-$(ls target/ut-digitization-service-*.jar 2>/dev/null | grep -v plain | head -1 || true)}"
 if [[ -z "$JAR" || "${REBUILD:-0}" == 1 ]]; then
   mvn -B -q -DskipTests package
   JAR="$(ls target/ut-digitization-service-*.jar | grep -v plain | head -1)"

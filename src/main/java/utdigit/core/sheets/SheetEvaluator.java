@@ -387,11 +387,12 @@ public final class SheetEvaluator {
 
     /** The values under construction with the notes of each calculation. */
     private static final class Values {
-        final Map<String, Double> values = new LinkedHashMap<>();
+        // sized for a sheet with every section: no rehashing as the metrics come in
+        final Map<String, Double> values = new LinkedHashMap<>(256);
         final List<Warning> warnings = new ArrayList<>();
-        final Set<Reference> references = new LinkedHashSet<>();
+        final Set<Reference> references = new LinkedHashSet<>(64);
         /** The names of the inputs the sheet gives, for the inputs a rule still needs. */
-        final Set<String> given = new LinkedHashSet<>();
+        final Set<String> given = new LinkedHashSet<>(128);
         /** FAIL findings of the service's feasibility checks. */
         final List<Finding> feasibility = new ArrayList<>();
 

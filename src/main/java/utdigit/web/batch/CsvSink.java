@@ -30,6 +30,10 @@ final class CsvSink implements RowSink {
 
     private final List<String> resultColumns;
     private final String[][] resultPaths;
+    /** Per column, the members to its cell, each remembering the accessor of the record type it last met. */
+    private final Member[][] resultMembers;
+    /** Per column, whether its path but the last name is that of the column before (the same parent). */
+    private final boolean[] sameParent;
     private final SequenceWriter writer;
     private final JsonMapper mapper;
 
@@ -37,6 +41,14 @@ final class CsvSink implements RowSink {
         this.mapper = mapper;
         this.resultColumns = resultColumns;
         this.resultPaths = resultColumns.stream().map(c -> c.split("\\.")).toArray(String[][]::new);
+        this.resultMembers = new Member[resultPaths.length][];
+        this.sameParent = new boolean[resultPaths.length];
+        for (int i = 0; i < resultPaths.length; i++) {
+            String[] path = resultPaths[i];
+            resultMembers[i] = java.util.Arrays.stream(path).map(Member::new).toArray(Member[]::new);
+            sameParent[i] = i > 0 && path.length > 1 && resultPaths[i - 1].length == path.length
+                    && java.util.Arrays.equals(resultPaths[i - 1], 0, path.length - 1, path, 0, path.length - 1);
+        }
         List<String> header = new ArrayList<>();
         header.add("row");
         header.add("id");
@@ -64,8 +76,31 @@ final class CsvSink implements RowSink {
         cells.add(row.id() != null ? row.id() : "");
         cells.add(row.status());
         Stamped<?> result = row.result();
-        for (String[] path : resultPaths) {
-            cells.add(result == null ? "" : cell(result, path));
+        Object parent = null;
+        for (int i = 0; i < resultPaths.length; i++) {
+            if (result == null) {
+                cells.add("");
+                continue;
+            }
+            String[] path = resultPaths[i];
+            Member[] members = resultMembers[i];
+            if (path.length == 2 && path[0].equals("stamp") && path[1].equals("sha256")) {
+                cells.add(result.sha256());
+                continue;
+            }
+            if (!sameParent[i]) {
+                parent = result.answer();
+                for (int m = 0; m < members.length - 1; m++) {
+                    parent = members[m].of(parent);
+                }
+            }
+            Object value = members[members.length - 1].of(parent);
+            if (path.length == 1 && path[0].equals("warnings") && result.notRepresentable() != null) {
+                String codes = value instanceof List<?> list ? list(list) : "";
+                cells.add(codes.isEmpty() ? Stamped.NOT_REPRESENTABLE : codes + ";" + Stamped.NOT_REPRESENTABLE);
+            } else {
+                cells.add(value(value));
+            }
         }
         ProblemDetail problem = row.problem();
         if (problem == null) {
@@ -87,32 +122,33 @@ final class CsvSink implements RowSink {
         writer.write(cells);
     }
 
-    /** The cell of a dotted column: the member's value as the JSON answer writes it, flattened. */
-    private String cell(Stamped<?> result, String[] path) {
-        if (path.length == 2 && path[0].equals("stamp") && path[1].equals("sha256")) {
-            return result.sha256();
-        }
-        Object value = result.answer();
-        for (String part : path) {
-            value = member(value, part);
-        }
-        if (path.length == 1 && path[0].equals("warnings") && result.notRepresentable() != null) {
-            String codes = value instanceof List<?> list ? list(list) : "";
-            return codes.isEmpty() ? Stamped.NOT_REPRESENTABLE : codes + ";" + Stamped.NOT_REPRESENTABLE;
-        }
-        return value(value);
-    }
+    /**
+     * One name of a dotted column: a member of a record or an entry of a map, null where there is
+     * none. The accessor is looked up once per record type met (one type, in practice), not per cell.
+     */
+    private static final class Member {
+        private final String name;
+        private Class<?> type;
+        private java.util.function.Function<Object, Object> accessor;
 
-    /** A member of a record or an entry of a map; null where there is none. */
-    private static Object member(Object value, String name) {
-        value = unwrap(value);
-        if (value == null) {
-            return null;
+        Member(String name) {
+            this.name = name;
         }
-        if (value instanceof Map<?, ?> map) {
-            return map.get(name);
+
+        Object of(Object value) {
+            value = unwrap(value);
+            if (value == null) {
+                return null;
+            }
+            if (value instanceof Map<?, ?> map) {
+                return map.get(name);
+            }
+            if (value.getClass() != type) {
+                type = value.getClass();
+                accessor = type.isRecord() ? RecordMembers.of(type).get(name) : null;
+            }
+            return accessor == null ? null : accessor.apply(value);
         }
-        return value.getClass().isRecord() ? RecordMembers.get(value, name) : null;
     }
 
     private static Object unwrap(Object value) {

@@ -130,7 +130,119 @@ public final class CanonicalJson {
             out.append('0');
             return;
         }
-        format(value < 0, shortestDigits(Math.abs(value)), out);
+        if (!appendShortDecimal(value, out) && !appendPlainSchubfach(value, out)) {
+            format(value < 0, shortestDigits(Math.abs(value)), out);
+        }
+    }
+
+    /**
+     * A double from 1e-3 to below 1e7, not an integer, that Schubfach writes with more than two
+     * significant digits: its text is already ECMA-262's (the same digits, see {@link #shortestDigits},
+     * which corrects two-digit answers only; the same plain notation). Returns false (nothing
+     * appended) otherwise.
+     */
+    static boolean appendPlainSchubfach(double value, StringBuilder out) {
+        double abs = Math.abs(value);
+        if (abs < 1e-3 || abs >= 1e7) {
+            return false;
+        }
+        String text = NumberOutput.toString(abs, true);
+        if (text.endsWith(".0")) {
+            return false; // an integer: the other paths
+        }
+        int significant = 0;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == 'E') {
+                return false;
+            }
+            if (c >= '1' && c <= '9' || c == '0' && significant > 0) {
+                significant++;
+            }
+        }
+        if (significant <= 2) {
+            return false;
+        }
+        if (value < 0) {
+            out.append('-');
+        }
+        out.append(text);
+        return true;
+    }
+
+    /** Powers of ten, as exact doubles and as longs, up to 10^18. */
+    private static final double[] POW10 = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12,
+        1e13, 1e14, 1e15, 1e16, 1e17, 1e18};
+    private static final long[] LONG_POW10 = {1L, 10L, 100L, 1_000L, 10_000L, 100_000L, 1_000_000L, 10_000_000L,
+        100_000_000L, 1_000_000_000L, 10_000_000_000L, 100_000_000_000L, 1_000_000_000_000L, 10_000_000_000_000L,
+        100_000_000_000_000L, 1_000_000_000_000_000L, 10_000_000_000_000_000L, 100_000_000_000_000_000L,
+        1_000_000_000_000_000_000L};
+    /** The short-decimal path takes decimals of fewer than 15 significant digits only. */
+    private static final double SHORT = 1e15;
+
+    /**
+     * The common case without Schubfach: a value that is an integer below 2^53, or a decimal m / 10^q
+     * with m below 10^15 and 1e-6 <= |value| (ECMA-262's plain notation), found for the smallest q.
+     * Why that is ECMA-262's answer: m / 10^q == value is a division of two exact doubles, correctly
+     * rounded, so it holds exactly when the decimal reads back as value; the decimals that read back
+     * lie within one ulp of value (less than 2.3e-16 |value|), while two decimals with q digits
+     * after the point and m below 10^15 are more than 1e-15 |value| apart, so at most one reads back
+     * for each q and the rounded m finds it; the smallest q that has one gives the fewest
+     * significant digits (no power of ten 10^j with j >= 0 lies inside another double's interval, one
+     * with j < 0 is found at q = -j). A test compares it with the BigDecimal definition on millions of
+     * doubles. Returns false (nothing appended) where it does not apply.
+     */
+    static boolean appendShortDecimal(double value, StringBuilder out) {
+        double abs = Math.abs(value);
+        if (abs >= 0x1p53 || abs < 1e-6) {
+            return false;
+        }
+        for (int q = 0; q < POW10.length; q++) {
+            double scaled = abs * POW10[q];
+            if (scaled >= SHORT) {
+                return q == 0 && appendInteger(value, abs, out);
+            }
+            long m = Math.round(scaled);
+            // m / 10^q reads back only if abs * 10^q is within 2^-52 of it, relatively (half an ulp of abs,
+            // and the rounding of the product): anything farther is no candidate, and needs no division
+            if (Math.abs(scaled - m) > scaled * 0x1p-51) {
+                continue;
+            }
+            if (m != 0 && m / POW10[q] == abs) {
+                if (q > 0 && m % 10 == 0) {
+                    return false; // not the smallest q: the proof above says this cannot happen; the slow path decides
+                }
+                if (value < 0) {
+                    out.append('-');
+                }
+                if (q == 0) {
+                    out.append(m);
+                    return true;
+                }
+                long whole = m / LONG_POW10[q];
+                long fraction = m % LONG_POW10[q];
+                out.append(whole).append('.');
+                for (long p = LONG_POW10[q - 1]; p > fraction; p /= 10) {
+                    out.append('0');
+                }
+                out.append(fraction);
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** An integer from 10^15 to 2^53: its digits (no other decimal of as few digits reads back). */
+    private static boolean appendInteger(double value, double abs, StringBuilder out) {
+        long m = (long) abs;
+        if (m != abs) {
+            return false;
+        }
+        if (value < 0) {
+            out.append('-');
+        }
+        out.append(m);
+        return true;
     }
 
     /** The reference path alone: {@link #number} computed with BigDecimal only. */

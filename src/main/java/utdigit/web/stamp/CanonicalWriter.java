@@ -50,6 +50,9 @@ final class CanonicalWriter {
     /** Numbers and strings as RFC 8785 writes them. */
     private static final class Canonical extends JsonGeneratorDelegate {
         private final Stamper.NonFiniteSeen seen;
+        /** The text of the number being written (one answer, one thread): no String per number. */
+        private final StringBuilder number = new StringBuilder(32);
+        private final char[] chars = new char[32];
 
         Canonical(JsonGenerator delegate, Stamper.NonFiniteSeen seen) {
             super(delegate, false);
@@ -62,7 +65,10 @@ final class CanonicalWriter {
                 seen.any = true;
                 delegate.writeNull(); // named by the answer's RESULT_NOT_REPRESENTABLE warning
             } else {
-                delegate.writeRawValue(CanonicalJson.number(v));
+                number.setLength(0);
+                CanonicalJson.appendNumber(v, number);
+                number.getChars(0, number.length(), chars, 0); // at most 25 characters ("-0.00000" and 17 digits)
+                delegate.writeRawValue(chars, 0, number.length());
             }
             return this;
         }
@@ -124,6 +130,9 @@ final class CanonicalWriter {
     static void checkWellFormed(String s) {
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
+            if ((c & 0xF800) != 0xD800) {
+                continue; // not a surrogate (U+D800 to U+DFFF): one test for almost every character
+            }
             if (Character.isHighSurrogate(c) && i + 1 < s.length() && Character.isLowSurrogate(s.charAt(i + 1))) {
                 i++;
             } else if (Character.isSurrogate(c)) {

@@ -44,6 +44,75 @@ class CanonicalJsonFastPathTest {
         assertThat(mismatches).isEmpty();
     }
 
+    @Test
+    @DisplayName("short-decimal path equals the reference path on 3,000,000 seeded doubles, and takes most short decimals")
+    void shortDecimalPathEqualsReference() {
+        SplittableRandom random = new SplittableRandom(SEED + 1);
+        List<String> mismatches = new ArrayList<>();
+        int[] taken = new int[1];
+        DoubleSupplier[] kinds = {
+            // short decimals: m / 10^q with m of 1 to 17 digits, q from 0 to 20
+            () -> sign(random) * random.nextLong(1, StrictMath.round(StrictMath.pow(10.0, random.nextInt(1, 18))))
+                    / StrictMath.pow(10.0, random.nextInt(0, 21)),
+            // integers up to and past 2^53, and their neighbours
+            () -> Double.longBitsToDouble(Double.doubleToRawLongBits(
+                    (double) random.nextLong(1, 1L << random.nextInt(1, 60))) + random.nextLong(-2, 3)),
+            // neighbours of short decimals (one to three ulps away: long forms next to short ones)
+            () -> Double.longBitsToDouble(Double.doubleToRawLongBits(random.nextLong(1, 1_000_000)
+                    / StrictMath.pow(10.0, random.nextInt(0, 12))) + random.nextLong(-3, 4)),
+            // results of arithmetic on short decimals, as answers hold them (v / f, mm / 25.4, 1 / fs)
+            () -> random.nextLong(1, 100_000) / 10.0 / (random.nextLong(1, 10_000) / 100.0),
+            // magnitudes of typical answers, log-uniform over 1e-8..1e17, and powers of ten around the bounds
+            () -> sign(random) * StrictMath.pow(10.0, -8.0 + 25.0 * random.nextDouble()),
+            () -> Double.longBitsToDouble(Double.doubleToRawLongBits(StrictMath.pow(10.0, random.nextInt(-8, 18)))
+                    + random.nextLong(-2, 3)),
+        };
+        for (int i = 0; i < 3_000_000; i++) {
+            double x = kinds[i % kinds.length].getAsDouble();
+            if (!Double.isFinite(x) || x == 0.0) {
+                continue;
+            }
+            StringBuilder out = new StringBuilder();
+            if (CanonicalJson.appendShortDecimal(x, out)) {
+                taken[0]++;
+                String reference = CanonicalJson.referenceNumber(x);
+                if (!out.toString().equals(reference) && mismatches.size() < 20) {
+                    mismatches.add(x + " (bits " + Long.toHexString(Double.doubleToRawLongBits(x)) + "): short "
+                            + out + ", reference " + reference);
+                }
+            }
+        }
+        assertThat(mismatches).isEmpty();
+        assertThat(taken[0]).as("values the short-decimal path took").isGreaterThan(500_000);
+    }
+
+    @Test
+    @DisplayName("plain Schubfach path equals the reference path on 2,000,000 seeded doubles from 1e-4 to 1e8")
+    void plainSchubfachPathEqualsReference() {
+        SplittableRandom random = new SplittableRandom(SEED + 2);
+        List<String> mismatches = new ArrayList<>();
+        int taken = 0;
+        for (int i = 0; i < 2_000_000; i++) {
+            double x = switch (i % 4) {
+                case 0 -> sign(random) * StrictMath.pow(10.0, -4.0 + 12.0 * random.nextDouble());
+                case 1 -> sign(random) * random.nextLong(1, 100_000) / StrictMath.pow(10.0, random.nextInt(0, 9));
+                case 2 -> Double.longBitsToDouble(Double.doubleToRawLongBits(random.nextLong(1, 1_000)
+                        / StrictMath.pow(10.0, random.nextInt(0, 7))) + random.nextLong(-3, 4));
+                default -> random.nextLong(1, 100_000) / 10.0 / (random.nextLong(1, 10_000) / 100.0);
+            };
+            StringBuilder out = new StringBuilder();
+            if (CanonicalJson.appendPlainSchubfach(x, out)) {
+                taken++;
+                String reference = CanonicalJson.referenceNumber(x);
+                if (!out.toString().equals(reference) && mismatches.size() < 20) {
+                    mismatches.add(x + ": plain " + out + ", reference " + reference);
+                }
+            }
+        }
+        assertThat(mismatches).isEmpty();
+        assertThat(taken).as("values the plain Schubfach path took").isGreaterThan(500_000);
+    }
+
     @ParameterizedTest(name = "{0} -> {1}")
     @DisplayName("where Schubfach writes two digits and one would do, the one-digit form ECMA-262 asks for")
     @CsvSource({
