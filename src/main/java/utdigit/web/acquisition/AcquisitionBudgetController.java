@@ -1,8 +1,6 @@
 package utdigit.web.acquisition;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -38,8 +36,7 @@ class AcquisitionBudgetController {
                     + "source. Caution: the governing code edition and procedure decide the scan increment and "
                     + "speed; the instrument's own file format decides the bytes stored; results support a "
                     + "qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The budget",
-            content = @Content(schema = @Schema(implementation = AcquisitionBudgetResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The budget")
     Stamped<AcquisitionBudgetResponse> budget(@RequestBody AcquisitionBudgetRequest request) {
         return runner.run(calculation, request);
     }

@@ -1,8 +1,6 @@
 package utdigit.web.arrays;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -35,8 +33,7 @@ class ArrayApertureController {
                     + "for the largest steering angle used. lambda is the wavelength of the medium where the beam is "
                     + "steered (the part, or the wedge for an array on a wedge). Caution: the governing code edition "
                     + "and procedure decide; results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The aperture",
-            content = @Content(schema = @Schema(implementation = ArrayApertureResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The aperture")
     Stamped<ArrayApertureResponse> assess(@RequestBody ArrayApertureRequest request) {
         return runner.run(calculation, request);
     }

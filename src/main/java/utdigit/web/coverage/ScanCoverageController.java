@@ -1,8 +1,6 @@
 package utdigit.web.coverage;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -35,8 +33,7 @@ class ScanCoverageController {
                     + "in its far field (inside the near field it is not known: null with a warning). Codes set their "
                     + "own increments by thickness band: the requirement profiles hold those. Caution: the governing "
                     + "code edition and procedure decide; results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The coverage",
-            content = @Content(schema = @Schema(implementation = ScanCoverageResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The coverage")
     Stamped<ScanCoverageResponse> assess(@RequestBody ScanCoverageRequest request) {
         return runner.run(calculation, request);
     }

@@ -1,8 +1,6 @@
 package utdigit.web.dac;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -36,8 +34,7 @@ class DacQuantizationController {
                     + "without correction, and whether each set-up meets it. The quantization figures are those of "
                     + "POST /api/quantization-assessments. Caution: the governing code edition and procedure decide; "
                     + "results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The assessment",
-            content = @Content(schema = @Schema(implementation = DacQuantizationResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The assessment")
     Stamped<DacQuantizationResponse> assess(@RequestBody DacQuantizationRequest request) {
         return runner.run(calculation, request);
     }

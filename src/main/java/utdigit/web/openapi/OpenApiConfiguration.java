@@ -18,6 +18,12 @@ import utdigit.web.json.ContractNaming;
  */
 @Configuration(proxyBeanMethods = false)
 class OpenApiConfiguration {
+    static {
+        // A controller returns Stamped<Answer>: the document shows the answer's schema (the stamp member is
+        // added to every answer schema by OpenApiProblems), so no controller declares its schema again.
+        org.springdoc.core.utils.SpringDocUtils.getConfig().addResponseWrapperToIgnore(utdigit.web.stamp.Stamped.class);
+    }
+
 
     static final String DESCRIPTION = """
             Calculations that show whether a digital UT instrument's digitization settings are adequate \

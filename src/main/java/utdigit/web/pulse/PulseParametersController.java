@@ -1,8 +1,6 @@
 package utdigit.web.pulse;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -33,8 +31,7 @@ class PulseParametersController {
                     + "through a wedge the near field left in the part and the refracted angle (Snell). Caution: "
                     + "model values support a qualified examiner; beam measurements on reference blocks and the "
                     + "governing code decide.")
-    @ApiResponse(responseCode = "200", description = "The pulse and beam parameters",
-            content = @Content(schema = @Schema(implementation = PulseParametersResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The pulse and beam parameters")
     Stamped<PulseParametersResponse> compute(@RequestBody PulseParametersRequest request) {
         return runner.run(calculation, request);
     }

@@ -1,8 +1,6 @@
 package utdigit.web.quantization;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -31,8 +29,7 @@ class QuantizationAssessmentController {
                     + "height and an evaluation level the evaluation height and its error. Soft gain scales the "
                     + "LSB: it adds no resolution. Caution: the governing code edition and procedure decide the "
                     + "tolerance; results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The assessment",
-            content = @Content(schema = @Schema(implementation = QuantizationAssessmentResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The assessment")
     Stamped<QuantizationAssessmentResponse> assess(@RequestBody QuantizationAssessmentRequest request) {
         return runner.run(calculation, request);
     }

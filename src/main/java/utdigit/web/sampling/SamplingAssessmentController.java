@@ -1,8 +1,6 @@
 package utdigit.web.sampling;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -42,8 +40,7 @@ class SamplingAssessmentController {
                     + "check on a reference reflector governs. Aliasing of the band, a spectral level above -40 dB "
                     + "at Nyquist and 2 or fewer samples per period are warnings. Caution: the governing code edition "
                     + "and procedure decide the rate and tolerance; results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The assessment",
-            content = @Content(schema = @Schema(implementation = SamplingAssessmentResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The assessment")
     Stamped<SamplingAssessmentResponse> assess(@RequestBody SamplingAssessmentRequest request) {
         return runner.run(calculation, request);
     }

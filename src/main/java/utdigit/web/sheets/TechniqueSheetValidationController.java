@@ -1,8 +1,6 @@
 package utdigit.web.sheets;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -32,8 +30,7 @@ class TechniqueSheetValidationController {
                     + "findings; only malformed input is a 4xx. Caution: built-in example profiles are UNVERIFIED "
                     + "transcriptions; the governing code edition, local codes and licensed practice decide, and the "
                     + "results support a qualified examiner, never replace procedure qualification.")
-    @ApiResponse(responseCode = "200", description = "The verdict and findings",
-            content = @Content(schema = @Schema(implementation = TechniqueSheetValidationResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The verdict and findings")
     Stamped<TechniqueSheetValidationResponse> validate(@RequestBody TechniqueSheetRequest request) {
         return runner.run(calculation, request);
     }

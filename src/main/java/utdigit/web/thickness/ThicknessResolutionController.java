@@ -1,8 +1,6 @@
 package utdigit.web.thickness;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -34,8 +32,7 @@ class ThicknessResolutionController {
                     + "not 95 % where the rectangular sampling term dominates. Sub-sample interpolation does "
                     + "better than these quantization figures. Caution: the governing code edition and procedure "
                     + "decide the tolerance; results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The resolution and uncertainty",
-            content = @Content(schema = @Schema(implementation = ThicknessResolutionResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The resolution and uncertainty")
     Stamped<ThicknessResolutionResponse> resolve(@RequestBody ThicknessResolutionRequest request) {
         return runner.run(calculation, request);
     }

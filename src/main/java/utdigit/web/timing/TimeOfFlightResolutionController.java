@@ -1,8 +1,6 @@
 package utdigit.web.timing;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -36,8 +34,7 @@ class TimeOfFlightResolutionController {
                     + "a tip off the centre line reads deeper than it is. Sub-sample interpolation does better than "
                     + "these quantization figures. Caution: the governing code edition and procedure decide the "
                     + "tolerance; results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The resolution",
-            content = @Content(schema = @Schema(implementation = TimeOfFlightResolutionResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The resolution")
     Stamped<TimeOfFlightResolutionResponse> resolve(@RequestBody TimeOfFlightResolutionRequest request) {
         return runner.run(calculation, request);
     }

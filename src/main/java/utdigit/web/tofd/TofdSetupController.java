@@ -1,8 +1,6 @@
 package utdigit.web.tofd;
 
 import io.swagger.v3.oas.annotations.Operation;
-import io.swagger.v3.oas.annotations.media.Content;
-import io.swagger.v3.oas.annotations.media.Schema;
 import io.swagger.v3.oas.annotations.responses.ApiResponse;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.springframework.http.MediaType;
@@ -37,8 +35,7 @@ class TofdSetupController {
                     + "centre line (it reads deeper) are not in it. The mode-converted back wall arrives later still. "
                     + "Times are in the part (wedge delays excluded). Caution: the governing code edition and procedure "
                     + "decide; results support a qualified examiner.")
-    @ApiResponse(responseCode = "200", description = "The set-up",
-            content = @Content(schema = @Schema(implementation = TofdSetupResponse.class)))
+    @ApiResponse(responseCode = "200", description = "The set-up")
     Stamped<TofdSetupResponse> check(@RequestBody TofdSetupRequest request) {
         return runner.run(calculation, request);
     }
