@@ -302,6 +302,16 @@ class BatchProcessor implements DisposableBean {
                 }
             }
             row = Row.of(row.number(), mapper.readTree(row.line()));
+        } else if (row.element() != null) {
+            try {
+                Q request = runner.read(c, row.element().asParser());
+                if (request != null) { // an element null is answered as a tree: "must be a JSON object"
+                    return answered(c, row, printable(RecordMembers.get(request, ID)), request);
+                }
+            } catch (InputProblem | tools.jackson.core.JacksonException unread) {
+                // explained from the element's tree, as before: the same problems and pointers
+            }
+            row = Row.of(row.number(), (JsonNode) mapper.readTree(row.element().asParser()));
         }
         JsonNode body = row.body();
         String id = row.id() != null ? row.id() : body != null && body.path(ID).isString()

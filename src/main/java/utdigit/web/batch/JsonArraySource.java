@@ -8,11 +8,10 @@ import tools.jackson.core.JsonToken;
 import tools.jackson.core.SerializableString;
 import tools.jackson.core.sym.PropertyNameMatcher;
 import tools.jackson.core.util.JsonParserDelegate;
-import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
+import tools.jackson.databind.util.TokenBuffer;
 import utdigit.web.problem.FieldError;
 import utdigit.web.problem.ProblemType;
 
@@ -30,15 +29,11 @@ final class JsonArraySource implements RowSource {
     private static final int CHECK_EVERY_TOKENS = 64;
 
     private final JsonParser parser;
-    private final ObjectReader elements;
     private long row;
     private String fatal;
     private boolean done;
 
     JsonArraySource(JsonMapper mapper, InputStream in) {
-        // The strict mapper fails on trailing tokens, and after one element of the array the rest of
-        // the array is exactly that: elements are read without that check (the array is checked here).
-        this.elements = mapper.readerFor(JsonNode.class).without(DeserializationFeature.FAIL_ON_TRAILING_TOKENS);
         try {
             this.parser = mapper.createParser(in);
             JsonToken first = parser.nextToken();
@@ -81,7 +76,10 @@ final class JsonArraySource implements RowSource {
             }
             SizeCapped capped = new SizeCapped(parser, parser.currentTokenLocation().getByteOffset());
             try {
-                return Row.of(row, elements.readValue(capped));
+                // the element's tokens, read into the request record on a worker (no tree unless it fails)
+                TokenBuffer element = TokenBuffer.forBuffering(capped, capped.objectReadContext());
+                element.copyCurrentStructure(capped);
+                return Row.ofElement(row, element);
             } catch (ElementTooLarge e) {
                 while (parser.streamReadContext().getNestingDepth() > 1) { // back to the array's level
                     if (parser.nextToken() == null) {

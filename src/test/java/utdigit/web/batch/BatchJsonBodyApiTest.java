@@ -126,4 +126,28 @@ class BatchJsonBodyApiTest extends BatchApiTest {
         RawHttp.Response r = batch(QUANTIZATION, JSON, NDJSON, body, false);
         assertThat(statuses(rows(r))).containsExactly("OK");
     }
+
+    @Test
+    void anElementIsAnsweredAsTheSameRowOnAnNdjsonLineWouldBe() {
+        // Elements are read into the request record from their tokens (a tree only to explain one that
+        // fails); NDJSON lines from their text. The same requests must give the same rows, problems and
+        // pointers included: valid ones, wrong types, unknown fields, numbers beyond double range, a
+        // lone surrogate, null, a scalar, an empty object, a sheet with its id.
+        List<String> elements = List.of("{\"bit_depth\": 8}", "{\"bit_depth\": 8.5}", "{\"bit_depth\": \"8\"}",
+                "{\"bit_depth\": 8, \"no_such_field\": 1}", "{\"bit_depth\": 1e400}", "{\"bit_depth\": 1e-400}",
+                "{\"bit_depth\": 8, \"quantizer\": \"\\ud800\"}", "null", "8", "\"text\"", "{}",
+                "{\"bit_depth\": 12, \"signal_height_percent_fsh\": -0.0}",
+                "{\"bit_depth\": 12, \"full_scale_range_percent_fsh\": 100000000000000000000000000000000000000000}");
+        List<JsonNode> fromArray = ndjsonRows(QUANTIZATION, JSON, "[" + String.join(", ", elements) + "]");
+        List<JsonNode> fromLines = ndjsonRows(QUANTIZATION, NDJSON, String.join("\n", elements) + "\n");
+        assertThat(fromArray).hasSize(elements.size());
+        for (int i = 0; i < elements.size(); i++) {
+            JsonNode a = fromArray.get(i);
+            JsonNode b = fromLines.get(i);
+            assertThat(a.path("status")).as(elements.get(i)).isEqualTo(b.path("status"));
+            assertThat(a.path("problem")).as(elements.get(i)).isEqualTo(b.path("problem"));
+            assertThat(a.path("result")).as(elements.get(i)).isEqualTo(b.path("result"));
+        }
+        assertThat(statuses(fromArray).get(0)).isEqualTo("OK");
+    }
 }
