@@ -287,31 +287,23 @@ class BatchProcessor implements DisposableBean {
 
     /** One row's answer: OK with the single endpoint's answer, or INVALID with its problem. */
     <Q, A> BatchRow answer(Calculation<Q, A> c, Row row) {
-        if (row.line() != null) {
+        if (row.line() != null || row.element() != null) {
+            // An NDJSON line or a JSON array element: read into the request record directly; one that
+            // fails is explained as before, from its tree (the same problems and pointers).
             try {
-                Q request = runner.read(c, mapper.createParser(row.line()));
-                if (request != null) { // a line "null" is answered as a tree: "must be a JSON object"
+                Q request = runner.read(c, row.line() != null ? mapper.createParser(row.line()) : row.element().asParser());
+                if (request != null) { // null is answered as a tree: "must be a JSON object"
                     return answered(c, row, printable(RecordMembers.get(request, ID)), request);
                 }
             } catch (InputProblem | tools.jackson.core.JacksonException unread) {
-                // explained as before: the line's own JSON problem, or the tree's reading of the request
-                String notJson = NdjsonSource.unreadable(mapper, row.line());
-                if (notJson != null) {
+                String notJson = row.line() == null ? null : NdjsonSource.unreadable(mapper, row.line());
+                if (notJson != null) { // a line's own JSON problem (an element's tokens are JSON)
                     return problemRow(row.number(), null, ProblemType.MALFORMED_BODY, notJson,
                             List.of(new FieldError("", notJson)));
                 }
             }
-            row = Row.of(row.number(), mapper.readTree(row.line()));
-        } else if (row.element() != null) {
-            try {
-                Q request = runner.read(c, row.element().asParser());
-                if (request != null) { // an element null is answered as a tree: "must be a JSON object"
-                    return answered(c, row, printable(RecordMembers.get(request, ID)), request);
-                }
-            } catch (InputProblem | tools.jackson.core.JacksonException unread) {
-                // explained from the element's tree, as before: the same problems and pointers
-            }
-            row = Row.of(row.number(), (JsonNode) mapper.readTree(row.element().asParser()));
+            row = Row.of(row.number(), row.line() != null ? mapper.readTree(row.line())
+                    : (JsonNode) mapper.readTree(row.element().asParser()));
         }
         JsonNode body = row.body();
         String id = row.id() != null ? row.id() : body != null && body.path(ID).isString()

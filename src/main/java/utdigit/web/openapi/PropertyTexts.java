@@ -16,6 +16,7 @@ import org.springframework.stereotype.Component;
 import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.dataformat.yaml.YAMLMapper;
+import utdigit.web.units.Mirrors;
 
 /**
  * Gives every property of the document's component schemas that its record does not describe
@@ -163,8 +164,8 @@ class PropertyTexts implements OpenApiCustomizer {
             return null;
         }
         String text = mmText.substring(0, at) + (speed ? ", in/s" : ", in") + mmText.substring(at + unitMm.length());
-        text = text.replace("<= 100000", speed ? "at most 3937 in/s" : "at most 100 m")
-                .replace("0 to 100000", "0 to 100 m");
+        text = text.replace("<= " + Mirrors.MAX_MM, speed ? "at most 3937 in/s" : "at most 100 m")
+                .replace("0 to " + Mirrors.MAX_MM, "0 to 100 m");
         Matcher names = Pattern.compile("\\b(" + Pattern.quote(mmName) + "|" + Pattern.quote(inchName) + ")\\b")
                 .matcher(text);
         return names.replaceAll(m -> m.group(1).equals(mmName) ? inchName : mmName);

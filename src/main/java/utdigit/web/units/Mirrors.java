@@ -258,26 +258,33 @@ public final class Mirrors {
         }
         // Each pattern runs only where the text holds what any match of it must contain (the regular
         // expressions were 30 % of a sheet batch's CPU, src/docs/performance.md): the same text out.
-        String out = !unitAfterDigit(message, " mm/s") ? message
-                : replace(SPEED_WITH_UNIT, message, m -> m.group() + " (" + inches(m.group(1)) + " in/s)");
-        out = !unitAfterDigit(out, " mm") ? out
-                : replace(LENGTH_WITH_UNIT, out, m -> m.group() + " (" + inches(m.group(1)) + " in)");
-        out = !numberAfterName(out, "_mm_per_s ") ? out
-                : replace(NAMED_SPEED, out, m -> m.group() + " (" + inches(m.group(2)) + " in/s)");
-        return !numberAfterName(out, "_mm ") ? out
-                : replace(NAMED_LENGTH, out, m -> m.group() + " (" + inches(m.group(2)) + " in)");
+        String out = message;
+        for (Rewrite r : REWRITES) {
+            if (r.mayMatch().test(out)) {
+                out = r.apply(out);
+            }
+        }
+        return out;
     }
 
-    /** {@link #withInches} with every pattern applied to the whole text: the reference its tests compare with. */
-    static String withInchesEveryPattern(String message) {
-        if (message == null || !message.contains("mm")) {
-            return message;
+    /**
+     * One rewrite of {@link #withInches}: its pattern, the group holding the number in mm, the inch
+     * unit written after it, and a test that is true of every text holding a match (cheaper than the
+     * pattern; false means the pattern cannot match).
+     */
+    record Rewrite(java.util.regex.Pattern pattern, int numberGroup, String inchUnit,
+                   java.util.function.Predicate<String> mayMatch) {
+        String apply(String text) {
+            return replace(pattern, text, m -> m.group() + " (" + inches(m.group(numberGroup)) + " " + inchUnit + ")");
         }
-        String out = replace(SPEED_WITH_UNIT, message, m -> m.group() + " (" + inches(m.group(1)) + " in/s)");
-        out = replace(LENGTH_WITH_UNIT, out, m -> m.group() + " (" + inches(m.group(1)) + " in)");
-        out = replace(NAMED_SPEED, out, m -> m.group() + " (" + inches(m.group(2)) + " in/s)");
-        return replace(NAMED_LENGTH, out, m -> m.group() + " (" + inches(m.group(2)) + " in)");
     }
+
+    /** The rewrites, in the order they apply (a speed before a length: "mm/s" also starts with "mm"). */
+    static final java.util.List<Rewrite> REWRITES = java.util.List.of(
+            new Rewrite(SPEED_WITH_UNIT, 1, "in/s", t -> unitAfterDigit(t, " mm/s")),
+            new Rewrite(LENGTH_WITH_UNIT, 1, "in", t -> unitAfterDigit(t, " mm")),
+            new Rewrite(NAMED_SPEED, 2, "in/s", t -> numberAfterName(t, "_mm_per_s ")),
+            new Rewrite(NAMED_LENGTH, 2, "in", t -> numberAfterName(t, "_mm ")));
 
     /** Whether {@code unit} occurs right after a digit: every match of "NUMBER unit" contains that. */
     private static boolean unitAfterDigit(String text, String unit) {
